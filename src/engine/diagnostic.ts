@@ -39,6 +39,8 @@ export interface Diagnostic {
   message: string;
   /** Where in the record the problem is; resolved to line and column by the loader. */
   path?: RecordPath;
+  /** Character offset inside the string value at `path` (a term inside an equation). */
+  offset?: number;
   /** Set by src/records once the path is resolved. */
   file?: string;
   line?: number;
