@@ -22,6 +22,7 @@ export const RULE_IDS = [
   'approximation/invalid',
   'energy/profile',
   'energy/rds-span',
+  'species/unused',
 ] as const;
 
 export type RuleId = (typeof RULE_IDS)[number];

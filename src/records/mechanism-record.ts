@@ -1,79 +1,305 @@
 /**
- * PROVISIONAL hand-written shape of a record (to be replaced by types generated from
- * schemas/mechanism.schema.json with the same names).
+ * GENERATED from schemas/mechanism.schema.json by scripts/generate-record-types.mjs.
+ * Do not edit by hand: change the schema, then run `npm run types`.
+ */
+
+/**
+ * Where the proposal stands: proposed (under discussion), favoured (the group's current best explanation), disfavoured (contradicted but kept for the record) or withdrawn (abandoned).
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Status".
  */
 export type Status = 'proposed' | 'favoured' | 'disfavoured' | 'withdrawn';
+/**
+ * How the species symbols are written: formulas (the default; atoms and charge are checked for balance) or labels (plain names such as A, E, ES; balance is not checked).
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Notation".
+ */
+export type Notation = 'formulas' | 'labels';
+/**
+ * The part a species plays in the overall reaction. A declared role must agree with the derived one; declaring intermediate or catalyst also tells the route finder that the species must cancel.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Role".
+ */
+export type Role =
+  'reactant' | 'product' | 'intermediate' | 'catalyst' | 'inhibitor' | 'third_body' | 'solvent';
+/**
+ * How to derive the rate law: rds (rate-determining step with fast pre-equilibria), steady_state (Bodenstein approximation for every intermediate), both, or auto (rds when a step is marked rds, otherwise steady state).
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Approximation".
+ */
 export type Approximation = 'auto' | 'rds' | 'steady_state' | 'both';
-export type Role = 'reactant' | 'product' | 'intermediate' | 'catalyst' | 'inhibitor' | 'third_body' | 'solvent';
-
-/** A quantity as written: "1.1e-2 M^-1 s^-1", "56 kJ/mol", "0.98 ± 0.05"; bare numbers are dimensionless. */
+/**
+ * A quantity as written: a number, an optional uncertainty (± u or +/- u) and a unit, e.g. 1.1e-2 M^-1 s^-1, 56 kJ/mol, 298.15 K, 0.98 ± 0.05. A bare number is dimensionless.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "QuantityText".
+ */
 export type QuantityText = string | number;
+/**
+ * An identifier made of lower-case letters, digits and single hyphens, e.g. peroxide-disproportionation.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Slug".
+ */
+export type Slug = string;
+/**
+ * A species symbol as written in the equations (a formula such as H2O2, I-, [Co(NH3)6]3+, or a label such as ES); no spaces.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "SpeciesSymbol".
+ */
+export type SpeciesSymbol = string;
+/**
+ * A short name for a step, used in its rate constants k_label, k_-label and K_label: letters, digits and underscores, e.g. 1, 2a, ox.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "StepLabel".
+ */
+export type StepLabel = string;
+/**
+ * A Digital Object Identifier without the https://doi.org/ prefix, e.g. 10.1000/xyz123.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Doi".
+ */
+export type Doi = string;
 
+/**
+ * One proposed reaction mechanism: a sequence of elementary steps, with the measurements it should explain. The file name (without .yaml) is the record's id.
+ */
 export interface MechanismRecord {
+  /**
+   * A short title for the proposal, shown as the heading of its page, e.g. "Two-step halide route for the peroxide disproportionation".
+   */
   title: string;
-  system: string;
+  /**
+   * The reaction system this proposal explains. Rival proposals for the same overall change share one system name, so their pages can be compared side by side.
+   */
+  system: Slug;
   status: Status;
-  notation?: 'formulas' | 'labels';
+  notation?: Notation;
+  /**
+   * Free keywords for search, e.g. aqueous, halide, enzyme.
+   */
   tags?: string[];
+  /**
+   * Who proposed or recorded this mechanism: the group's usual handles or names.
+   */
   contributors?: string[];
+  /**
+   * The date the record was added to the catalogue, written YYYY-MM-DD (used for "recently added").
+   */
   added?: string;
-  species?: Record<string, SpeciesEntry>;
+  /**
+   * Optional details about species, keyed by the symbol used in the equations. Symbols not listed here are read from the equations themselves.
+   */
+  species?: {
+    [k: string]: SpeciesEntry;
+  };
+  /**
+   * The elementary steps, in the order they occur. Each step is one molecular event.
+   *
+   * @minItems 1
+   */
   steps: StepEntry[];
   approximation?: Approximation;
   energy?: EnergySettings;
+  /**
+   * Kinetic measurements this mechanism should explain: observed orders, rates and the conditions they were measured at.
+   */
   observations?: Observation[];
+  /**
+   * Literature and notebooks supporting or contradicting the proposal.
+   */
   references?: Reference[];
+  /**
+   * Discussion in Markdown; $...$ encloses LaTeX math. Rendered sanitised on the mechanism's page.
+   */
   notes?: string;
 }
-
+/**
+ * Identity and behaviour of one species.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "SpeciesEntry".
+ */
 export interface SpeciesEntry {
+  /**
+   * The species' common name, e.g. hydrogen peroxide.
+   */
   name?: string;
+  /**
+   * The composition when the symbol is not itself a formula (e.g. symbol Cat, formula C10H12N2). null: no composition, so balance is not checked for the steps it takes part in.
+   */
   formula?: string | null;
+  /**
+   * Other names the species is known by, for search.
+   */
   aliases?: string[];
+  /**
+   * The standard InChI, starting with InChI=.
+   */
   inchi?: string;
+  /**
+   * A SMILES string for the species.
+   */
   smiles?: string;
   role?: Role;
+  /**
+   * true: the solvent, present in large excess at constant concentration; absorbed into the rate constants but kept in the overall equation.
+   */
   solvent?: boolean;
+  /**
+   * true: a collision partner (often written M) that appears on both sides of a step and only carries away energy.
+   */
   third_body?: boolean;
+  /**
+   * true: its free concentration is held constant (a buffer, or a large excess), so it has no conservation relation but stays in the rate law.
+   */
   buffered?: boolean;
 }
-
+/**
+ * One elementary step.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "StepEntry".
+ */
 export interface StepEntry {
+  /**
+   * The step as an equation: terms joined by " + " (spaces around the plus), '->' for a one-way step, '<=>' for a reversible one (→ and ⇌ are also read), e.g. H2O2 + I- -> H2O + IO-.
+   */
   equation: string;
-  label?: string;
+  /**
+   * A name for the step's rate constants (k_label, k_-label, K_label). Defaults to the step's position, counting from 1.
+   */
+  label?: StepLabel;
+  /**
+   * true: this is the rate-determining step. At most one step may be marked.
+   */
   rds?: boolean;
+  /**
+   * The step's stoichiometric number: how many times it occurs per overall reaction (0: off the route). Derived when absent.
+   */
   times?: number;
+  /**
+   * The forward rate constant with units, e.g. 1.1e-2 M^-1 s^-1.
+   */
   k?: QuantityText;
+  /**
+   * The reverse rate constant of a reversible step, with units.
+   */
   k_rev?: QuantityText;
+  /**
+   * The equilibrium constant of a reversible step (forward over reverse), with units where it has them.
+   */
   K?: QuantityText;
   energy?: StepEnergy;
+  /**
+   * A remark about this step, shown beside it.
+   */
   note?: string;
 }
-
+/**
+ * Energies of the step measured from its starting state, on the basis set under the record's energy settings (Gibbs energy by default).
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "StepEnergy".
+ */
 export interface StepEnergy {
+  /**
+   * The activation energy from the step's reactants to its transition state, e.g. 56 kJ/mol.
+   */
   barrier?: QuantityText;
+  /**
+   * The reaction energy of the step, products minus reactants, e.g. -40 kJ/mol.
+   */
   change?: QuantityText;
 }
-
+/**
+ * How the step energies are to be read.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "EnergySettings".
+ */
 export interface EnergySettings {
+  /**
+   * Which energy the steps give: G (Gibbs energy, the default), H (enthalpy) or E (electronic energy).
+   */
   basis?: 'G' | 'H' | 'E';
+  /**
+   * The standard state the energies refer to, e.g. 1 M or 1 bar.
+   */
   standard_state?: QuantityText;
+  /**
+   * The temperature the energies refer to, e.g. 298.15 K.
+   */
   T?: QuantityText;
 }
-
+/**
+ * One kinetic measurement and its conditions.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Observation".
+ */
 export interface Observation {
-  id: string;
+  /**
+   * A short name for the measurement, unique within the record, e.g. initial-rates-2026-03.
+   */
+  id: Slug;
+  /**
+   * Where the data are: a notebook page or a DOI, e.g. notebook 14, p. 32.
+   */
   source?: string;
+  /**
+   * The temperature of the measurement, e.g. 298.15 K.
+   */
   T?: QuantityText;
-  concentrations?: Record<string, QuantityText>;
-  orders?: Record<string, QuantityText>;
+  /**
+   * Starting concentrations by species symbol, e.g. { H2O2: 0.10 M, I-: 0.010 M }.
+   */
+  concentrations?: {
+    [k: string]: QuantityText;
+  };
+  /**
+   * Observed reaction orders by species symbol, with uncertainty where known, e.g. { H2O2: 1.0 ± 0.1 }. Without one, ± 0.1 is assumed.
+   */
+  orders?: {
+    [k: string]: QuantityText;
+  };
+  /**
+   * The observed rate at these conditions, with units, e.g. 3.3e-5 M s^-1.
+   */
   rate?: QuantityText;
+  /**
+   * A remark about the measurement.
+   */
   note?: string;
 }
-
+/**
+ * A source supporting or contradicting the proposal; give at least a DOI, a URL or a citation.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "Reference".
+ */
 export interface Reference {
-  doi?: string;
+  /**
+   * The DOI of the paper, without the https://doi.org/ prefix.
+   */
+  doi?: Doi;
+  /**
+   * A web address for the source.
+   */
   url?: string;
+  /**
+   * A citation as text, e.g. Author, Journal volume (year) first page.
+   */
   citation?: string;
+  /**
+   * What the source supports or contradicts.
+   */
   note?: string;
 }

@@ -1,0 +1,75 @@
+/** The `mechatlas` command: parses the command line and dispatches; exit 0 ok, 1 errors found, 2 bad usage. */
+import { parseArgs } from 'node:util';
+import { buildCommand } from './build-command.ts';
+import { checkCommand } from './check-command.ts';
+import { deriveCommand } from './derive-command.ts';
+import { newCommand } from './new-command.ts';
+import { processOutput, UsageError, type Output } from './output.ts';
+import { toolVersion } from './version.ts';
+
+const USAGE = `usage: mechatlas <command> [options]
+
+commands:
+  check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]
+                      check records (default folder content/mechanisms)
+  derive FILE         print one record's derivation step by step
+  new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
+  build [--content DIR] [--out DIR]
+                      build the catalogue from a folder of records
+
+options:
+  -h, --help          this text
+  -v, --version       the version
+`;
+
+/** Runs the command line and returns the exit code. */
+export async function main(argv: readonly string[], out: Output = processOutput): Promise<number> {
+  try {
+    return await dispatch(argv, out);
+  } catch (error) {
+    if (error instanceof UsageError || isParseArgsError(error)) {
+      out.stderr(`mechatlas: ${(error as Error).message}\n\n${USAGE}`);
+      return 2;
+    }
+    throw error;
+  }
+}
+
+async function dispatch(argv: readonly string[], out: Output): Promise<number> {
+  const [command, ...rest] = argv;
+  if (command === undefined || command === '-h' || command === '--help' || command === 'help') {
+    out.stdout(USAGE);
+    return command === undefined ? 2 : 0;
+  }
+  if (command === '-v' || command === '--version') {
+    out.stdout(`${toolVersion()}\n`);
+    return 0;
+  }
+  switch (command) {
+    case 'check': {
+      const { values, positionals } = parseArgs({ args: rest, allowPositionals: true, options: { format: { type: 'string', default: 'text' }, base: { type: 'string' } } });
+      return checkCommand({ targets: positionals, format: values.format, ...(values.base !== undefined && { base: values.base }) }, out);
+    }
+    case 'derive': {
+      const { positionals } = parseArgs({ args: rest, allowPositionals: true, options: {} });
+      if (positionals.length !== 1) throw new UsageError('derive takes exactly one record file');
+      return deriveCommand(positionals[0]!, out);
+    }
+    case 'new': {
+      const { values, positionals } = parseArgs({ args: rest, allowPositionals: true, options: { dir: { type: 'string', default: 'content/mechanisms' } } });
+      if (positionals.length !== 1) throw new UsageError('new takes exactly one record id');
+      return newCommand(positionals[0]!, values.dir, out);
+    }
+    case 'build': {
+      const { values } = parseArgs({ args: rest, allowPositionals: false, options: { content: { type: 'string', default: 'content/mechanisms' }, out: { type: 'string', default: 'dist' } } });
+      return buildCommand({ content: values.content, out: values.out }, out);
+    }
+    default:
+      throw new UsageError(`unknown command '${command}'`);
+  }
+}
+
+function isParseArgsError(error: unknown): boolean {
+  const code = (error as { code?: unknown } | null)?.code;
+  return typeof code === 'string' && code.startsWith('ERR_PARSE_ARGS');
+}

@@ -1,0 +1,24 @@
+/** The text reporter: one row per diagnostic, sorted by file, line and column, then a summary line. */
+import type { CatalogueReport } from './catalogue-report.ts';
+import type { DiagnosticJson } from './record-report.ts';
+
+/** Renders the report for a terminal. */
+export function textReport(report: CatalogueReport): string {
+  const rows = report.records.flatMap((r) => r.diagnostics.map((d) => ({ ...d, file: d.file ?? r.file })));
+  rows.sort(byPosition);
+  const lines = rows.map((d) => [`${d.file}:${d.line ?? 1}:${d.column ?? 1}`, d.severity, d.message, d.rule].join('  '));
+  lines.push(summaryLine(report));
+  return lines.join('\n') + '\n';
+}
+
+/** "12 records checked: 1 error, 2 warnings, 3 notes". */
+export function summaryLine(report: CatalogueReport): string {
+  const { records, errors, warnings, notes } = report.summary;
+  const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+  return `${plural(records, 'record')} checked: ${plural(errors, 'error')}, ${plural(warnings, 'warning')}, ${plural(notes, 'note')}`;
+}
+
+/** Orders diagnostics by file, then line, then column. */
+export function byPosition(a: DiagnosticJson, b: DiagnosticJson): number {
+  return (a.file ?? '').localeCompare(b.file ?? '') || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0);
+}

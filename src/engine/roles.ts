@@ -1,0 +1,76 @@
+/**
+ * Roles of species (DESIGN.md item 3), derived from the route: net consumed → reactant,
+ * net formed → product, net zero → intermediate (formed first) or catalyst (consumed first).
+ * A solvent keeps its stoichiometry but is named as such; a species on both sides of every
+ * step it takes part in is a third body. Declared roles are checked against the derived ones.
+ */
+import type { Role } from '../records/mechanism-record.ts';
+import { diagnostic, type Diagnostic } from './diagnostic.ts';
+import type { Mechanism } from './mechanism.ts';
+import { netOverRoute } from './overall-equation.ts';
+
+const NET_ZERO_KINDS: ReadonlySet<Role> = new Set(['intermediate', 'catalyst', 'inhibitor']);
+
+/** Derives the role of every species; `offRoute` lists net-zero species that only occur in steps with σ = 0. */
+export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { roles: Map<string, Role>; offRoute: Set<string>; diagnostics: Diagnostic[] } {
+  const net = netOverRoute(mechanism, sigma);
+  const roles = new Map<string, Role>();
+  const offRoute = new Set<string>();
+  for (const [symbol, species] of mechanism.species) {
+    const n = net.get(symbol)!;
+    const firstOnRoute = firstChange(mechanism, symbol, (i) => (sigma[i] ?? 0) > 0);
+    const firstAnywhere = firstChange(mechanism, symbol, () => true);
+    let role: Role;
+    if (species.solvent) role = 'solvent';
+    else if (species.thirdBody || (firstAnywhere === 0 && appearsInSteps(mechanism, symbol))) role = 'third_body';
+    else if (n.sign() < 0) role = 'reactant';
+    else if (n.sign() > 0) role = 'product';
+    else {
+      const first = firstOnRoute || firstAnywhere;
+      if (firstOnRoute === 0) offRoute.add(symbol);
+      role = first > 0 ? 'intermediate' : 'catalyst';
+      // The record decides between the net-zero kinds; the step order is only a convention.
+      if (species.declaredRole && NET_ZERO_KINDS.has(species.declaredRole)) role = species.declaredRole;
+    }
+    roles.set(symbol, role);
+  }
+  return { roles, offRoute, diagnostics: declaredMismatches(mechanism, roles) };
+}
+
+/** Sign of the first non-zero change of a species over the steps that pass the filter, in record order. */
+function firstChange(mechanism: Mechanism, symbol: string, include: (index: number) => boolean): number {
+  for (const step of mechanism.steps) {
+    if (!include(step.index)) continue;
+    const v = step.change.get(symbol);
+    if (v) return v.sign();
+  }
+  return 0;
+}
+
+function appearsInSteps(mechanism: Mechanism, symbol: string): boolean {
+  return mechanism.steps.some((s) => [...s.reactants, ...s.products].some((t) => t.species === symbol));
+}
+
+function declaredMismatches(mechanism: Mechanism, roles: Map<string, Role>): Diagnostic[] {
+  const out: Diagnostic[] = [];
+  for (const [symbol, species] of mechanism.species) {
+    const declared = species.declaredRole;
+    const derived = roles.get(symbol)!;
+    if (!declared || declared === derived) continue;
+    // An inhibitor is confirmed only by a negative order in the rate law, after the roles.
+    if (declared === 'inhibitor' && NET_ZERO_KINDS.has(derived)) continue;
+    out.push(
+      diagnostic('roles/declared-mismatch', 'error', `${symbol} is declared ${article(declared)} but the steps make it ${article(derived)}`, {
+        path: ['species', symbol, 'role'],
+        actual: derived,
+        expected: declared,
+      }),
+    );
+  }
+  return out;
+}
+
+function article(role: Role): string {
+  const word = role.replace('_', ' ');
+  return /^[aeiou]/.test(word) ? `an ${word}` : `a ${word}`;
+}

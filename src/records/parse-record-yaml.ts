@@ -1,0 +1,120 @@
+/**
+ * Reads a record's YAML text into plain data, keeping the document (with ranges) for positions.
+ * Nothing here throws: YAML problems become `record/yaml` diagnostics with line and column.
+ */
+import { LineCounter, isAlias, parseDocument, visit } from 'yaml';
+import type { Alias, Document, YAMLError } from 'yaml';
+import { diagnostic } from '../engine/diagnostic.ts';
+import type { Diagnostic } from '../engine/diagnostic.ts';
+import { createLocator, keyText } from './source-positions.ts';
+import type { RecordLocator } from './source-positions.ts';
+
+/** The limit on alias expansion: records never need many, and a "billion laughs" file needs more. */
+export const MAX_ALIAS_COUNT = 100;
+
+/** A parsed record source: the document, a locator over it and, when it parsed, the data. */
+export interface ParsedYaml {
+  doc: Document.Parsed;
+  locator: RecordLocator;
+  /** Present only when the YAML had no errors. */
+  data?: unknown;
+  diagnostics: Diagnostic[];
+}
+
+const FRIENDLY: Partial<Record<YAMLError['code'], (text: string) => string>> = {
+  DUPLICATE_KEY: (key) => `the field '${key}' appears twice in the same mapping`,
+  TAB_AS_INDENT: () => 'tabs cannot indent YAML; indent with spaces',
+  MULTIPLE_DOCS: () =>
+    'the file holds more than one YAML document (a --- line); a record is one document',
+  BAD_INDENT: () => 'the indentation is inconsistent here (or a bracket or quote is not closed)',
+  BLOCK_AS_IMPLICIT_KEY: () =>
+    'the indentation is inconsistent here: a nested field is indented under a value',
+  MULTILINE_IMPLICIT_KEY: () =>
+    'a field name must fit on one line (is a colon or indentation missing?)',
+  TAG_RESOLVE_FAILED: (tag) =>
+    `the YAML tag ${tag} is not understood; the value is read as plain text`,
+};
+
+function lowerFirst(text: string): string {
+  return text.charAt(0).toLowerCase() + text.slice(1);
+}
+
+function yamlDiagnostic(problem: YAMLError, source: string, locator: RecordLocator): Diagnostic {
+  const [start, end] = problem.pos;
+  const text = source.slice(start, end).trim();
+  const friendly = FRIENDLY[problem.code];
+  const message = friendly === undefined ? lowerFirst(problem.message) : friendly(text);
+  const severity = problem.name === 'YAMLWarning' ? 'warning' : 'error';
+  const { line, column } = locator.span(start, end);
+  return diagnostic('record/yaml', severity, message, { line, column, actual: problem.code });
+}
+
+/**
+ * Aliases that name no earlier anchor, or sit inside the collection they name (which would make
+ * the data circular), are reported here, because `toJS` would throw or never finish on them.
+ */
+function aliasProblems(
+  doc: Document.Parsed,
+  locator: RecordLocator,
+): { aliases: Alias[]; diagnostics: Diagnostic[] } {
+  const anchors = new Set<string>();
+  const aliases: Alias[] = [];
+  const diagnostics: Diagnostic[] = [];
+  const report = (node: Alias, message: string): void => {
+    const range = node.range ?? [0, 0];
+    const { line, column } = locator.span(range[0], range[1]);
+    diagnostics.push(
+      diagnostic('record/yaml', 'error', message, { line, column, actual: `*${node.source}` }),
+    );
+  };
+  const names = (outer: unknown, name: string): boolean =>
+    typeof outer === 'object' && outer !== null && 'anchor' in outer && outer.anchor === name;
+  visit(doc, {
+    Node(_key, node, path) {
+      if (!isAlias(node)) {
+        if (node.anchor !== undefined) anchors.add(node.anchor);
+        return;
+      }
+      aliases.push(node);
+      const name = node.source;
+      if (!anchors.has(name)) report(node, `the alias *${name} has no anchor &${name} before it`);
+      else if (path.some((outer) => names(outer, name))) {
+        report(node, `the alias *${name} is inside the value it refers to`);
+      }
+    },
+  });
+  return { aliases, diagnostics };
+}
+
+/** Parses YAML source; duplicate keys, unknown tags and alias bombs are diagnostics, not exceptions. */
+export function parseRecordYaml(source: string): ParsedYaml {
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(source, {
+    lineCounter,
+    prettyErrors: false,
+    // `1:` and `'1':` are different YAML keys but the same field once read; treat them as duplicates.
+    uniqueKeys: (a, b) => keyText(a) === keyText(b),
+    logLevel: 'error',
+  });
+  const locator = createLocator(doc, lineCounter, source);
+  const problems = [...doc.errors, ...doc.warnings];
+  const diagnostics = problems.map((problem) => yamlDiagnostic(problem, source, locator));
+  const { aliases, diagnostics: aliasDiagnostics } = aliasProblems(doc, locator);
+  diagnostics.push(...aliasDiagnostics);
+  if (diagnostics.some((d) => d.severity === 'error')) return { doc, locator, diagnostics };
+  try {
+    const data: unknown = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+    return { doc, locator, data, diagnostics };
+  } catch (error) {
+    // yaml does not say which alias overflowed; the first one is where the expansion starts.
+    const first = aliases[0]?.range ?? [0, 0];
+    const { line, column } = locator.span(first[0], first[1]);
+    const excessive = error instanceof ReferenceError && /alias/i.test(error.message);
+    const message = excessive
+      ? `aliases expand to too many values (more than ${MAX_ALIAS_COUNT}); a record never needs this many`
+      : `the YAML could not be read: ${lowerFirst(error instanceof Error ? error.message : String(error))}`;
+    diagnostics.push(diagnostic('record/yaml', 'error', message, { line, column }));
+    return { doc, locator, diagnostics };
+  }
+}
+
