@@ -27,6 +27,7 @@ title: A short name for this proposal
 system: the-overall-reaction        # rival proposals share this
 status: proposed                    # proposed | favoured | disfavoured | withdrawn
 added: ${today}
+notation: labels                    # or formulas: every symbol a chemical formula, balance checked
 tags: []
 contributors: []
 species:

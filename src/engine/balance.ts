@@ -12,8 +12,8 @@ export function checkBalance(mechanism: Mechanism): Diagnostic[] {
 
 function checkStepBalance(mechanism: Mechanism, step: Step): Diagnostic[] {
   const path = ['steps', step.index, 'equation'];
-  const symbols = [...new Set([...step.reactants, ...step.products].map((t) => t.species))];
-  const unknown = symbols.filter((s) => !mechanism.species.get(s)?.composition);
+  // A species without composition that nets to nothing in the step (a third body) does not hide an imbalance.
+  const unknown = [...step.change.keys()].filter((s) => !mechanism.species.get(s)?.composition);
   if (unknown.length > 0) {
     if (mechanism.notation === 'labels') return [];
     return [
@@ -25,7 +25,8 @@ function checkStepBalance(mechanism: Mechanism, step: Step): Diagnostic[] {
   let rightCharge = 0;
   for (const [side, terms] of [['left', step.reactants], ['right', step.products]] as const) {
     for (const term of terms) {
-      const composition = mechanism.species.get(term.species)!.composition!;
+      const composition = mechanism.species.get(term.species)!.composition;
+      if (!composition) continue;
       const n = term.coefficient.toNumber();
       for (const [element, count] of composition.elements) {
         const entry = atoms.get(element) ?? { left: 0, right: 0 };

@@ -105,7 +105,9 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
 }
 
 function compositionOf(symbol: string, entry: SpeciesEntry | undefined, notation: 'formulas' | 'labels') {
-  if (entry?.formula === null) return {};
+  // A collision partner stands for any molecule of the bath; it has a composition only when given.
+  const thirdBody = entry?.third_body === true || entry?.role === 'third_body';
+  if (entry?.formula === null || (thirdBody && entry?.formula === undefined)) return {};
   const text = entry?.formula ?? (notation === 'formulas' ? symbol : undefined);
   if (text === undefined) return {};
   const parsed = parseFormula(text);

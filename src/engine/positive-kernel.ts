@@ -30,6 +30,14 @@ export function positiveKernel(matrix: Matrix, columns: number): PositiveKernel 
   return covered.size === columns ? { kind: 'family', rays } : { kind: 'none' };
 }
 
+/** True when some x ≥ 0, not all zero, solves M x = 0 (a set of steps that together change nothing). */
+export function hasNonNegativeKernel(matrix: Matrix, columns: number): boolean {
+  const basis = nullSpace(matrix, columns);
+  if (basis.length === 0) return false;
+  if (basis.length === 1) return orientPositive(primitiveIntegerVector(basis[0]!)) !== undefined;
+  return extremeRays(basis, columns).length > 0;
+}
+
 /** All non-negative extreme rays of the span of a kernel basis (in coordinates of the columns). */
 export function extremeRays(basis: readonly Rational[][], columns: number): bigint[][] {
   const d = basis.length;

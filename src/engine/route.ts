@@ -4,7 +4,7 @@
  * DESIGN.md item 2, searching supports (sets of steps) and the species each route cancels.
  */
 import { diagnostic, type Diagnostic } from './diagnostic.ts';
-import { positiveKernel } from './positive-kernel.ts';
+import { hasNonNegativeKernel, positiveKernel } from './positive-kernel.ts';
 import { Rational } from './rational.ts';
 
 export interface RouteStep {
@@ -87,7 +87,7 @@ function searchSupports(steps: readonly RouteStep[], columns: Column[], mustCanc
     const species = [...new Set(support.flatMap((c) => [...columns[c]!.change.keys()]))];
     const matrixFor = (rows: string[]) => rows.map((sp) => support.map((c) => columns[c]!.change.get(sp) ?? Rational.ZERO));
     // A set of steps that together change nothing (a step and its reverse, initiation plus termination) is never part of a route.
-    if (positiveKernel(matrixFor(species), support.length).kind !== 'none') continue;
+    if (hasNonNegativeKernel(matrixFor(species), support.length)) continue;
     const signs = (sp: string) => new Set(support.map((c) => columns[c]!.change.get(sp)?.sign() ?? 0));
     const twoWay = species.filter((sp) => signs(sp).has(1) && signs(sp).has(-1));
     if ([...mustCancel].some((sp) => species.includes(sp) && !twoWay.includes(sp))) continue;
@@ -180,8 +180,8 @@ function chooseRoute(routes: Candidate[], families: { intermediates: number; can
   const better = families.filter((f) => !best || f.intermediates > best.intermediates || (f.intermediates === best.intermediates && f.cancelled > best.cancelled));
   const ties = best ? ranked.filter((c) => compareCandidates(c, best) === 0) : [];
   if (best && better.length === 0 && ties.length === 1) return { numbers: best.sigma.map(Number), source: 'derived', diagnostics: [] };
-  const alternatives = [...ties.map((c) => c.sigma), ...better.flatMap((f) => f.rays)].slice(0, 4);
-  const listed = alternatives.map((a) => `[${a.join(', ')}]`).join(' or ');
+  const alternatives = [...new Set([...ties.map((c) => c.sigma), ...better.flatMap((f) => f.rays)].map((a) => `[${a.join(', ')}]`))];
+  const listed = alternatives.slice(0, 4).join(' or ');
   return failed(
     diagnostic('route/ambiguous', 'error', `the steps allow several independent routes (${listed}); say which with times on each step`, {
       path: ['steps'],

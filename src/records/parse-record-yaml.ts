@@ -2,7 +2,7 @@
  * Reads a record's YAML text into plain data, keeping the document (with ranges) for positions.
  * Nothing here throws: YAML problems become `record/yaml` diagnostics with line and column.
  */
-import { LineCounter, isAlias, parseDocument, visit } from 'yaml';
+import { LineCounter, isAlias, isNode, parseDocument, visit } from 'yaml';
 import type { Alias, Document, YAMLError } from 'yaml';
 import { diagnostic } from '../engine/diagnostic.ts';
 import type { Diagnostic } from '../engine/diagnostic.ts';
@@ -39,14 +39,44 @@ function lowerFirst(text: string): string {
   return text.charAt(0).toLowerCase() + text.slice(1);
 }
 
-function yamlDiagnostic(problem: YAMLError, source: string, locator: RecordLocator): Diagnostic {
+interface Pointed {
+  text: string;
+  start: number;
+  end: number;
+}
+
+/** What yaml's error points at; for a duplicate key, the whole key (yaml marks one character). */
+function pointedAt(doc: Document.Parsed, problem: YAMLError, source: string): Pointed {
   const [start, end] = problem.pos;
-  const text = source.slice(start, end).trim();
-  const friendly = FRIENDLY[problem.code];
-  const message = friendly === undefined ? lowerFirst(problem.message) : friendly(text);
-  const severity = problem.name === 'YAMLWarning' ? 'warning' : 'error';
-  const { line, column } = locator.span(start, end);
-  return diagnostic('record/yaml', severity, message, { line, column, actual: problem.code });
+  let pointed: Pointed = { text: source.slice(start, end).trim(), start, end };
+  if (problem.code !== 'DUPLICATE_KEY') return pointed;
+  visit(doc, {
+    Pair(_key, pair) {
+      if (!isNode(pair.key) || pair.key.range?.[0] !== start) return undefined;
+      pointed = { text: keyText(pair.key), start, end: pair.key.range[1] };
+      return visit.BREAK;
+    },
+  });
+  return pointed;
+}
+
+function yamlDiagnostics(doc: Document.Parsed, source: string, locator: RecordLocator): Diagnostic[] {
+  const diagnostics: Diagnostic[] = [];
+  const linesWithErrors = new Set<number>();
+  for (const problem of [...doc.errors, ...doc.warnings]) {
+    const friendly = FRIENDLY[problem.code];
+    const { text, start, end } = pointedAt(doc, problem, source);
+    const message = friendly === undefined ? lowerFirst(problem.message) : friendly(text);
+    const severity = problem.name === 'YAMLWarning' ? 'warning' : 'error';
+    const position = locator.span(start, end);
+    // One syntax error tends to set off a second on the same line; the first is the one to fix.
+    if (severity === 'error' && linesWithErrors.has(position.line)) continue;
+    if (severity === 'error') linesWithErrors.add(position.line);
+    diagnostics.push(
+      diagnostic('record/yaml', severity, message, { ...position, actual: problem.code }),
+    );
+  }
+  return diagnostics;
 }
 
 /**
@@ -62,9 +92,9 @@ function aliasProblems(
   const diagnostics: Diagnostic[] = [];
   const report = (node: Alias, message: string): void => {
     const range = node.range ?? [0, 0];
-    const { line, column } = locator.span(range[0], range[1]);
+    const position = locator.span(range[0], range[1]);
     diagnostics.push(
-      diagnostic('record/yaml', 'error', message, { line, column, actual: `*${node.source}` }),
+      diagnostic('record/yaml', 'error', message, { ...position, actual: `*${node.source}` }),
     );
   };
   const names = (outer: unknown, name: string): boolean =>
@@ -97,8 +127,7 @@ export function parseRecordYaml(source: string): ParsedYaml {
     logLevel: 'error',
   });
   const locator = createLocator(doc, lineCounter, source);
-  const problems = [...doc.errors, ...doc.warnings];
-  const diagnostics = problems.map((problem) => yamlDiagnostic(problem, source, locator));
+  const diagnostics = yamlDiagnostics(doc, source, locator);
   const { aliases, diagnostics: aliasDiagnostics } = aliasProblems(doc, locator);
   diagnostics.push(...aliasDiagnostics);
   if (diagnostics.some((d) => d.severity === 'error')) return { doc, locator, diagnostics };
@@ -108,12 +137,12 @@ export function parseRecordYaml(source: string): ParsedYaml {
   } catch (error) {
     // yaml does not say which alias overflowed; the first one is where the expansion starts.
     const first = aliases[0]?.range ?? [0, 0];
-    const { line, column } = locator.span(first[0], first[1]);
+    const position = locator.span(first[0], first[1]);
     const excessive = error instanceof ReferenceError && /alias/i.test(error.message);
     const message = excessive
       ? `aliases expand to too many values (more than ${MAX_ALIAS_COUNT}); a record never needs this many`
       : `the YAML could not be read: ${lowerFirst(error instanceof Error ? error.message : String(error))}`;
-    diagnostics.push(diagnostic('record/yaml', 'error', message, { line, column }));
+    diagnostics.push(diagnostic('record/yaml', 'error', message, position));
     return { doc, locator, diagnostics };
   }
 }

@@ -30,7 +30,7 @@ export function describeValue(value: unknown): string {
 }
 
 const PATTERNS_BY_TITLE: Readonly<Record<string, string>> = {
-  Slug: 'must use only lower-case letters, digits and single hyphens (e.g. initial-rates-2026)',
+  Slug: 'must use only lower-case letters, digits and single hyphens',
   SpeciesSymbol: 'must not contain spaces',
   StepLabel: 'must use only letters, digits and underscores',
   Doi: 'must be a DOI such as 10.1000/xyz123 (without https://doi.org/)',

@@ -1,22 +1,22 @@
 /**
- * Test helpers: build polynomials and rational functions from readable text. mathjs only parses
- * the text; the arithmetic is ours, so the tables compare our results in two different shapes.
+ * Test helpers: build polynomials and rational functions from readable text. The little parser
+ * below only reads the text; the arithmetic is ours, so the tables compare our results in two
+ * different shapes. (mathjs is kept for the cross-check file: importing it costs most of a second.)
  */
 import fc from 'fast-check';
-import { create, all, type MathNode } from 'mathjs';
 import { Monomial, Polynomial, RationalFunction } from '../../../src/engine/algebra/index.ts';
 import { Rational } from '../../../src/engine/rational.ts';
 
-export const math = create(all!);
+type Node = { num: Rational } | { sym: string } | { op: string; args: Node[] };
 
 /** A polynomial from text such as `2*x^2*y - 3/2*z + k^(1/2)/S`; division only by a single term. */
 export function poly(text: string): Polynomial {
-  return toPolynomial(math.parse(text));
+  return toPolynomial(parse(text));
 }
 
 /** A rational function from text such as `k1*S/(km1 + k2 + k1*S)`. */
 export function rf(text: string): RationalFunction {
-  return toRationalFunction(math.parse(text));
+  return toRationalFunction(parse(text));
 }
 
 /** Shorthand for Rational.of(num, den). */
@@ -24,13 +24,45 @@ export function q(num: number, den = 1): Rational {
   return Rational.of(num, den);
 }
 
-function toPolynomial(node: MathNode): Polynomial {
-  const n = node as MathNode & { op?: string; args?: MathNode[]; name?: string; value?: number; content?: MathNode };
-  if (n.type === 'ParenthesisNode') return toPolynomial(n.content!);
-  if (n.type === 'ConstantNode') return Polynomial.constant(Rational.fromNumber(n.value!));
-  if (n.type === 'SymbolNode') return Polynomial.symbol(n.name!);
-  const [a, b] = (n.args ?? []).map(toPolynomial);
-  if (n.op === '-' && b === undefined) return a!.neg();
+/** Recursive descent over + - * / ^ and parentheses; ^ binds tighter than unary minus on its left. */
+function parse(text: string): Node {
+  const tokens = text.match(/\d+|[A-Za-z_][A-Za-z0-9_]*|[-+*/^()]/g) ?? [];
+  let at = 0;
+  const peek = () => tokens[at];
+  const take = (t?: string) => {
+    if (t !== undefined && tokens[at] !== t) throw new Error(`expected ${t} in ${text}`);
+    return tokens[at++]!;
+  };
+  const expr = (): Node => {
+    let n = term();
+    while (peek() === '+' || peek() === '-') n = { op: take(), args: [n, term()] };
+    return n;
+  };
+  const term = (): Node => {
+    let n = unary();
+    while (peek() === '*' || peek() === '/') n = { op: take(), args: [n, unary()] };
+    return n;
+  };
+  const unary = (): Node => (peek() === '-' ? (take(), { op: 'neg', args: [unary()] }) : power());
+  const power = (): Node => {
+    const base = atom();
+    return peek() === '^' ? (take(), { op: '^', args: [base, unary()] }) : base;
+  };
+  const atom = (): Node => {
+    const t = take();
+    if (t === '(') return ((n) => (take(')'), n))(expr());
+    return /^\d/.test(t) ? { num: Rational.of(BigInt(t)) } : { sym: t };
+  };
+  const n = expr();
+  if (at !== tokens.length) throw new Error(`unread text in ${text}`);
+  return n;
+}
+
+function toPolynomial(n: Node): Polynomial {
+  if ('num' in n) return Polynomial.constant(n.num);
+  if ('sym' in n) return Polynomial.symbol(n.sym);
+  const [a, b] = n.args.map(toPolynomial);
+  if (n.op === 'neg') return a!.neg();
   if (n.op === '+') return a!.add(b!);
   if (n.op === '-') return a!.sub(b!);
   if (n.op === '*') return a!.mul(b!);
@@ -44,20 +76,17 @@ function toPolynomial(node: MathNode): Polynomial {
     if (e.isInteger() && e.sign() >= 0) return a!.pow(Number(e.num));
     if (t && t.coefficient.equals(Rational.ONE)) return Polynomial.term(Rational.ONE, t.monomial.pow(e));
   }
-  throw new Error(`test helper cannot read ${node.toString()} as a polynomial`);
+  throw new Error(`test helper cannot read ${JSON.stringify(n)} as a polynomial`);
 }
 
-function toRationalFunction(node: MathNode): RationalFunction {
-  const n = node as MathNode & { op?: string; args?: MathNode[]; content?: MathNode };
-  if (n.type === 'ParenthesisNode') return toRationalFunction(n.content!);
-  if (n.type !== 'OperatorNode' || n.op === '^') return RationalFunction.of(toPolynomial(node));
-  const [a, b] = (n.args ?? []).map(toRationalFunction);
-  if (n.op === '-' && b === undefined) return a!.neg();
+function toRationalFunction(n: Node): RationalFunction {
+  if (!('op' in n) || n.op === '^') return RationalFunction.of(toPolynomial(n));
+  const [a, b] = n.args.map(toRationalFunction);
+  if (n.op === 'neg') return a!.neg();
   if (n.op === '+') return a!.add(b!);
   if (n.op === '-') return a!.sub(b!);
   if (n.op === '*') return a!.mul(b!);
-  if (n.op === '/') return a!.div(b!);
-  throw new Error(`test helper cannot read ${node.toString()} as a rational function`);
+  return a!.div(b!);
 }
 
 export const SYMBOLS = ['x', 'y', 'z'] as const;

@@ -1,0 +1,33 @@
+/** src/records: record files read with source positions, validated, and errors mapped to lines. */
+export { closestName, editDistance } from './closest-name.ts';
+export { findRecordFiles } from './find-record-files.ts';
+export { loadRecordFile, loadRecordSource } from './load-record.ts';
+export type { LoadedRecord } from './load-record.ts';
+export type {
+  Approximation,
+  Doi,
+  EnergySettings,
+  MechanismRecord,
+  Notation,
+  Observation,
+  QuantityText,
+  Reference,
+  Role,
+  Slug,
+  SpeciesEntry,
+  SpeciesSymbol,
+  Status,
+  StepEnergy,
+  StepEntry,
+  StepLabel,
+} from './mechanism-record.ts';
+export { MAX_ALIAS_COUNT, parseRecordYaml } from './parse-record-yaml.ts';
+export type { ParsedYaml } from './parse-record-yaml.ts';
+export { placeDiagnostics } from './place-diagnostics.ts';
+export { isRecordId, recordId, suggestRecordId } from './record-id.ts';
+export { describeSchemaErrors, pathWords, recordPath } from './schema-messages.ts';
+export type { SchemaProblem } from './schema-messages.ts';
+export { createValidator, recordSchema, recordValidator } from './schema-validator.ts';
+export type { RecordValidator } from './schema-validator.ts';
+export { createLocator, keyText, sourceShift } from './source-positions.ts';
+export type { RecordLocator, SourcePosition } from './source-positions.ts';

@@ -1,0 +1,34 @@
+/**
+ * Rule fixtures that double as documentation: every not-ok record names the rule and line it
+ * must produce (`# expect: rule line N`); every ok record checks without errors.
+ */
+import { readdirSync, readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { checkRecordFile } from '../src/cli/check-records.ts';
+import { readExpectations } from './fixture-expectations.ts';
+
+const dir = (kind: string) => `tests/fixtures/${kind}`;
+const yamlFiles = (kind: string) => readdirSync(dir(kind)).filter((f) => f.endsWith('.yaml'));
+
+describe('not-ok fixtures produce their expected rule and line', () => {
+  for (const name of yamlFiles('not-ok').filter((f) => !f.startsWith('record-'))) {
+    it(name, async () => {
+      const file = `${dir('not-ok')}/${name}`;
+      const expected = readExpectations(readFileSync(file, 'utf8'));
+      expect(expected.length).toBeGreaterThan(0);
+      const { diagnostics } = await checkRecordFile(file);
+      const found = diagnostics.filter((d) => d.severity !== 'info').map((d) => ({ rule: d.rule, line: d.line }));
+      expect(found).toEqual(expect.arrayContaining(expected));
+      expect(found).toHaveLength(expected.length);
+    });
+  }
+});
+
+describe('ok fixtures check without errors', () => {
+  for (const name of yamlFiles('ok')) {
+    it(name, async () => {
+      const { diagnostics } = await checkRecordFile(`${dir('ok')}/${name}`);
+      expect(diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    });
+  }
+});
