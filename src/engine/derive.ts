@@ -5,13 +5,15 @@
  */
 import type { MechanismRecord, Role } from '../records/mechanism-record.ts';
 import { checkBalance } from './balance.ts';
-import type { Diagnostic } from './diagnostic.ts';
+import { diagnostic, type Diagnostic } from './diagnostic.ts';
 import { buildMechanism, type Mechanism } from './mechanism.ts';
 import { checkMolecularity } from './molecularity.ts';
 import { overallEquation, type OverallEquation } from './overall-equation.ts';
 import { deriveRoles } from './roles.ts';
 import { stoichiometricNumbers } from './route.ts';
-import { checkStepUnits } from './step-units.ts';
+import type { ObservationCheck } from './observations.ts';
+import { deriveRateLaws, type DerivedRateLaw } from './rate-law/derive-rate-laws.ts';
+import { readStepConstants } from './step-units.ts';
 
 export interface Derivation {
   mechanism?: Mechanism;
@@ -24,6 +26,8 @@ export interface Derivation {
   offRoute?: Set<string>;
   /** species whose free concentration is held constant */
   buffered: string[];
+  rateLaws?: DerivedRateLaw[];
+  observations?: ObservationCheck[];
   diagnostics: Diagnostic[];
 }
 
@@ -34,7 +38,8 @@ export function deriveMechanism(record: MechanismRecord): Derivation {
   const mechanism = built.mechanism;
   if (!mechanism) return { buffered: [], diagnostics };
   const buffered = [...mechanism.species.values()].filter((s) => s.buffered).map((s) => s.symbol);
-  diagnostics.push(...checkBalance(mechanism), ...checkMolecularity(mechanism), ...checkStepUnits(record, mechanism));
+  const constants = readStepConstants(record, mechanism);
+  diagnostics.push(...checkBalance(mechanism), ...checkMolecularity(mechanism), ...constants.diagnostics);
 
   const mustCancel = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate' || s.declaredRole === 'catalyst').map((s) => s.symbol));
   const route = stoichiometricNumbers(mechanism.steps, mustCancel);
@@ -44,15 +49,34 @@ export function deriveMechanism(record: MechanismRecord): Derivation {
 
   const { roles, offRoute, diagnostics: roleDiagnostics } = deriveRoles(mechanism, sigma);
   diagnostics.push(...roleDiagnostics);
-  const catalysts = [...roles].filter(([, r]) => r === 'catalyst').map(([sp]) => sp);
+  // Only catalysts on the route go over the arrow; a binder off the route (an inhibitor) does not.
+  const catalysts = [...roles].filter(([sp, r]) => r === 'catalyst' && !offRoute.has(sp)).map(([sp]) => sp);
+  const rates = deriveRateLaws(record, mechanism, sigma, roles, offRoute, constants.constants);
+  diagnostics.push(...rates.diagnostics, ...inhibitorMismatches(mechanism, rates.roles, rates.rateLaws.length > 0));
   return {
     mechanism,
     stoichiometricNumbers: sigma,
     routeSource: route.source === 'given' ? 'given' : 'derived',
     overall: overallEquation(mechanism, sigma, catalysts),
-    roles,
+    roles: rates.roles,
     offRoute,
     buffered,
+    rateLaws: rates.rateLaws,
+    observations: rates.observations,
     diagnostics,
   };
+}
+
+/** A declared inhibitor must show a negative order once a rate law exists. */
+function inhibitorMismatches(mechanism: Mechanism, roles: ReadonlyMap<string, Role>, haveRateLaw: boolean): Diagnostic[] {
+  if (!haveRateLaw) return [];
+  return [...mechanism.species.values()]
+    .filter((s) => s.declaredRole === 'inhibitor' && roles.get(s.symbol) !== 'inhibitor')
+    .map((s) =>
+      diagnostic('roles/declared-mismatch', 'error', `${s.symbol} is declared an inhibitor but has no negative order in the rate law`, {
+        path: ['species', s.symbol, 'role'],
+        actual: roles.get(s.symbol),
+        expected: 'inhibitor',
+      }),
+    );
 }

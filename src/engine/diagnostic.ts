@@ -23,6 +23,9 @@ export const RULE_IDS = [
   'energy/profile',
   'energy/rds-span',
   'species/unused',
+  'step/rds',
+  'observation/units',
+  'observation/species',
 ] as const;
 
 export type RuleId = (typeof RULE_IDS)[number];

@@ -30,7 +30,7 @@ export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { r
       if (firstOnRoute === 0) offRoute.add(symbol);
       role = first > 0 ? 'intermediate' : 'catalyst';
       // The record decides between the net-zero kinds; the step order is only a convention.
-      if (species.declaredRole && NET_ZERO_KINDS.has(species.declaredRole)) role = species.declaredRole;
+      if (species.declaredRole === 'intermediate' || species.declaredRole === 'catalyst') role = species.declaredRole;
     }
     roles.set(symbol, role);
   }

@@ -26,7 +26,7 @@ export function editDistance(a: string, b: string): number {
 
 /**
  * The candidate nearest to `name`, if it is close enough to be a slip rather than a different
- * word: at most one edit per three letters (and always at least one). Ties go to the earlier
+ * word: at most one edit per three letters (at least one, never all). Ties go to the earlier
  * candidate, so callers list the likelier names first.
  */
 export function closestName(name: string, candidates: Iterable<string>): string | undefined {
@@ -40,7 +40,8 @@ export function closestName(name: string, candidates: Iterable<string>): string 
       // Case slips (`Equation`) are as likely as letter slips; count them as one edit.
       name.toLowerCase() === candidate.toLowerCase() ? 1 : Infinity,
     );
-    if (distance <= allowed && distance < bestDistance) {
+    // Replacing every letter of a short name ('x' → 'k') is a different word, not a slip.
+    if (distance <= allowed && distance < name.length && distance < bestDistance) {
       best = candidate;
       bestDistance = distance;
     }

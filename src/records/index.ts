@@ -1,5 +1,8 @@
 /** src/records: record files read with source positions, validated, and errors mapped to lines. */
+export { findAliasProblems } from './alias-problems.ts';
 export { closestName, editDistance } from './closest-name.ts';
+export { describeSchemaError } from './describe-schema-error.ts';
+export type { DescribedError, SchemaProblem } from './describe-schema-error.ts';
 export { findRecordFiles } from './find-record-files.ts';
 export { loadRecordFile, loadRecordSource } from './load-record.ts';
 export type { LoadedRecord } from './load-record.ts';
@@ -26,7 +29,6 @@ export type { ParsedYaml } from './parse-record-yaml.ts';
 export { placeDiagnostics } from './place-diagnostics.ts';
 export { isRecordId, recordId, suggestRecordId } from './record-id.ts';
 export { describeSchemaErrors, pathWords, recordPath } from './schema-messages.ts';
-export type { SchemaProblem } from './schema-messages.ts';
 export { createValidator, recordSchema, recordValidator } from './schema-validator.ts';
 export type { RecordValidator } from './schema-validator.ts';
 export { createLocator, keyText, sourceShift } from './source-positions.ts';

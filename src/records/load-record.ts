@@ -45,7 +45,9 @@ function idDiagnostics(id: string, file: string): Diagnostic[] {
   if (isRecordId(id)) return [];
   const message = `the file name '${id}' cannot be a record id: use lower-case letters, digits and single hyphens`;
   const note = `rename the file to ${suggestRecordId(id)}.yaml`;
-  return [diagnostic('record/schema', 'error', message, { file, line: 1, column: 1, note, actual: id })];
+  return [
+    diagnostic('record/schema', 'error', message, { file, line: 1, column: 1, note, actual: id }),
+  ];
 }
 
 /** Loads a record from its text; pure (no file access), the id comes from `file`'s base name. */
@@ -75,4 +77,3 @@ export async function loadRecordFile(path: string): Promise<LoadedRecord> {
   }
   return loadRecordSource(path, source);
 }
-

@@ -2,8 +2,9 @@
  * Reads a record's YAML text into plain data, keeping the document (with ranges) for positions.
  * Nothing here throws: YAML problems become `record/yaml` diagnostics with line and column.
  */
-import { LineCounter, isAlias, isNode, parseDocument, visit } from 'yaml';
-import type { Alias, Document, YAMLError } from 'yaml';
+import { LineCounter, isNode, parseDocument, visit } from 'yaml';
+import type { Document, YAMLError } from 'yaml';
+import { findAliasProblems } from './alias-problems.ts';
 import { diagnostic } from '../engine/diagnostic.ts';
 import type { Diagnostic } from '../engine/diagnostic.ts';
 import { createLocator, keyText } from './source-positions.ts';
@@ -60,7 +61,11 @@ function pointedAt(doc: Document.Parsed, problem: YAMLError, source: string): Po
   return pointed;
 }
 
-function yamlDiagnostics(doc: Document.Parsed, source: string, locator: RecordLocator): Diagnostic[] {
+function yamlDiagnostics(
+  doc: Document.Parsed,
+  source: string,
+  locator: RecordLocator,
+): Diagnostic[] {
   const diagnostics: Diagnostic[] = [];
   const linesWithErrors = new Set<number>();
   for (const problem of [...doc.errors, ...doc.warnings]) {
@@ -79,43 +84,6 @@ function yamlDiagnostics(doc: Document.Parsed, source: string, locator: RecordLo
   return diagnostics;
 }
 
-/**
- * Aliases that name no earlier anchor, or sit inside the collection they name (which would make
- * the data circular), are reported here, because `toJS` would throw or never finish on them.
- */
-function aliasProblems(
-  doc: Document.Parsed,
-  locator: RecordLocator,
-): { aliases: Alias[]; diagnostics: Diagnostic[] } {
-  const anchors = new Set<string>();
-  const aliases: Alias[] = [];
-  const diagnostics: Diagnostic[] = [];
-  const report = (node: Alias, message: string): void => {
-    const range = node.range ?? [0, 0];
-    const position = locator.span(range[0], range[1]);
-    diagnostics.push(
-      diagnostic('record/yaml', 'error', message, { ...position, actual: `*${node.source}` }),
-    );
-  };
-  const names = (outer: unknown, name: string): boolean =>
-    typeof outer === 'object' && outer !== null && 'anchor' in outer && outer.anchor === name;
-  visit(doc, {
-    Node(_key, node, path) {
-      if (!isAlias(node)) {
-        if (node.anchor !== undefined) anchors.add(node.anchor);
-        return;
-      }
-      aliases.push(node);
-      const name = node.source;
-      if (!anchors.has(name)) report(node, `the alias *${name} has no anchor &${name} before it`);
-      else if (path.some((outer) => names(outer, name))) {
-        report(node, `the alias *${name} is inside the value it refers to`);
-      }
-    },
-  });
-  return { aliases, diagnostics };
-}
-
 /** Parses YAML source; duplicate keys, unknown tags and alias bombs are diagnostics, not exceptions. */
 export function parseRecordYaml(source: string): ParsedYaml {
   const lineCounter = new LineCounter();
@@ -128,7 +96,7 @@ export function parseRecordYaml(source: string): ParsedYaml {
   });
   const locator = createLocator(doc, lineCounter, source);
   const diagnostics = yamlDiagnostics(doc, source, locator);
-  const { aliases, diagnostics: aliasDiagnostics } = aliasProblems(doc, locator);
+  const { aliases, diagnostics: aliasDiagnostics } = findAliasProblems(doc, locator);
   diagnostics.push(...aliasDiagnostics);
   if (diagnostics.some((d) => d.severity === 'error')) return { doc, locator, diagnostics };
   try {
@@ -146,4 +114,3 @@ export function parseRecordYaml(source: string): ParsedYaml {
     return { doc, locator, diagnostics };
   }
 }
-

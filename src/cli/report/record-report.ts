@@ -4,6 +4,9 @@
  */
 import type { Diagnostic } from '../../engine/diagnostic.ts';
 import type { Derivation } from '../../engine/derive.ts';
+import { formatText } from '../../engine/algebra/index.ts';
+import type { ObservationCheck } from '../../engine/observations.ts';
+import type { DerivedRateLaw } from '../../engine/rate-law/derive-rate-laws.ts';
 import type { Rational } from '../../engine/rational.ts';
 
 export interface DiagnosticJson {
@@ -29,7 +32,37 @@ export interface RecordReport {
   stoichiometric_numbers_source?: 'given' | 'derived';
   roles?: Record<string, string>;
   buffered?: string[];
+  rate_laws?: RateLawJson[];
+  observations?: ObservationJson[];
   diagnostics: DiagnosticJson[];
+}
+
+export interface RateLawJson {
+  method: string;
+  /** plain text and LaTeX of the rate of the overall reaction; absent when solved only numerically */
+  text?: string;
+  latex?: string;
+  grouped?: { name: string; value_text: string; value_latex: string; text: string; latex: string };
+  /** limits of the apparent order as [X] → 0 (low) and [X] → ∞ (high) */
+  orders: Record<string, { low: number | string; high: number | string }>;
+  /** solvents whose constant concentration is absorbed into the constants */
+  absorbed?: string[];
+  /** the conserved catalysts' forms, for the resting state */
+  catalyst_balances?: { catalyst: string; total: string; forms: { species: string; term: string }[] }[];
+  numeric_only?: boolean;
+  derivation: { say: string; text: string; latex: string }[];
+}
+
+export interface ObservationJson {
+  id: string;
+  species: string;
+  method: string;
+  observed: number;
+  tolerance: number;
+  predicted?: number;
+  range?: [number, number];
+  basis: string;
+  status: string;
 }
 
 export interface RecordInput {
@@ -56,6 +89,8 @@ export function recordReport(input: RecordInput): RecordReport {
   }
   if (derivation?.roles) out.roles = Object.fromEntries(derivation.roles);
   if (derivation && derivation.buffered.length > 0) out.buffered = derivation.buffered;
+  if (derivation?.rateLaws) out.rate_laws = derivation.rateLaws.map(rateLawJson);
+  if (derivation?.observations) out.observations = derivation.observations.map(observationJson);
   // Keep the documented key order: diagnostics last.
   const { diagnostics, ...rest } = out;
   return { ...rest, diagnostics };
@@ -70,6 +105,34 @@ export function diagnosticJson(d: Diagnostic): DiagnosticJson {
   if (d.endLine !== undefined) out.end_line = d.endLine;
   if (d.endColumn !== undefined) out.end_column = d.endColumn;
   if (d.note !== undefined) out.note = d.note;
+  return out;
+}
+
+/** A derived rate law in the report's shape. */
+export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
+  const { law, presented } = derived;
+  const out: RateLawJson = {
+    method: law.method,
+    orders: Object.fromEntries([...derived.orders].map(([sp, o]) => [sp, { low: o.low.toJSON(), high: o.high.toJSON() }])),
+    derivation: [...law.trace, ...(presented?.trace ?? [])],
+  };
+  if (presented) Object.assign(out, { text: presented.text, latex: presented.latex });
+  if (presented?.grouped) {
+    const g = presented.grouped;
+    out.grouped = { name: g.name, value_text: g.valueText, value_latex: g.valueLatex, text: g.text, latex: g.latex };
+  }
+  if (law.absorbed.length > 0) out.absorbed = law.absorbed;
+  if (law.catalystBalances.length > 0) {
+    out.catalyst_balances = law.catalystBalances.map((b) => ({ catalyst: b.catalyst, total: b.total, forms: b.forms.map((f) => ({ species: f.species, term: formatText(f.term) })) }));
+  }
+  if (!law.expression) out.numeric_only = true;
+  return out;
+}
+
+function observationJson(check: ObservationCheck): ObservationJson {
+  const out: ObservationJson = { id: check.observation, species: check.species, method: check.method, observed: check.observed, tolerance: check.tolerance, basis: check.basis, status: check.status };
+  if (check.predicted !== undefined) out.predicted = check.predicted;
+  if (check.range) out.range = check.range;
   return out;
 }
 

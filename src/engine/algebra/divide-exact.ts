@@ -1,5 +1,6 @@
 import { Rational } from '../rational.ts';
 import { Monomial } from './monomial.ts';
+import { MonomialHeap } from './monomial-heap.ts';
 import { monomialContent } from './polynomial-content.ts';
 import { Polynomial, type Term } from './polynomial.ts';
 
@@ -22,23 +23,66 @@ export function divideExact(p: Polynomial, q: Polynomial): Polynomial | undefine
   if (p.isZero()) return Polynomial.ZERO;
   const mp = monomialContent(p);
   const mq = monomialContent(q);
-  let remainder = p.mulTerm(Rational.ONE, Monomial.ONE.div(mp));
+  const dividend = p.mulTerm(Rational.ONE, Monomial.ONE.div(mp));
   const divisor = q.mulTerm(Rational.ONE, Monomial.ONE.div(mq));
-  if (!degreesAllow(remainder, divisor)) return undefined;
+  const bounds = quotientDegreeBounds(dividend, divisor);
+  if (bounds === undefined) return undefined;
   const lead = divisor.leadingTerm()!;
+  // The remainder lives in a map keyed by monomial, with a heap to find its leading term, so a
+  // step costs O(|q| log) rather than a pass over the whole remainder.
+  const remainder = new Map(dividend.terms.map((t) => [t.monomial.key, t]));
+  const heap = new MonomialHeap();
+  for (const t of dividend.terms) heap.push(t.monomial);
   const quotient: Term[] = [];
-  for (let t = remainder.leadingTerm(); t !== undefined; t = remainder.leadingTerm()) {
+  for (let top = heap.pop(); top !== undefined; top = heap.pop()) {
+    const t = remainder.get(top.key);
+    if (t === undefined) continue; // cancelled, or already seen through a duplicate heap entry
     const monomial = t.monomial.div(lead.monomial);
-    if (!monomial.hasNonNegativeExponents()) return undefined;
+    if (!withinBounds(monomial, bounds)) return undefined;
     const coefficient = t.coefficient.div(lead.coefficient);
     quotient.push({ coefficient, monomial });
-    remainder = remainder.sub(divisor.mulTerm(coefficient, monomial));
+    for (const d of divisor.terms) {
+      const m = d.monomial.mul(monomial);
+      const old = remainder.get(m.key);
+      const c = (old?.coefficient ?? Rational.ZERO).sub(d.coefficient.mul(coefficient));
+      if (c.isZero()) remainder.delete(m.key);
+      else remainder.set(m.key, { coefficient: c, monomial: m });
+      if (old === undefined && !c.isZero()) heap.push(m);
+    }
   }
   return Polynomial.fromTerms(quotient).mulTerm(Rational.ONE, mp.div(mq));
 }
 
-/** A cheap necessary condition: the divisor's degree in each symbol cannot exceed the dividend's. */
-function degreesAllow(p: Polynomial, q: Polynomial): boolean {
-  if (q.totalDegree().compare(p.totalDegree()) > 0) return false;
-  return q.symbols().every((s) => q.degreeIn(s).compare(p.degreeIn(s)) <= 0);
+interface DegreeBounds {
+  readonly total: Rational;
+  readonly bySymbol: ReadonlyMap<string, Rational>;
+}
+
+/**
+ * Degrees add under multiplication (in each symbol and in total), so every term of an exact
+ * quotient has exponents between 0 and deg(p) − deg(q). Undefined when q's degree is already larger.
+ */
+function quotientDegreeBounds(p: Polynomial, q: Polynomial): DegreeBounds | undefined {
+  const total = p.totalDegree().sub(q.totalDegree());
+  const [dp, dq] = [maxDegrees(p), maxDegrees(q)];
+  const bySymbol = new Map([...dp].map(([s, d]) => [s, d.sub(dq.get(s) ?? Rational.ZERO)]));
+  if (total.sign() < 0 || [...dq.keys()].some((s) => !bySymbol.has(s))) return undefined;
+  return [...bySymbol.values()].some((b) => b.sign() < 0) ? undefined : { total, bySymbol };
+}
+
+/** Highest exponent of each symbol, in one pass (exponents here are non-negative). */
+function maxDegrees(p: Polynomial): Map<string, Rational> {
+  const degrees = new Map<string, Rational>();
+  for (const t of p.terms) {
+    for (const [s, e] of t.monomial.factors) {
+      const d = degrees.get(s);
+      if (d === undefined || e.compare(d) > 0) degrees.set(s, e);
+    }
+  }
+  return degrees;
+}
+
+function withinBounds(m: Monomial, bounds: DegreeBounds): boolean {
+  if (m.totalDegree.compare(bounds.total) > 0) return false;
+  return m.factors.every(([s, e]) => e.sign() > 0 && e.compare(bounds.bySymbol.get(s) ?? Rational.ZERO) <= 0);
 }

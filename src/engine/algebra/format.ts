@@ -66,8 +66,9 @@ export function formatLatex(value: Expression, style: SymbolStyle = defaultSymbo
 function formatWith(value: Expression, notation: Notation): string {
   if (value instanceof Monomial) return magnitude(value, 1n, 1n, notation);
   if (value instanceof Polynomial) return polynomial(value, notation);
+  const whole = value.toPolynomial();
+  if (whole) return polynomial(whole, notation);
   const num = polynomial(value.numerator, notation);
-  if (value.isPolynomial()) return num;
   const den = polynomial(value.denominator, notation);
   return notation.fraction(num, value.numerator.terms.length, den, value.denominator.terms.length);
 }

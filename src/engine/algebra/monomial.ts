@@ -23,7 +23,7 @@ export class Monomial {
     this.totalDegree = factors.reduce((sum, [, e]) => sum.add(e), Rational.ZERO);
   }
 
-  /** symbol^exponent (exponent 1 by default; a number exponent is read exactly as a double, so pass a Rational for 1/3). */
+  /** symbol^exponent, exponent 1 by default (a number is read exactly as a double: pass 1/3 as a Rational). */
   static of(symbol: string, exponent: Rational | number = 1): Monomial {
     return Monomial.fromFactors([[symbol, toRational(exponent)]]);
   }
@@ -46,10 +46,12 @@ export class Monomial {
     return this.factors.map(([s]) => s);
   }
 
+  /** True for the empty product 1. */
   isOne(): boolean {
     return this.factors.length === 0;
   }
 
+  /** Same symbols with the same exponents. */
   equals(other: Monomial): boolean {
     return this.key === other.key;
   }
@@ -140,18 +142,29 @@ export class Monomial {
     return 0;
   }
 
+  /** Applies op to the exponents of each symbol of either side (absent = 0), merging the sorted lists. */
   private combine(other: Monomial, op: (a: Rational, b: Rational) => Rational): Monomial {
-    return Monomial.fromFactors(mergedSymbols(this, other).map((s) => [s, op(this.exponent(s), other.exponent(s))]));
+    const [a, b] = [this.factors, other.factors];
+    const out: Factor[] = [];
+    let i = 0;
+    let j = 0;
+    while (i < a.length || j < b.length) {
+      const fa = a[i];
+      const fb = b[j];
+      const order = fa === undefined ? 1 : fb === undefined ? -1 : compareSymbols(fa[0], fb[0]);
+      const symbol = order <= 0 ? fa![0] : fb![0];
+      const e = op(order <= 0 ? fa![1] : Rational.ZERO, order >= 0 ? fb![1] : Rational.ZERO);
+      if (!e.isZero()) out.push([symbol, e]);
+      if (order <= 0) i++;
+      if (order >= 0) j++;
+    }
+    return out.length === 0 ? Monomial.ONE : new Monomial(out);
   }
 }
 
 /** Code-unit order of symbols, independent of locale. */
 export function compareSymbols(a: string, b: string): -1 | 0 | 1 {
   return a < b ? -1 : a > b ? 1 : 0;
-}
-
-function mergedSymbols(a: Monomial, b: Monomial): string[] {
-  return [...new Set([...a.symbols(), ...b.symbols()])].sort(compareSymbols);
 }
 
 function valueOf<T>(values: ReadonlyMap<string, T>, symbol: string): T {

@@ -61,6 +61,7 @@ export class Polynomial {
     return s;
   }
 
+  /** True for the zero polynomial (no terms). */
   isZero(): boolean {
     return this.terms.length === 0;
   }
@@ -91,6 +92,7 @@ export class Polynomial {
     return this.terms.every((t) => t.monomial.hasNaturalExponents());
   }
 
+  /** Exact equality (canonical forms make it a term-by-term comparison). */
   equals(other: Polynomial): boolean {
     if (this.terms.length !== other.terms.length) return false;
     return this.terms.every((t, i) => {
@@ -99,16 +101,19 @@ export class Polynomial {
     });
   }
 
+  /** Sum. */
   add(other: Polynomial): Polynomial {
     if (other.isZero()) return this;
     if (this.isZero()) return other;
     return Polynomial.mergeSorted(this.terms, other.terms);
   }
 
+  /** Difference. */
   sub(other: Polynomial): Polynomial {
     return this.add(other.neg());
   }
 
+  /** Negation. */
   neg(): Polynomial {
     return new Polynomial(this.terms.map((t) => ({ coefficient: t.coefficient.neg(), monomial: t.monomial })));
   }
@@ -127,6 +132,7 @@ export class Polynomial {
     );
   }
 
+  /** Product. */
   mul(other: Polynomial): Polynomial {
     if (this.isZero() || other.isZero()) return Polynomial.ZERO;
     const products: Term[] = [];

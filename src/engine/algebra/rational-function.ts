@@ -44,13 +44,20 @@ export class RationalFunction {
     return RationalFunction.of(p);
   }
 
+  /** True for the zero function. */
   isZero(): boolean {
     return this.numerator.isZero();
   }
 
-  /** True when the normal form has denominator 1 (which a partial cancellation may miss). */
+  /** True when the normal form has a constant denominator (a partial cancellation may miss some). */
   isPolynomial(): boolean {
-    return this.denominator.equals(Polynomial.ONE);
+    return this.denominator.isConstant();
+  }
+
+  /** The polynomial this equals when the denominator is constant; otherwise undefined. */
+  toPolynomial(): Polynomial | undefined {
+    const d = this.denominator.constantValue();
+    return d === undefined ? undefined : this.numerator.scale(d.inverse());
   }
 
   /** Mathematical equality, by cross-multiplication (normal forms need not be unique). */
@@ -63,6 +70,7 @@ export class RationalFunction {
     return [...new Set([...this.numerator.symbols(), ...this.denominator.symbols()])].sort(compareSymbols);
   }
 
+  /** Sum, over the smaller common denominator where one denominator divides the other. */
   add(other: RationalFunction): RationalFunction {
     const [a, b, c, d] = [this.numerator, this.denominator, other.numerator, other.denominator];
     if (b.equals(d)) return RationalFunction.of(a.add(c), b);
@@ -74,14 +82,17 @@ export class RationalFunction {
     return RationalFunction.of(a.mul(d).add(c.mul(b)), b.mul(d));
   }
 
+  /** Difference. */
   sub(other: RationalFunction): RationalFunction {
     return this.add(other.neg());
   }
 
+  /** Negation. */
   neg(): RationalFunction {
     return new RationalFunction(this.numerator.neg(), this.denominator);
   }
 
+  /** Product. */
   mul(other: RationalFunction): RationalFunction {
     // Cancelling across first keeps the intermediate products small.
     const x = RationalFunction.of(this.numerator, other.denominator);
@@ -124,8 +135,8 @@ export class RationalFunction {
   logDerivative(symbol: string): RationalFunction | undefined {
     if (this.isZero()) return undefined;
     const [a, b] = [this.numerator, this.denominator];
-    const wronskian = a.derivative(symbol).mul(b).sub(a.mul(b.derivative(symbol)));
-    return RationalFunction.of(wronskian.mulTerm(Rational.ONE, Monomial.of(symbol)), a.mul(b));
+    const slope = a.derivative(symbol).mul(b).sub(a.mul(b.derivative(symbol)));
+    return RationalFunction.of(slope.mulTerm(Rational.ONE, Monomial.of(symbol)), a.mul(b));
   }
 }
 

@@ -1,0 +1,14 @@
+/**
+ * What a formula parses to. Its own module so the parser and the formatter can share the type
+ * without importing each other.
+ */
+
+export type Phase = 'aq' | 'g' | 'l' | 's';
+
+export interface Composition {
+  elements: ReadonlyMap<string, number>;
+  charge: number;
+  radical: boolean;
+  excited: boolean;
+  phase?: Phase;
+}

@@ -1,0 +1,55 @@
+/** Judges every observed order of a record against each derived rate law. */
+import type { MechanismRecord } from '../../records/mechanism-record.ts';
+import { diagnostic, type Diagnostic } from '../diagnostic.ts';
+import { contradiction, judgeOrder, readObservedOrder, type ObservationCheck, type Prediction } from '../observations.ts';
+import type { StepConstants } from '../step-units.ts';
+import type { RateLawContext } from './context.ts';
+import type { DerivedRateLaw } from './derive-rate-laws.ts';
+import { constantValues, observationValues } from './numeric-values.ts';
+import { numericOrderAt } from './numeric-order.ts';
+import { apparentOrder } from './orders.ts';
+
+/** Checks each observation; contradictions of the first (primary) rate law become diagnostics. */
+export function checkObservations(
+  record: MechanismRecord,
+  context: RateLawContext,
+  rateLaws: readonly DerivedRateLaw[],
+  constants: readonly StepConstants[],
+  symbols: readonly { species: string; symbol: string }[],
+): { checks: ObservationCheck[]; diagnostics: Diagnostic[] } {
+  const checks: ObservationCheck[] = [];
+  const diagnostics: Diagnostic[] = [];
+  const given = constantValues(context.mechanism, constants);
+  (record.observations ?? []).forEach((observation, index) => {
+    const conditions = observationValues(observation, index, context);
+    diagnostics.push(...conditions.diagnostics);
+    const values = new Map([...given, ...conditions.values]);
+    for (const [species, text] of Object.entries(observation.orders ?? {})) {
+      const path = ['observations', index, 'orders', species];
+      const observed = readObservedOrder(text);
+      if ('error' in observed) {
+        diagnostics.push(diagnostic('observation/units', 'error', `order in ${species}: ${observed.error}`, { path }));
+        continue;
+      }
+      const symbol = symbols.find((s) => s.species === species)?.symbol;
+      if (!context.mechanism.species.has(species)) {
+        diagnostics.push(diagnostic('observation/species', 'warning', `${species} is not a species of this mechanism`, { path }));
+      }
+      rateLaws.forEach((derived, lawIndex) => {
+        const prediction: Prediction = {};
+        const limits = derived.orders.get(species);
+        if (symbol && limits) prediction.limits = limits;
+        if (symbol && context.mechanism.species.has(species)) {
+          const at = derived.law.expression
+            ? apparentOrder(derived.law.expression, symbol, values, limits?.low.toNumber())
+            : derived.law.nonlinear && numericOrderAt(derived.law.nonlinear, symbol, values);
+          if (typeof at === 'number') prediction.atConditions = at;
+        }
+        const check = judgeOrder(observation.id, species, derived.law.method, observed.value, observed.tolerance, prediction);
+        checks.push(check);
+        if (lawIndex === 0 && check.status === 'fail') diagnostics.push(contradiction(check, record.status, index));
+      });
+    }
+  });
+  return { checks, diagnostics };
+}

@@ -1,0 +1,95 @@
+/**
+ * The rate-law stage of a derivation (DESIGN.md items 4–6): choose the methods, derive each law,
+ * read off the orders, judge the observations, and confirm inhibitors by their negative order.
+ */
+import type { MechanismRecord, Role } from '../../records/mechanism-record.ts';
+import { diagnostic, type Diagnostic } from '../diagnostic.ts';
+import type { Mechanism } from '../mechanism.ts';
+import type { ObservationCheck } from '../observations.ts';
+import type { StepConstants } from '../step-units.ts';
+import { rateLawContext, type RateLawContext } from './context.ts';
+import { formatterFor } from './formatter.ts';
+import { checkObservations } from './check-observations.ts';
+import { orderLimitsOf, orderSymbols } from './orders.ts';
+import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
+import { presentLaw, type PresentedLaw } from './present.ts';
+import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
+import { steadyStateRateLaw } from './steady-state.ts';
+
+export interface DerivedRateLaw {
+  law: RateLaw;
+  /** absent for a nonlinear steady state, which is solved numerically */
+  presented?: PresentedLaw;
+  orders: Map<string, OrderRange>;
+}
+
+export interface RateLawStage {
+  context: RateLawContext;
+  rateLaws: DerivedRateLaw[];
+  observations: ObservationCheck[];
+  roles: Map<string, Role>;
+  diagnostics: Diagnostic[];
+}
+
+/** Derives the rate laws the record asks for and checks them against its observations. */
+export function deriveRateLaws(
+  record: MechanismRecord,
+  mechanism: Mechanism,
+  sigma: readonly number[],
+  roles: ReadonlyMap<string, Role>,
+  offRoute: ReadonlySet<string>,
+  constants: readonly StepConstants[],
+): RateLawStage {
+  const diagnostics: Diagnostic[] = [];
+  const context = rateLawContext(mechanism, sigma, roles, offRoute);
+  const fmt = formatterFor(mechanism);
+  const rdsSteps = mechanism.steps.filter((s) => s.rds);
+  for (const extra of rdsSteps.slice(1)) {
+    diagnostics.push(diagnostic('step/rds', 'error', `step ${extra.label} is a second rate-determining step; mark at most one`, { path: ['steps', extra.index, 'rds'] }));
+  }
+  const rds = rdsSteps[0];
+  if (rds && (sigma[rds.index] ?? 0) === 0) {
+    diagnostics.push(diagnostic('step/rds', 'error', `the rate-determining step ${rds.label} is off the route (σ = 0), so it cannot set the overall rate`, { path: ['steps', rds.index, 'rds'] }));
+  }
+  const methods = chooseMethods(record.approximation ?? 'auto', rds !== undefined);
+  if (methods.includes('rds') && !rds) {
+    diagnostics.push(diagnostic('step/rds', 'error', 'approximation: rds needs one step marked rds: true', { path: ['approximation'] }));
+  }
+  const symbols = orderSymbols(context);
+  const rateLaws: DerivedRateLaw[] = [];
+  for (const method of methods) {
+    if (method === 'rds' && (!rds || (sigma[rds.index] ?? 0) === 0)) continue;
+    const result = method === 'rds' ? eliminateByPreEquilibria(context, rds!, fmt) : steadyStateRateLaw(context, fmt);
+    diagnostics.push(...result.diagnostics);
+    if (!result.law) continue;
+    const law = result.law;
+    if (!law.expression) {
+      rateLaws.push({ law, orders: new Map() });
+      continue;
+    }
+    const presented = presentLaw(law.expression, context.solvents, fmt);
+    law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(`[${s}]`));
+    rateLaws.push({ law, presented, orders: orderLimitsOf(presented.expression, symbols) });
+  }
+  const checked = checkObservations(record, context, rateLaws, constants, symbols);
+  diagnostics.push(...checked.diagnostics);
+  return { context, rateLaws, observations: checked.checks, roles: confirmInhibitors(roles, offRoute, rateLaws[0]), diagnostics };
+}
+
+function chooseMethods(approximation: string, hasRds: boolean): RateLawMethod[] {
+  if (approximation === 'rds') return ['rds'];
+  if (approximation === 'steady_state') return ['steady_state'];
+  if (approximation === 'both') return hasRds ? ['rds', 'steady_state'] : ['steady_state'];
+  return hasRds ? ['rds'] : ['steady_state'];
+}
+
+/** A net-zero binder off the route with a negative order in the rate law is an inhibitor. */
+function confirmInhibitors(roles: ReadonlyMap<string, Role>, offRoute: ReadonlySet<string>, primary: DerivedRateLaw | undefined): Map<string, Role> {
+  const out = new Map(roles);
+  if (!primary) return out;
+  for (const sp of offRoute) {
+    const order = primary.orders.get(sp);
+    if (order && (order.low.sign() < 0 || order.high.sign() < 0)) out.set(sp, 'inhibitor');
+  }
+  return out;
+}

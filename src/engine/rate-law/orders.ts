@@ -1,0 +1,40 @@
+/**
+ * Reaction orders: the limits of ∂ln r/∂ln[X] as [X] → 0 and [X] → ∞ from the polynomial
+ * degrees, and the apparent order at given conditions from the exact logarithmic derivative.
+ * A conserved catalyst's order is in its total concentration.
+ */
+import { orderLimits, type RationalFunction } from '../algebra/index.ts';
+import type { RateLawContext } from './context.ts';
+import type { OrderRange } from './rate-law.ts';
+import { concentration } from './symbols.ts';
+
+/** The species whose order a rate law has, each with the symbol the order is taken in. */
+export function orderSymbols(context: RateLawContext): { species: string; symbol: string }[] {
+  const totals = new Map(context.conservations.map((c) => [c.catalyst, c.total]));
+  return [...context.mechanism.species.keys()]
+    .filter((sp) => totals.has(sp) || (!context.internal.includes(sp) && !context.solvents.includes(sp)))
+    .map((species) => ({ species, symbol: totals.get(species) ?? concentration(species) }));
+}
+
+/** Order limits of every species in an exact rate law. */
+export function orderLimitsOf(expression: RationalFunction, symbols: readonly { species: string; symbol: string }[]): Map<string, OrderRange> {
+  const out = new Map<string, OrderRange>();
+  for (const { species, symbol } of symbols) {
+    const limits = orderLimits(expression, symbol);
+    if (limits) out.set(species, { low: limits.low, high: limits.high });
+  }
+  return out;
+}
+
+/**
+ * The apparent order x ∂ln r/∂x at the given values; at x = 0 it is the low limit. Undefined
+ * when a symbol has no value or the rate vanishes there.
+ */
+export function apparentOrder(expression: RationalFunction, symbol: string, values: ReadonlyMap<string, number>, low?: number): number | undefined {
+  if (!expression.symbols().every((s) => values.has(s))) return undefined;
+  if (values.get(symbol) === 0) return low;
+  const derivative = expression.logDerivative(symbol);
+  if (!derivative) return undefined;
+  const order = derivative.evaluate(values);
+  return Number.isFinite(order) ? order : undefined;
+}

@@ -1,0 +1,93 @@
+/**
+ * The rate-determining-step approximation with fast pre-equilibria (DESIGN.md item 4):
+ * rate = k_rds Π[reactants of the rds]^ν / σ_rds, every intermediate eliminated through the
+ * reversible steps before the rds (and dead-end equilibria off the route) taken at equilibrium.
+ * Steps after the rds do not enter; species formed only after it are negligible. A conserved
+ * catalyst's total is the sum of its pre-equilibrium forms, which gives the saturation denominator.
+ */
+import { Monomial, Polynomial, RationalFunction } from '../algebra/index.ts';
+import { diagnostic, type Diagnostic } from '../diagnostic.ts';
+import type { Step } from '../mechanism.ts';
+import { Rational } from '../rational.ts';
+import type { RateLawContext } from './context.ts';
+import type { Formatter } from './formatter.ts';
+import { solveLogLinear, type LogLinearRow } from './log-linear-solve.ts';
+import { forwardRate } from './mass-action.ts';
+import { catalystBalance } from './catalyst-balance.ts';
+import type { RateLaw, TraceLine } from './rate-law.ts';
+import { concentration, equilibriumConstant } from './symbols.ts';
+
+/** Derives the rate law by the rds method, or explains why it cannot. */
+export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt: Formatter): { law?: RateLaw; diagnostics: Diagnostic[] } {
+  const { mechanism, sigma } = context;
+  const trace: TraceLine[] = [];
+  const sigmaRds = sigma[rds.index] ?? 0;
+  const freeCatalysts = new Set(context.conservations.map((c) => c.catalyst));
+  const unknowns = context.internal.filter((sp) => !freeCatalysts.has(sp));
+  const equilibria = mechanism.steps.filter((s) => s !== rds && s.reversible && (s.index < rds.index || (sigma[s.index] ?? 0) === 0));
+
+  let rate = Polynomial.term(Rational.of(1, sigmaRds), Monomial.ONE).mul(forwardRate(rds));
+  trace.push(fmt.line(`rate of the overall reaction: the rate of the rate-determining step ${rds.label} divided by its σ = ${sigmaRds}`, ['r', 'r'], rate));
+
+  const rows: LogLinearRow[] = equilibria.map((step) => {
+    const rhs = Monomial.fromFactors([
+      [equilibriumConstant(step.label), Rational.ONE],
+      ...[...step.change].filter(([sp]) => !unknowns.includes(sp)).map(([sp, nu]): [string, Rational] => [concentration(sp), nu.neg()]),
+    ]);
+    return { exponents: unknowns.map((sp) => step.change.get(sp) ?? Rational.ZERO), rhs };
+  });
+  for (const step of equilibria) trace.push(equilibriumLine(step, fmt));
+  const solved = solveLogLinear(rows, unknowns.length);
+  const value = new Map<string, Monomial>();
+  unknowns.forEach((sp, i) => solved[i] && value.set(sp, solved[i]!));
+
+  const stuck = rds.reactants.map((t) => t.species).filter((sp) => unknowns.includes(sp) && !value.has(sp));
+  if (stuck.length > 0) return { diagnostics: [notEliminable(rds, stuck)] };
+  rate = substitute(rate, value);
+  for (const sp of rds.reactants.map((t) => t.species).filter((s) => value.has(s))) {
+    trace.push(fmt.line(`${sp} from the equilibria`, [concentration(sp), fmt.style.latex(concentration(sp))], Polynomial.term(Rational.ONE, value.get(sp)!)));
+  }
+  if (value.size > 0) trace.push(fmt.line('substituted', ['r', 'r'], rate));
+
+  const balances = [];
+  let law = RationalFunction.of(rate);
+  for (const conservation of context.conservations) {
+    const result = catalystBalance(conservation, law, value, context, rds, fmt);
+    if ('problem' in result) return { diagnostics: [result.problem] };
+    if (!result.balance) continue;
+    law = result.law;
+    balances.push(result.balance);
+    trace.push(...result.trace);
+  }
+  return { law: { method: 'rds', expression: law, absorbed: [], catalystBalances: balances, trace }, diagnostics: [] };
+}
+
+/** Replaces eliminated concentrations by their equilibrium monomials. */
+export function substitute(p: Polynomial, value: ReadonlyMap<string, Monomial>): Polynomial {
+  return Polynomial.fromTerms(
+    p.terms.map((t) => {
+      let m = t.monomial;
+      for (const [sp, v] of value) {
+        const e = m.exponent(concentration(sp));
+        if (!e.isZero()) m = m.without(concentration(sp)).mul(v.pow(e));
+      }
+      return { coefficient: t.coefficient, monomial: m };
+    }),
+  );
+}
+
+function equilibriumLine(step: Step, fmt: Formatter): TraceLine {
+  const side = (terms: Step['reactants']) => Monomial.fromFactors(terms.map((t): [string, Rational] => [concentration(t.species), t.coefficient]));
+  const quotient = RationalFunction.of(Polynomial.term(Rational.ONE, side(step.products)), Polynomial.term(Rational.ONE, side(step.reactants)));
+  const K = equilibriumConstant(step.label);
+  return fmt.line(`step ${step.label} at equilibrium`, [K, fmt.style.latex(K)], quotient);
+}
+
+function notEliminable(rds: Step, stuck: string[]): Diagnostic {
+  return diagnostic(
+    'rate/not-eliminable',
+    'error',
+    `${stuck.join(', ')} cannot be eliminated: no reversible step before the rate-determining step ${rds.label} fixes ${stuck.length === 1 ? 'its' : 'their'} concentration`,
+    { path: ['steps', rds.index], note: 'use approximation: steady_state, or make the step that forms it reversible' },
+  );
+}

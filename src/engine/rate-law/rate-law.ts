@@ -1,0 +1,51 @@
+/** What a rate-law derivation produces, whichever method made it. */
+import type { Polynomial, RationalFunction } from '../algebra/index.ts';
+import type { Rational } from '../rational.ts';
+
+export type RateLawMethod = 'rds' | 'steady_state';
+
+/** One line of a derivation, in words and in LaTeX. */
+export interface TraceLine {
+  /** what this line does: "rate of the rate-determining step", "step 1 at equilibrium" … */
+  say: string;
+  text: string;
+  latex: string;
+}
+
+/** The forms of a conserved catalyst that share its total (the saturation denominator). */
+export interface CatalystBalance {
+  catalyst: string;
+  /** the symbol of the total, e.g. `[E]_T` */
+  total: string;
+  /** each form's term in the denominator (the free catalyst's term is 1 when normalised) */
+  forms: { species: string; term: Polynomial }[];
+}
+
+/** The steady-state equations kept for a numeric solution where they are not linear. */
+export interface NonlinearSystem {
+  /** concentration symbols of the internal species, in order */
+  unknowns: string[];
+  /** d[X]/dt = 0, or a conservation relation minus its total, for each unknown in turn */
+  equations: Polynomial[];
+  /** the rate of the overall reaction as a polynomial in constants and concentrations */
+  rate: Polynomial;
+}
+
+export interface RateLaw {
+  method: RateLawMethod;
+  /** the exact rate of the overall reaction; absent when only a numeric solution exists */
+  expression?: RationalFunction;
+  nonlinear?: NonlinearSystem;
+  /** solvent concentrations that stay constant and are absorbed into the constants */
+  absorbed: string[];
+  /** a named product of constants, k_obs, that multiplies the concentration part */
+  grouped?: { name: string; value: Polynomial; law: RationalFunction };
+  catalystBalances: CatalystBalance[];
+  trace: TraceLine[];
+}
+
+/** Limits of the apparent order ∂ln r/∂ln[X] as [X] → 0 and [X] → ∞. */
+export interface OrderRange {
+  low: Rational;
+  high: Rational;
+}

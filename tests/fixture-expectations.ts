@@ -1,0 +1,25 @@
+/**
+ * Fixture files say what they expect in their first comment lines, so the file is its own
+ * documentation: `# expect: record/schema line 8`, one line per expected diagnostic.
+ */
+
+/** One expected diagnostic: its rule id and the 1-based line of the offending node. */
+export interface Expectation {
+  rule: string;
+  line: number;
+}
+
+const EXPECT = /^#\s*expect:\s*(\S+)\s+line\s+(\d+)\s*$/;
+
+/** Reads the `# expect: <rule> line <N>` lines from the comment block at the top of a fixture. */
+export function readExpectations(source: string): Expectation[] {
+  const expectations: Expectation[] = [];
+  for (const line of source.split(/\r?\n/)) {
+    if (!line.startsWith('#')) break;
+    const match = EXPECT.exec(line);
+    if (match?.[1] !== undefined && match[2] !== undefined) {
+      expectations.push({ rule: match[1], line: Number(match[2]) });
+    }
+  }
+  return expectations;
+}

@@ -1,0 +1,23 @@
+import { expect, it } from 'vitest';
+import * as algebra from '../../../src/engine/algebra/index.ts';
+
+it('pins the public API of the algebra module', () => {
+  expect(Object.keys(algebra).sort()).toEqual([
+    'Monomial',
+    'Polynomial',
+    'RationalFunction',
+    'compareSymbols',
+    'content',
+    'defaultSymbolStyle',
+    'determinant',
+    'divideExact',
+    'formatLatex',
+    'formatText',
+    'integerRoot',
+    'monomialContent',
+    'orderLimits',
+    'primitivePart',
+    'rationalPower',
+    'solveLinear',
+  ]);
+});
