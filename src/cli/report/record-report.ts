@@ -48,7 +48,9 @@ export interface RateLawJson {
   /** solvents whose constant concentration is absorbed into the constants */
   absorbed?: string[];
   /** the conserved catalysts' forms, for the resting state */
-  catalyst_balances?: { catalyst: string; total: string; forms: { species: string; term: string }[] }[];
+  catalyst_balances?: { catalyst: string; total: string; forms: { species: string; fraction: string }[] }[];
+  /** the dominant catalyst form at each observation's conditions */
+  resting_states?: { observation: string; catalyst: string; species: string; fraction: number }[];
   numeric_only?: boolean;
   derivation: { say: string; text: string; latex: string }[];
 }
@@ -123,8 +125,9 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
   }
   if (law.absorbed.length > 0) out.absorbed = law.absorbed;
   if (law.catalystBalances.length > 0) {
-    out.catalyst_balances = law.catalystBalances.map((b) => ({ catalyst: b.catalyst, total: b.total, forms: b.forms.map((f) => ({ species: f.species, term: formatText(f.term) })) }));
+    out.catalyst_balances = law.catalystBalances.map((b) => ({ catalyst: b.catalyst, total: b.total, forms: b.forms.map((f) => ({ species: f.species, fraction: formatText(f.fraction) })) }));
   }
+  if (derived.restingStates.length > 0) out.resting_states = derived.restingStates;
   if (!law.expression) out.numeric_only = true;
   return out;
 }

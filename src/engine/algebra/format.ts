@@ -18,9 +18,11 @@ export const defaultSymbolStyle: SymbolStyle = { text: (s) => s, latex: (s) => s
 export type Expression = Monomial | Polynomial | RationalFunction;
 
 /**
- * Output order: terms by descending total degree, then by their symbols in the style's order (a
- * higher power first); factors within a term in the style's order. Deterministic for a given style. Negative exponents and coefficient denominators go below a fraction bar; a
- * fractional exponent is written with a slash (`x^(1/2)`, `x^{1/2}`).
+ * The two outputs differ only in these few choices. Shared rules: terms by descending total degree,
+ * then by their symbols in the style's order (a higher power first); factors within a term in the
+ * style's order, so output is deterministic for a given style. Negative exponents and coefficient
+ * denominators go below a fraction bar; a fractional exponent is written with a slash
+ * (`x^(1/2)`, `x^{1/2}`).
  */
 interface Notation {
   order(a: string, b: string): number;
@@ -35,7 +37,11 @@ interface Notation {
 const text = (style: SymbolStyle): Notation => ({
   order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
   symbol: (s) => style.text(s),
-  power: (base, e) => (e.isInteger() ? `${base}^${e}` : `${base}^(${e})`),
+  power: (base, e) => {
+    // `k_-1^2` would misread; `[I-]^2` would not, since the brackets already group it.
+    const b = /[\s^*/+-]/.test(base.replace(/\[[^\]]*\]|\([^)]*\)/g, '')) ? `(${base})` : base;
+    return e.isInteger() ? `${b}^${e}` : `${b}^(${e})`;
+  },
   product: (factors) => factors.join('*'),
   quotient: (num, den, denFactors) => `${num}/${denFactors > 1 ? `(${den})` : den}`,
   fraction: (num, numTerms, den, denTerms) =>
@@ -53,7 +59,7 @@ const latex = (style: SymbolStyle): Notation => ({
     numTerms === 1 && num.startsWith('-') ? `-\\frac{${num.slice(1)}}{${den}}` : `\\frac{${num}}{${den}}`,
 });
 
-/** Plain text, e.g. `k1*k2*S*E_T / (k_-1 + k2 + k1*S)`. */
+/** Plain text, e.g. `k1*k2*[E]_T*[S] / (k1*[S] + k2 + k_-1)`. */
 export function formatText(value: Expression, style: SymbolStyle = defaultSymbolStyle): string {
   return formatWith(value, text(style));
 }

@@ -146,7 +146,7 @@ export class Polynomial {
 
   /** this^n for a non-negative integer n (0^0 = 1); throws on any other n (a programmer mistake). */
   pow(n: number): Polynomial {
-    if (!Number.isSafeInteger(n) || n < 0) throw new RangeError(`Polynomial.pow needs a non-negative integer, got ${n}`);
+    if (!Number.isSafeInteger(n) || n < 0) throw new RangeError(`pow needs a non-negative integer, got ${n}`);
     let result = Polynomial.ONE;
     let base: Polynomial = this;
     for (let k = n; k > 0; k = Math.floor(k / 2)) {

@@ -63,7 +63,8 @@ export function catalystBalance(
     },
     fmt.line('the rate in terms of the total catalyst', ['r', 'r'], result),
   ];
-  return { balance: { catalyst: conservation.catalyst, total, forms }, law: result, trace };
+  const fractions = forms.map((f) => ({ species: f.species, fraction: RationalFunction.of(f.term, denominator) }));
+  return { balance: { catalyst: conservation.catalyst, total, forms: fractions }, law: result, trace };
 }
 
 /** True when some step before the rds (in record order) forms the species. */

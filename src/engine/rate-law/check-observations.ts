@@ -8,6 +8,7 @@ import type { DerivedRateLaw } from './derive-rate-laws.ts';
 import { constantValues, observationValues } from './numeric-values.ts';
 import { numericOrderAt } from './numeric-order.ts';
 import { apparentOrder } from './orders.ts';
+import { restingStates } from './resting-state.ts';
 
 /** Checks each observation; contradictions of the first (primary) rate law become diagnostics. */
 export function checkObservations(
@@ -24,6 +25,9 @@ export function checkObservations(
     const conditions = observationValues(observation, index, context);
     diagnostics.push(...conditions.diagnostics);
     const values = new Map([...given, ...conditions.values]);
+    for (const derived of rateLaws) {
+      for (const state of restingStates(derived.law.catalystBalances, values)) derived.restingStates.push({ observation: observation.id, ...state });
+    }
     for (const [species, text] of Object.entries(observation.orders ?? {})) {
       const path = ['observations', index, 'orders', species];
       const observed = readObservedOrder(text);

@@ -14,6 +14,7 @@ import { orderLimitsOf, orderSymbols } from './orders.ts';
 import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
 import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
+import type { RestingState } from './resting-state.ts';
 import { steadyStateRateLaw } from './steady-state.ts';
 
 export interface DerivedRateLaw {
@@ -21,6 +22,8 @@ export interface DerivedRateLaw {
   /** absent for a nonlinear steady state, which is solved numerically */
   presented?: PresentedLaw;
   orders: Map<string, OrderRange>;
+  /** the dominant catalyst form at each observation's conditions, where constants allow */
+  restingStates: (RestingState & { observation: string })[];
 }
 
 export interface RateLawStage {
@@ -64,12 +67,12 @@ export function deriveRateLaws(
     if (!result.law) continue;
     const law = result.law;
     if (!law.expression) {
-      rateLaws.push({ law, orders: new Map() });
+      rateLaws.push({ law, orders: new Map(), restingStates: [] });
       continue;
     }
     const presented = presentLaw(law.expression, context.solvents, fmt);
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(`[${s}]`));
-    rateLaws.push({ law, presented, orders: orderLimitsOf(presented.expression, symbols) });
+    rateLaws.push({ law, presented, orders: orderLimitsOf(presented.expression, symbols), restingStates: [] });
   }
   const checked = checkObservations(record, context, rateLaws, constants, symbols);
   diagnostics.push(...checked.diagnostics);

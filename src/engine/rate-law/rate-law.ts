@@ -12,13 +12,13 @@ export interface TraceLine {
   latex: string;
 }
 
-/** The forms of a conserved catalyst that share its total (the saturation denominator). */
+/** The forms of a conserved catalyst that share its total; the largest fraction is the resting state. */
 export interface CatalystBalance {
   catalyst: string;
   /** the symbol of the total, e.g. `[E]_T` */
   total: string;
-  /** each form's term in the denominator (the free catalyst's term is 1 when normalised) */
-  forms: { species: string; term: Polynomial }[];
+  /** each form's share of the total, [form]/[E]_T, as an exact function of the conditions */
+  forms: { species: string; fraction: RationalFunction }[];
 }
 
 /** The steady-state equations kept for a numeric solution where they are not linear. */

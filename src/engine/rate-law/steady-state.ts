@@ -63,7 +63,12 @@ export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { l
   solution.forEach((s, i) => trace.push(fmt.line(`solved for ${internal[i]}`, [x[i]!, fmt.style.latex(x[i]!)], s)));
   const expression = substituteLinear(rate.polynomial, x, solution);
   trace.push(fmt.line(`rate of the overall reaction from ${rate.species}`, ['r', 'r'], expression));
-  return { law: { method: 'steady_state', expression, absorbed: [], catalystBalances: [], trace }, diagnostics: [] };
+  const catalystBalances = context.conservations.map((c) => ({
+    catalyst: c.catalyst,
+    total: c.total,
+    forms: c.species.map((sp) => ({ species: sp, fraction: solution[internal.indexOf(sp)]!.div(RationalFunction.fromPolynomial(Polynomial.symbol(c.total))) })),
+  }));
+  return { law: { method: 'steady_state', expression, absorbed: [], catalystBalances, trace }, diagnostics: [] };
 }
 
 /** Every step at most first order in internal species, on each side. */

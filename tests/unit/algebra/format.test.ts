@@ -13,7 +13,7 @@ import {
 } from '../../../src/engine/algebra/index.ts';
 import { arbGeneralPolynomial, arbNonZeroPolynomial, poly, q, rf } from './helpers.ts';
 
-const TEXT: Record<string, string> = { S: '[S]', ET: '[E]_T', O2: '[O2]', NO: '[NO]', km1: 'k_-1' };
+const TEXT: Record<string, string> = { S: '[S]', ET: '[E]_T', O2: '[O2]', NO: '[NO]', km1: 'k_-1', I: '[I-]' };
 const LATEX: Record<string, string> = {
   S: '[\\mathrm{S}]',
   ET: '[\\mathrm{E}]_\\mathrm{T}',
@@ -55,7 +55,14 @@ const cases: [string, Expression, string, string][] = [
   ['one', Monomial.ONE, '1', '1'],
   ['zero', Polynomial.ZERO, '0', '0'],
   ['zero function', RationalFunction.ZERO, '0', '0'],
-  ['a charge superscript is braced before a power', poly('Fe3^2*Fe^2'), 'Fe^2*Fe3^2', '{[\\mathrm{Fe}^{3+}]}^{2} {\\mathrm{Fe}^{3+}}^{2}'],
+  ['operator characters bracketed before a power', poly('km1^2*k1'), 'k1*(k_-1)^2', 'k_{1} k_{-1}^{2}'],
+  ['but not inside brackets', poly('I^2'), '[I-]^2', 'I^{2}'],
+  [
+    'a charge superscript braced before a power',
+    poly('Fe3^2*Fe^2'),
+    'Fe^2*Fe3^2',
+    '{[\\mathrm{Fe}^{3+}]}^{2} {\\mathrm{Fe}^{3+}}^{2}',
+  ],
 ];
 
 describe('formatText and formatLatex', () => {

@@ -1,7 +1,9 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Monomial } from '../../../src/engine/algebra/index.ts';
+import { MonomialHeap } from '../../../src/engine/algebra/monomial-heap.ts';
 import { Rational } from '../../../src/engine/rational.ts';
-import { q } from './helpers.ts';
+import { arbGeneralMonomial, q } from './helpers.ts';
 
 const m = (...factors: [string, Rational | number][]) => Monomial.fromFactors(factors);
 
@@ -68,5 +70,20 @@ describe('Monomial', () => {
     expect(a.evaluateExact(exact)?.toString()).toBe('27/4');
     expect(a.evaluateExact(new Map([['x', q(3)], ['y', q(2)], ['z', q(2)]]))).toBeUndefined();
     expect(() => a.evaluate(new Map([['x', 1]]))).toThrow(/y/);
+  });
+});
+
+describe('MonomialHeap', () => {
+  it('pops monomials in descending graded lexicographic order, duplicates included', () => {
+    fc.assert(
+      fc.property(fc.array(arbGeneralMonomial, { maxLength: 30 }), (ms) => {
+        const heap = new MonomialHeap();
+        ms.forEach((x) => heap.push(x));
+        const popped: string[] = [];
+        for (let x = heap.pop(); x !== undefined; x = heap.pop()) popped.push(x.key);
+        expect(popped).toEqual([...ms].sort((a, b) => Monomial.compare(b, a)).map((x) => x.key));
+      }),
+      { numRuns: 60 },
+    );
   });
 });
