@@ -32,7 +32,7 @@ interface Candidate {
 }
 
 /** Beyond this many steps without `times` the subset search is too large; the record must say. */
-export const MAX_SEARCHED_STEPS = 14;
+export const MAX_SEARCHED_STEPS = 16;
 
 /** Chooses the stoichiometric numbers of a mechanism's steps. */
 export function stoichiometricNumbers(steps: readonly RouteStep[], mustCancel: ReadonlySet<string>): RouteResult {
@@ -53,7 +53,19 @@ export function stoichiometricNumbers(steps: readonly RouteStep[], mustCancel: R
   }
   const columns = routeColumns(steps, free);
   const { routes, families } = searchSupports(steps, columns, mustCancel);
-  return chooseRoute(routes, families, mustCancel);
+  const chosen = chooseRoute(routes, families, mustCancel);
+  if (chosen.numbers) chosen.diagnostics.push(...separateReactions(steps, chosen.numbers));
+  return chosen;
+}
+
+/** Off-route steps that share no species with the route describe a separate reaction: say so. */
+function separateReactions(steps: readonly RouteStep[], numbers: number[]): Diagnostic[] {
+  const onRoute = new Set(steps.flatMap((s, i) => (numbers[i]! > 0 ? [...s.change.keys()] : [])));
+  return steps.flatMap((s, i) =>
+    numbers[i] === 0 && s.change.size > 0 && ![...s.change.keys()].some((sp) => onRoute.has(sp))
+      ? [diagnostic('route/ambiguous', 'warning', `step ${i + 1} shares no species with the route: it describes a separate reaction and is left off (σ = 0)`, { path: ['steps', i], note: 'give times on each step to include it' })]
+      : [],
+  );
 }
 
 /** Columns of the search: each step without `times`, plus the given steps as one fixed block. */
@@ -83,7 +95,8 @@ function searchSupports(steps: readonly RouteStep[], columns: Column[], mustCanc
   const required = columns.flatMap((c, i) => (c.required ? [i] : []));
   for (let mask = 0; mask < 1 << optional.length; mask++) {
     const support = [...required, ...optional.filter((_, b) => mask & (1 << b))].sort((a, b) => a - b);
-    if (support.length === 0) continue;
+    // A route's steps are linked through shared species; a disconnected set is a sum of separate reactions.
+    if (support.length === 0 || !connected(support, columns)) continue;
     const species = [...new Set(support.flatMap((c) => [...columns[c]!.change.keys()]))];
     const matrixFor = (rows: string[]) => rows.map((sp) => support.map((c) => columns[c]!.change.get(sp) ?? Rational.ZERO));
     // A set of steps that together change nothing (a step and its reverse, initiation plus termination) is never part of a route.
@@ -113,14 +126,51 @@ function searchSupports(steps: readonly RouteStep[], columns: Column[], mustCanc
   return { routes, families };
 }
 
-/** Subsets of the species that may cancel, best first: most intermediate-pattern species, then most species. */
-function cancelSets(choosable: string[], forced: string[], firstSign: (sp: string) => number) {
-  const sets: { species: string[]; intermediates: number }[] = [];
-  for (let mask = 0; mask < 1 << choosable.length; mask++) {
-    const chosen = [...forced, ...choosable.filter((_, b) => mask & (1 << b))];
-    sets.push({ species: chosen, intermediates: chosen.filter((sp) => firstSign(sp) > 0).length });
+/** True when the columns are linked by shared species into one piece. */
+function connected(support: number[], columns: Column[]): boolean {
+  const reached = new Set([support[0]!]);
+  const species = new Set(columns[support[0]!]!.change.keys());
+  for (let grew = true; grew; ) {
+    grew = false;
+    for (const c of support) {
+      if (reached.has(c) || ![...columns[c]!.change.keys()].some((sp) => species.has(sp))) continue;
+      reached.add(c);
+      for (const sp of columns[c]!.change.keys()) species.add(sp);
+      grew = true;
+    }
   }
-  return sets.sort((a, b) => b.intermediates - a.intermediates || b.species.length - a.species.length);
+  return reached.size === support.length;
+}
+
+/**
+ * Subsets of the species that may cancel, best first: most intermediate-pattern species, then
+ * most species. Generated lazily, because the first feasible set is almost always the full one.
+ */
+function* cancelSets(choosable: string[], forced: string[], firstSign: (sp: string) => number): Generator<{ species: string[]; intermediates: number }> {
+  const formedFirst = choosable.filter((sp) => firstSign(sp) > 0);
+  const consumedFirst = choosable.filter((sp) => firstSign(sp) <= 0);
+  const forcedIntermediates = forced.filter((sp) => firstSign(sp) > 0).length;
+  for (let dropI = 0; dropI <= formedFirst.length; dropI++) {
+    for (const keptI of combinationsOf(formedFirst, formedFirst.length - dropI)) {
+      for (let dropC = 0; dropC <= consumedFirst.length; dropC++) {
+        for (const keptC of combinationsOf(consumedFirst, consumedFirst.length - dropC)) {
+          yield { species: [...forced, ...keptI, ...keptC], intermediates: forcedIntermediates + keptI.length };
+        }
+      }
+    }
+  }
+}
+
+function* combinationsOf<T>(items: readonly T[], k: number, start = 0, picked: T[] = []): Generator<T[]> {
+  if (picked.length === k) {
+    yield [...picked];
+    return;
+  }
+  for (let i = start; i <= items.length - (k - picked.length); i++) {
+    picked.push(items[i]!);
+    yield* combinationsOf(items, k, i + 1, picked);
+    picked.pop();
+  }
 }
 
 /** +1 when the species is formed before it is consumed along the steps (in record order), −1 otherwise. */
