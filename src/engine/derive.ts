@@ -13,7 +13,10 @@ import { deriveRoles } from './roles.ts';
 import { stoichiometricNumbers } from './route.ts';
 import type { ObservationCheck } from './observations.ts';
 import { deriveRateLaws, type DerivedRateLaw } from './rate-law/derive-rate-laws.ts';
-import { readStepConstants } from './step-units.ts';
+import { readStepConstants, type StepConstants } from './step-units.ts';
+import { energyAnalysis, energyConditions, eyringStepConstants, type EnergyResult } from './energy/index.ts';
+import { constantValues } from './rate-law/numeric-values.ts';
+import { checkApproximations, type SimulationCheck } from './simulation/approximation-validity.ts';
 
 export interface Derivation {
   mechanism?: Mechanism;
@@ -28,11 +31,24 @@ export interface Derivation {
   buffered: string[];
   rateLaws?: DerivedRateLaw[];
   observations?: ObservationCheck[];
+  /** labels of the steps whose rate constants come from their energies (Eyring) */
+  constantsFromEnergies?: string[];
+  /** the energy profile (schematic without energies) and the energetic span */
+  energy?: EnergyResult;
+  /** full simulations of the observations that have constants */
+  simulation?: SimulationCheck[];
   diagnostics: Diagnostic[];
 }
 
+export interface DeriveOptions {
+  /** relative error above which an approximation is reported invalid (default 0.1) */
+  approximationThreshold?: number;
+  /** skip the numeric simulations (they are the slow part) */
+  simulate?: boolean;
+}
+
 /** Derives everything the catalogue shows about one mechanism record. */
-export function deriveMechanism(record: MechanismRecord): Derivation {
+export function deriveMechanism(record: MechanismRecord, options: DeriveOptions = {}): Derivation {
   const built = buildMechanism(record);
   const diagnostics = [...built.diagnostics];
   const mechanism = built.mechanism;
@@ -40,6 +56,7 @@ export function deriveMechanism(record: MechanismRecord): Derivation {
   const buffered = [...mechanism.species.values()].filter((s) => s.buffered).map((s) => s.symbol);
   const constants = readStepConstants(record, mechanism);
   diagnostics.push(...checkBalance(mechanism), ...checkMolecularity(mechanism), ...constants.diagnostics);
+  const fromEnergies = fillFromEnergies(record, mechanism, constants.constants);
 
   const mustCancel = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate' || s.declaredRole === 'catalyst').map((s) => s.symbol));
   const route = stoichiometricNumbers(mechanism.steps, mustCancel);
@@ -51,9 +68,9 @@ export function deriveMechanism(record: MechanismRecord): Derivation {
   diagnostics.push(...roleDiagnostics);
   // Only catalysts on the route go over the arrow; a binder off the route (an inhibitor) does not.
   const catalysts = [...roles].filter(([sp, r]) => r === 'catalyst' && !offRoute.has(sp)).map(([sp]) => sp);
-  const rates = deriveRateLaws(record, mechanism, sigma, roles, offRoute, constants.constants);
+  const rates = deriveRateLaws(record, mechanism, sigma, roles, offRoute, fromEnergies.constants);
   diagnostics.push(...rates.diagnostics, ...inhibitorMismatches(mechanism, rates.roles, rates.rateLaws.length > 0));
-  return {
+  const derivation: Derivation = {
     mechanism,
     stoichiometricNumbers: sigma,
     routeSource: route.source === 'given' ? 'given' : 'derived',
@@ -63,8 +80,38 @@ export function deriveMechanism(record: MechanismRecord): Derivation {
     buffered,
     rateLaws: rates.rateLaws,
     observations: rates.observations,
+    constantsFromEnergies: fromEnergies.labels,
     diagnostics,
   };
+  const energy = energyAnalysis(record, derivation);
+  if (energy.energy) derivation.energy = energy.energy;
+  diagnostics.push(...energy.diagnostics);
+  if (options.simulate !== false && (record.observations ?? []).length > 0) {
+    const simulated = checkApproximations(record, derivation, constantValues(mechanism, fromEnergies.constants), options.approximationThreshold);
+    derivation.simulation = simulated.checks;
+    diagnostics.push(...simulated.diagnostics);
+  }
+  return derivation;
+}
+
+/**
+ * Where a step gives Gibbs energies but no rate constants, the Eyring equation supplies them
+ * (given constants always win).
+ */
+function fillFromEnergies(record: MechanismRecord, mechanism: Mechanism, given: readonly StepConstants[]): { constants: StepConstants[]; labels: string[] } {
+  if (energyConditions(record).conditions.basis !== 'G') return { constants: [...given], labels: [] };
+  const eyring = eyringStepConstants(record, mechanism).constants;
+  const labels: string[] = [];
+  const constants = given.map((c, i) => {
+    const e = eyring[i];
+    if (c.k !== undefined || e?.k === undefined) return c;
+    labels.push(mechanism.steps[i]!.label);
+    const out: StepConstants = { k: e.k };
+    if (mechanism.steps[i]!.reversible && c.kRev === undefined && c.K === undefined && e.kRev !== undefined) out.kRev = e.kRev;
+    else Object.assign(out, c.kRev !== undefined && { kRev: c.kRev }, c.K !== undefined && { K: c.K });
+    return out;
+  });
+  return { constants, labels };
 }
 
 /** A declared inhibitor must show a negative order once a rate law exists. */

@@ -8,6 +8,8 @@ import { formatText } from '../../engine/algebra/index.ts';
 import type { ObservationCheck } from '../../engine/observations.ts';
 import type { DerivedRateLaw } from '../../engine/rate-law/derive-rate-laws.ts';
 import type { Rational } from '../../engine/rational.ts';
+import type { SimulationCheck } from '../../engine/simulation/approximation-validity.ts';
+import type { EnergyResult } from '../../engine/energy/index.ts';
 
 export interface DiagnosticJson {
   rule: string;
@@ -34,7 +36,23 @@ export interface RecordReport {
   buffered?: string[];
   rate_laws?: RateLawJson[];
   observations?: ObservationJson[];
+  simulation?: SimulationJson[];
+  /** the energy profile and energetic span, where every route step records its energies */
+  energy?: EnergyResult;
+  /** labels of steps whose rate constants come from their energies (Eyring) */
+  constants_from_energies?: string[];
   diagnostics: DiagnosticJson[];
+}
+
+export interface SimulationJson {
+  observation: string;
+  status: string;
+  message?: string;
+  /** rate of the overall reaction at 1 % conversion, M s^-1 */
+  initial_rate?: number;
+  time_s?: number;
+  orders: Record<string, number>;
+  approximation_error: Record<string, number>;
 }
 
 export interface RateLawJson {
@@ -93,6 +111,9 @@ export function recordReport(input: RecordInput): RecordReport {
   if (derivation && derivation.buffered.length > 0) out.buffered = derivation.buffered;
   if (derivation?.rateLaws) out.rate_laws = derivation.rateLaws.map(rateLawJson);
   if (derivation?.observations) out.observations = derivation.observations.map(observationJson);
+  if (derivation?.simulation) out.simulation = derivation.simulation.map(simulationJson);
+  if (derivation?.energy && !derivation.energy.schematic) out.energy = derivation.energy;
+  if (derivation?.constantsFromEnergies?.length) out.constants_from_energies = derivation.constantsFromEnergies;
   // Keep the documented key order: diagnostics last.
   const { diagnostics, ...rest } = out;
   return { ...rest, diagnostics };
@@ -136,6 +157,14 @@ function observationJson(check: ObservationCheck): ObservationJson {
   const out: ObservationJson = { id: check.observation, species: check.species, method: check.method, observed: check.observed, tolerance: check.tolerance, basis: check.basis, status: check.status };
   if (check.predicted !== undefined) out.predicted = check.predicted;
   if (check.range) out.range = check.range;
+  return out;
+}
+
+function simulationJson(check: SimulationCheck): SimulationJson {
+  const out: SimulationJson = { observation: check.observation, status: check.status, orders: check.orders, approximation_error: check.approximationError };
+  if (check.message !== undefined) out.message = check.message;
+  if (check.initialRate !== undefined) out.initial_rate = Number(check.initialRate.toPrecision(6));
+  if (check.time !== undefined) out.time_s = Number(check.time.toPrecision(4));
   return out;
 }
 

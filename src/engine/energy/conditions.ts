@@ -9,8 +9,10 @@ import { diagnostic, type Diagnostic } from '../diagnostic.ts';
 import { parseQuantity, toCanonical } from '../quantity.ts';
 import { CONCENTRATION, PRESSURE, TEMPERATURE, sameDimension } from '../units.ts';
 
+/** Gibbs energy, enthalpy or electronic energy. */
 export type EnergyBasis = 'G' | 'H' | 'E';
 
+/** What the energies of a record refer to. */
 export interface EnergyConditions {
   basis: EnergyBasis;
   /** temperature / K */

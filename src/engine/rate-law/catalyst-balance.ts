@@ -10,10 +10,13 @@ import type { Step } from '../mechanism.ts';
 import { Rational } from '../rational.ts';
 import type { Conservation, RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
-import type { CatalystBalance, TraceLine } from './rate-law.ts';
+import type { CatalystBalance, NonlinearSystem, TraceLine } from './rate-law.ts';
 import { concentration } from './symbols.ts';
 
-type Outcome = { problem: Diagnostic } | { balance?: CatalystBalance; law: RationalFunction; trace: TraceLine[] };
+type Outcome =
+  | { problem: Diagnostic }
+  | { balance?: CatalystBalance; law: RationalFunction; trace: TraceLine[] }
+  | { nonlinear: NonlinearSystem; trace: TraceLine[] };
 
 /** Replaces the free catalyst in a pre-equilibrium rate law by its total over the sum of its forms. */
 export function catalystBalance(
@@ -40,10 +43,7 @@ export function catalystBalance(
     }
     const v = value.get(species);
     if (v) {
-      if (!v.exponent(free).equals(Rational.ONE)) {
-        return { problem: problem(rds, `${species} is not proportional to the free catalyst ${conservation.catalyst}, so the catalyst balance has no closed form`) };
-      }
-      forms.push({ species, term: Polynomial.term(weight, v.without(free)) });
+      forms.push({ species, term: Polynomial.term(weight, v.div(Monomial.of(free))) });
     } else if (formedBeforeRds(species, context, rds)) {
       return { problem: problem(rds, `${species} holds part of the catalyst ${conservation.catalyst} but no equilibrium before the rate-determining step fixes its amount`) };
     } else {
@@ -51,6 +51,7 @@ export function catalystBalance(
     }
   }
   const denominator = Polynomial.sum(forms.map((f) => f.term));
+  if (!denominator.degreeIn(free).isZero() || !denominator.lowDegreeIn(free).isZero()) return nonlinearBalance(conservation, law, denominator, negligible, fmt);
   const total = conservation.total;
   const numerator = law.numerator.terms.map((t) => Polynomial.term(t.coefficient, t.monomial.without(free).mul(Monomial.of(total))));
   const result = RationalFunction.of(Polynomial.sum(numerator), law.denominator.mul(denominator));
@@ -65,6 +66,28 @@ export function catalystBalance(
   ];
   const fractions = forms.map((f) => ({ species: f.species, fraction: RationalFunction.of(f.term, denominator) }));
   return { balance: { catalyst: conservation.catalyst, total, forms: fractions }, law: result, trace };
+}
+
+/**
+ * A form not proportional to the free catalyst (a dimer holds it squared) makes the balance a
+ * polynomial equation in [C]: kept for a numeric solution at each observation.
+ */
+function nonlinearBalance(conservation: Conservation, law: RationalFunction, perFree: Polynomial, negligible: string[], fmt: Formatter): Outcome {
+  const free = concentration(conservation.catalyst);
+  const den = law.denominator.terms;
+  if (den.length !== 1) return { problem: diagnostic('rate/not-eliminable', 'error', `the balance of ${conservation.catalyst} has no closed form`, { path: ['steps'] }) };
+  const rate = law.numerator.mulTerm(den[0]!.coefficient.inverse(), den[0]!.monomial.pow(-1));
+  const balance = perFree.mulTerm(Rational.ONE, Monomial.of(free)).sub(Polynomial.symbol(conservation.total));
+  return {
+    nonlinear: { unknowns: [free], equations: [balance], rate },
+    trace: [
+      {
+        say: `catalyst balance for ${conservation.catalyst}${negligible.length ? ` (${negligible.join(', ')} negligible)` : ''}: not linear in the free catalyst, so it is solved numerically at each observation`,
+        text: `${conservation.total} = ${fmt.text(perFree.mulTerm(Rational.ONE, Monomial.of(free)))}`,
+        latex: `${fmt.style.latex(conservation.total)} = ${fmt.latex(perFree.mulTerm(Rational.ONE, Monomial.of(free)))}`,
+      },
+    ],
+  };
 }
 
 /** True when some step before the rds (in record order) forms the species. */

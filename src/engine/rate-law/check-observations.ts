@@ -1,4 +1,4 @@
-/** Judges every observed order of a record against each derived rate law. */
+/** Judges every observed order of a record against each derived rate law, at its conditions or by its limits. */
 import type { MechanismRecord } from '../../records/mechanism-record.ts';
 import { diagnostic, type Diagnostic } from '../diagnostic.ts';
 import { contradiction, judgeOrder, readObservedOrder, type ObservationCheck, type Prediction } from '../observations.ts';
@@ -7,10 +7,20 @@ import type { RateLawContext } from './context.ts';
 import type { DerivedRateLaw } from './derive-rate-laws.ts';
 import { constantValues, observationValues } from './numeric-values.ts';
 import { numericOrderAt } from './numeric-order.ts';
-import { apparentOrder } from './orders.ts';
+import { apparentOrder, orderLimitsOf, withAbsent } from './orders.ts';
+import type { OrderRange } from './rate-law.ts';
 import { restingStates } from './resting-state.ts';
 
 /** Checks each observation; contradictions of the first (primary) rate law become diagnostics. */
+/** Order limits with the species this observation lacks (zero concentration) taken as absent. */
+function limitsAt(derived: DerivedRateLaw, species: string, symbol: string | undefined, values: ReadonlyMap<string, number>): OrderRange | undefined {
+  const expression = derived.presented?.expression;
+  if (!expression || !symbol) return derived.orders.get(species);
+  const absent = expression.symbols().filter((s) => values.get(s) === 0 && s !== symbol);
+  return orderLimitsOf(withAbsent(expression, absent), [{ species, symbol }]).get(species) ?? derived.orders.get(species);
+}
+
+/** Judges every observed order of a record against each derived rate law. */
 export function checkObservations(
   record: MechanismRecord,
   context: RateLawContext,
@@ -41,7 +51,7 @@ export function checkObservations(
       }
       rateLaws.forEach((derived, lawIndex) => {
         const prediction: Prediction = {};
-        const limits = derived.orders.get(species);
+        const limits = limitsAt(derived, species, symbol, values);
         if (symbol && limits) prediction.limits = limits;
         if (symbol && context.mechanism.species.has(species)) {
           const at = derived.law.expression

@@ -30,15 +30,16 @@ export interface RateLawContext {
 
 /** Classifies the species of a mechanism for rate-law derivation. */
 export function rateLawContext(mechanism: Mechanism, sigma: readonly number[], roles: ReadonlyMap<string, Role>, offRoute: ReadonlySet<string>): RateLawContext {
-  const internal = [...mechanism.species.values()]
-    .filter((s) => {
-      const role = roles.get(s.symbol);
-      if (s.buffered || s.solvent || s.thirdBody) return false;
-      // A net-zero species consumed first off the route (a free inhibitor) is in excess, not conserved.
-      if (role === 'catalyst') return !offRoute.has(s.symbol);
-      return role === 'intermediate';
-    })
-    .map((s) => s.symbol);
+  const species = [...mechanism.species.values()].filter((s) => !s.buffered && !s.solvent && !s.thirdBody);
+  const internal = species.filter((s) => roles.get(s.symbol) === 'intermediate' || (roles.get(s.symbol) === 'catalyst' && !offRoute.has(s.symbol))).map((s) => s.symbol);
+  // A net-zero species consumed first off the route is either a free inhibitor in excess, or a
+  // reservoir form of the catalyst (a resting dimer): it is internal when it shares the catalyst's balance.
+  for (const candidate of species.filter((s) => roles.get(s.symbol) === 'catalyst' && offRoute.has(s.symbol))) {
+    const trial = [...internal, candidate.symbol];
+    const relations = conservationRelations(mechanism, trial, roles);
+    const joinsCatalyst = relations.some((r) => r.species.includes(candidate.symbol) && r.species.some((sp) => roles.get(sp) === 'catalyst' && !offRoute.has(sp)));
+    if (joinsCatalyst) internal.push(candidate.symbol);
+  }
   const solvents = [...mechanism.species.values()].filter((s) => s.solvent).map((s) => s.symbol);
   return { mechanism, sigma, roles, internal, solvents, conservations: conservationRelations(mechanism, internal, roles) };
 }
@@ -60,7 +61,8 @@ function conservationRelations(mechanism: Mechanism, internal: string[], roles: 
   return chosen.map((w) => {
     const species = internal.filter((_, i) => !w[i]!.isZero());
     const weights = w.filter((x) => !x.isZero());
-    const catalyst = species.find((sp) => roles.get(sp) === 'catalyst') ?? species[0]!;
+    // Name the total after the catalyst form that runs the cycle (weight 1), not a reservoir dimer.
+    const catalyst = species.find((sp, i) => roles.get(sp) === 'catalyst' && weights[i]!.equals(Rational.ONE)) ?? species.find((sp) => roles.get(sp) === 'catalyst') ?? species[0]!;
     return { species, weights, catalyst, total: totalConcentration(catalyst) };
   });
 }

@@ -72,6 +72,7 @@ export function deriveRateLaws(
     }
     const presented = presentLaw(law.expression, context.solvents, fmt);
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(`[${s}]`));
+    // General limits, every species present; each observation takes its absent species out (check-observations).
     rateLaws.push({ law, presented, orders: orderLimitsOf(presented.expression, symbols), restingStates: [] });
   }
   const checked = checkObservations(record, context, rateLaws, constants, symbols);

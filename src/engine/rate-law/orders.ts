@@ -3,7 +3,7 @@
  * degrees, and the apparent order at given conditions from the exact logarithmic derivative.
  * A conserved catalyst's order is in its total concentration.
  */
-import { orderLimits, type RationalFunction } from '../algebra/index.ts';
+import { orderLimits, Polynomial, RationalFunction } from '../algebra/index.ts';
 import type { RateLawContext } from './context.ts';
 import type { OrderRange } from './rate-law.ts';
 import { concentration } from './symbols.ts';
@@ -37,4 +37,20 @@ export function apparentOrder(expression: RationalFunction, symbol: string, valu
   if (!derivative) return undefined;
   const order = derivative.evaluate(values);
   return Number.isFinite(order) ? order : undefined;
+}
+
+/**
+ * The law with some concentrations at zero (products at initial rates), where that leaves a
+ * finite, non-zero rate; a species whose absence would make the rate vanish or diverge (a
+ * product in an inverse order) stays, since the law then presumes it present.
+ */
+export function withAbsent(expression: RationalFunction, symbols: readonly string[]): RationalFunction {
+  let out = expression;
+  for (const symbol of symbols) {
+    if (!out.symbols().includes(symbol)) continue;
+    const numerator = out.numerator.substitute(symbol, Polynomial.ZERO);
+    const denominator = out.denominator.substitute(symbol, Polynomial.ZERO);
+    if (!numerator.isZero() && !denominator.isZero()) out = RationalFunction.of(numerator, denominator);
+  }
+  return out;
 }

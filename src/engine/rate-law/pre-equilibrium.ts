@@ -54,6 +54,11 @@ export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt
   for (const conservation of context.conservations) {
     const result = catalystBalance(conservation, law, value, context, rds, fmt);
     if ('problem' in result) return { diagnostics: [result.problem] };
+    if ('nonlinear' in result) {
+      trace.push(...result.trace);
+      const note = diagnostic('rate/nonlinear', 'info', `the balance of ${conservation.catalyst} is not linear in its free form, so the rate is solved numerically at each observation with constants`, { path: ['steps', rds.index] });
+      return { law: { method: 'rds', nonlinear: result.nonlinear, absorbed: [], catalystBalances: [], trace }, diagnostics: [note] };
+    }
     if (!result.balance) continue;
     law = result.law;
     balances.push(result.balance);

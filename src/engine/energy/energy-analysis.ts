@@ -1,0 +1,110 @@
+/**
+ * The energy stage of a derivation (DESIGN.md item 8): the profile of one turnover, the energetic
+ * span where every step of the route records its energies, and the check that the declared
+ * rate-determining step is the one the span points at. Shaped for the JSON report's `energy`.
+ */
+import type { MechanismRecord } from '../../records/mechanism-record.ts';
+import type { Derivation } from '../derive.ts';
+import { diagnostic, type Diagnostic } from '../diagnostic.ts';
+import type { Mechanism } from '../mechanism.ts';
+import { energyConditions } from './conditions.ts';
+import { energeticSpan, type SpanResult } from './energetic-span.ts';
+import { buildEnergyProfile, type EnergyProfile } from './profile.ts';
+import { readStepEnergies } from './step-energies.ts';
+
+/** The record's `energy` in the JSON report: the profile plus the energetic span where it applies. */
+export interface EnergyResult extends EnergyProfile {
+  /** temperature of the TOF / K */
+  T: number;
+  /** energetic span δE / kJ mol^-1 */
+  span?: number;
+  /** label of the step whose transition state determines the TOF */
+  tdts_step?: string;
+  /** index of that transition state among the states (1-based position along the route) */
+  tdts_state?: number;
+  /** index of the determining minimum (0 = the starting state) */
+  tdi_state?: number;
+  /** TOF from the full energetic-span expression (Gibbs basis only) / s^-1 */
+  tof_per_s?: number;
+  /** TOF from the span alone, (k_B T/h) e^{−δE/RT} / s^-1 */
+  tof_span_per_s?: number;
+  /** degree of TOF control of each transition state and each intermediate (they each sum to 1) */
+  control?: {
+    transition_states: { index: number; step: string; x_tof: number }[];
+    intermediates: { index: number; x_tof: number }[];
+  };
+}
+
+const KJ = 1000;
+
+/** Profile and energetic span of a derived mechanism; no result without a route. */
+export function energyAnalysis(record: MechanismRecord, derivation: Derivation): { energy?: EnergyResult; diagnostics: Diagnostic[] } {
+  const { mechanism, stoichiometricNumbers: sigma, overall } = derivation;
+  if (!mechanism || !sigma || !overall) return { diagnostics: [] };
+  const { conditions, diagnostics } = energyConditions(record);
+  const read = readStepEnergies(record, mechanism);
+  diagnostics.push(...read.diagnostics);
+  const built = buildEnergyProfile({ mechanism, sigma, reactants: overall.reactants, energies: read.energies, basis: conditions.basis });
+  diagnostics.push(...built.diagnostics);
+  const profile = built.profile;
+  const energy: EnergyResult = { ...profile, T: conditions.T };
+  // A profile with a transition state below a minimum is wrong somewhere; no span is read from it.
+  if (profile.schematic || built.diagnostics.some((d) => d.severity === 'error')) return { energy, diagnostics };
+  const minima = profile.states.filter((s) => s.kind === 'minimum').map((s) => s.energy! * KJ);
+  const transitions = profile.states.filter((s) => s.kind === 'transition').map((s) => s.energy! * KJ);
+  const span = energeticSpan({ minima, transitions, T: conditions.T, kind: profile.kind });
+  if (!span) return { energy, diagnostics };
+  Object.assign(energy, spanFields(profile, span, conditions.basis === 'G'));
+  if (conditions.basis !== 'G') {
+    diagnostics.push(
+      diagnostic('energy/profile', 'info', `the energies are ${conditions.basis === 'H' ? 'enthalpies' : 'electronic energies'}; the span and its determining states are shown, but a turnover frequency needs Gibbs energies`, {
+        path: ['energy', 'basis'],
+      }),
+    );
+  }
+  if (profile.kind === 'cycle' && span.reactionEnergy > 0) {
+    diagnostics.push(
+      diagnostic('energy/profile', 'warning', `one turnover is endergonic (ΔG_r = +${+(span.reactionEnergy / KJ).toPrecision(6)} kJ/mol): at the standard state the cycle runs backwards`, {
+        path: ['steps'],
+      }),
+    );
+  }
+  diagnostics.push(...rdsAgainstSpan(mechanism, energy));
+  return { energy, diagnostics };
+}
+
+function spanFields(profile: EnergyProfile, span: SpanResult, gibbs: boolean): Partial<EnergyResult> {
+  const transitionStates = profile.states.filter((s) => s.kind === 'transition');
+  const step = (i: number) => transitionStates[i - 1]?.step ?? '';
+  return {
+    span: span.span / KJ,
+    tdts_step: step(span.tdts),
+    tdts_state: span.tdts,
+    tdi_state: span.tdi,
+    ...(gibbs && { tof_per_s: span.tof, tof_span_per_s: span.tofSpan }),
+    control: {
+      transition_states: span.controlTransitions.map((x, k) => ({ index: k + 1, step: step(k + 1), x_tof: x })),
+      intermediates: span.controlIntermediates.map((x, j) => ({ index: j, x_tof: x })),
+    },
+  };
+}
+
+// The declared rds is a claim about which transition state limits the rate; the energetic span
+// says which one does, measured from the lowest preceding minimum rather than from its own start.
+function rdsAgainstSpan(mechanism: Mechanism, energy: EnergyResult): Diagnostic[] {
+  const rds = mechanism.steps.find((s) => s.rds);
+  if (!rds || energy.tdts_step === undefined || energy.rds_step === undefined || rds.label === energy.tdts_step) return [];
+  return [
+    diagnostic(
+      'energy/rds-span',
+      'warning',
+      `step ${rds.label} is declared rate-determining, but the energetic span puts the TOF-determining transition state at step ${energy.tdts_step} (δE = ${+energy.span!.toPrecision(6)} kJ/mol from state ${energy.tdi_state})`,
+      {
+        path: ['steps', rds.index, 'rds'],
+        actual: rds.label,
+        expected: energy.tdts_step,
+        note: 'the quantity that matters is the span from the lowest preceding minimum, not the height of the peak and not the single largest barrier',
+      },
+    ),
+  ];
+}

@@ -1,0 +1,61 @@
+/**
+ * Dense LU factorisation with partial pivoting, in place, for the small iteration matrices of
+ * the stiff integrator (a few to a few dozen species). Row-major storage, n × n.
+ */
+
+/**
+ * Factors `a` in place into unit-lower L and upper U with row swaps recorded in `pivots`;
+ * returns false when a pivot is exactly zero or not finite (the caller shrinks the step).
+ */
+export function luFactor(a: Float64Array, n: number, pivots: Int32Array): boolean {
+  for (let k = 0; k < n; k++) {
+    // The largest pivot in the column keeps the multipliers at most 1 in size.
+    let p = k;
+    let max = Math.abs(a[k * n + k]!);
+    for (let i = k + 1; i < n; i++) {
+      const v = Math.abs(a[i * n + k]!);
+      if (v > max) {
+        max = v;
+        p = i;
+      }
+    }
+    pivots[k] = p;
+    if (max === 0 || !Number.isFinite(max)) return false;
+    if (p !== k) {
+      for (let j = 0; j < n; j++) {
+        const tmp = a[k * n + j]!;
+        a[k * n + j] = a[p * n + j]!;
+        a[p * n + j] = tmp;
+      }
+    }
+    const inv = 1 / a[k * n + k]!;
+    for (let i = k + 1; i < n; i++) {
+      const factor = a[i * n + k]! * inv;
+      a[i * n + k] = factor;
+      if (factor === 0) continue;
+      for (let j = k + 1; j < n; j++) a[i * n + j] = a[i * n + j]! - factor * a[k * n + j]!;
+    }
+  }
+  return true;
+}
+
+/** Solves A x = b in place in `b`, given the factors and pivots from `luFactor`. */
+export function luSolve(lu: Float64Array, n: number, pivots: Int32Array, b: Float64Array): void {
+  // Forward substitution applies the row swaps in the order they were made.
+  for (let k = 0; k < n; k++) {
+    const p = pivots[k]!;
+    if (p !== k) {
+      const tmp = b[k]!;
+      b[k] = b[p]!;
+      b[p] = tmp;
+    }
+    const bk = b[k]!;
+    if (bk === 0) continue;
+    for (let i = k + 1; i < n; i++) b[i] = b[i]! - lu[i * n + k]! * bk;
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    let s = b[i]!;
+    for (let j = i + 1; j < n; j++) s -= lu[i * n + j]! * b[j]!;
+    b[i] = s / lu[i * n + i]!;
+  }
+}

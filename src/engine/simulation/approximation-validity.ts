@@ -1,0 +1,112 @@
+/**
+ * How good each derived rate law is at an observation's conditions (DESIGN.md item 7): the
+ * simulated initial rate, apparent orders by simulation (each starting concentration scaled by
+ * 1.05^±1, log–log slope), and the relative error |r_law − r_sim| / r_sim of every rate law,
+ * evaluated at the simulated state at 1 % conversion. Errors above the threshold become
+ * `approximation/invalid` warnings that say which assumption fails.
+ */
+import type { MechanismRecord } from '../../records/mechanism-record.ts';
+import type { Derivation } from '../derive.ts';
+import { diagnostic, type Diagnostic } from '../diagnostic.ts';
+import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
+import { solveSteadyStateNumeric } from '../rate-law/steady-state-numeric.ts';
+import { concentration } from '../rate-law/symbols.ts';
+import { explainFailure } from './explain-failure.ts';
+import { simulatedInitialRate } from './initial-rate.ts';
+import { simulationSetup, type SimulationSetup } from './simulation-setup.ts';
+
+/** Relative error above which an approximation is reported invalid (10 %, configurable). */
+export const DEFAULT_APPROXIMATION_THRESHOLD = 0.1;
+const PERTURBATION = 1.05;
+
+export interface SimulationCheck {
+  observation: string;
+  status: 'ok' | 'failed' | 'skipped';
+  message?: string;
+  initialRate?: number;
+  /** time at which the initial rate was read, in s */
+  time?: number;
+  orders: Record<string, number>;
+  approximationError: Partial<Record<'rds' | 'steady_state', number>>;
+}
+
+/** Simulates every observation that has constants and concentrations. */
+export function checkApproximations(record: MechanismRecord, derivation: Derivation, constants: ReadonlyMap<string, number>, threshold = DEFAULT_APPROXIMATION_THRESHOLD): { checks: SimulationCheck[]; diagnostics: Diagnostic[] } {
+  const checks: SimulationCheck[] = [];
+  const diagnostics: Diagnostic[] = [];
+  (record.observations ?? []).forEach((observation, index) => {
+    const base = { observation: observation.id, orders: {}, approximationError: {} };
+    const setup = simulationSetup(derivation, constants, observation);
+    if ('missing' in setup) {
+      checks.push({ ...base, status: 'skipped', message: `not simulated: needs ${setup.missing}` });
+      return;
+    }
+    const result = simulatedInitialRate(setup.model, setup.y0, setup.probe);
+    if (result.status !== 'ok' || !(result.rate > 0)) {
+      checks.push({ ...base, status: 'failed', message: result.status === 'ok' ? 'the simulated rate is not positive' : result.message });
+      return;
+    }
+    const check: SimulationCheck = { ...base, status: 'ok', initialRate: result.rate, time: result.time, orders: simulatedOrders(setup, Object.keys(observation.orders ?? {})) };
+    for (const derived of derivation.rateLaws ?? []) {
+      const approx = lawRateAt(derived, setup, result.state, constants);
+      if (approx === undefined) continue;
+      const error = Math.abs(approx - result.rate) / result.rate;
+      check.approximationError[derived.law.method] = Math.round(error * 1e4) / 1e4;
+      if (error > threshold) {
+        diagnostics.push(
+          diagnostic('approximation/invalid', 'warning', `${describe(derived)} is off by ${(error * 100).toFixed(0)} % at observation ${observation.id}: ${explainFailure(derived, derivation, setup, result.state)}`, {
+            path: ['observations', index],
+            actual: error,
+            expected: `≤ ${threshold}`,
+          }),
+        );
+      }
+    }
+    checks.push(check);
+  });
+  return { checks, diagnostics };
+}
+
+function describe(derived: DerivedRateLaw): string {
+  return derived.law.method === 'rds' ? 'the rate-determining-step rate law' : 'the steady-state rate law';
+}
+
+/** Apparent orders by simulation: central log–log slope over starting concentrations × 1.05^±1. */
+function simulatedOrders(setup: SimulationSetup, species: string[]): Record<string, number> {
+  const out: Record<string, number> = {};
+  for (const sp of species) {
+    const i = setup.model.species.indexOf(sp);
+    if (i < 0 || !(setup.y0[i]! > 0)) continue;
+    const rates = [PERTURBATION, 1 / PERTURBATION].map((f) => {
+      const y0 = Float64Array.from(setup.y0);
+      y0[i] = y0[i]! * f;
+      const r = simulatedInitialRate(setup.model, y0, setup.probe);
+      return r.status === 'ok' ? r.rate : Number.NaN;
+    });
+    const slope = Math.log(rates[0]! / rates[1]!) / Math.log(PERTURBATION * PERTURBATION);
+    if (Number.isFinite(slope)) out[sp] = Math.round(slope * 1e4) / 1e4;
+  }
+  return out;
+}
+
+/** The rate law's value at the simulated state (external concentrations, catalyst totals). */
+export function lawRateAt(derived: DerivedRateLaw, setup: SimulationSetup, state: Float64Array, constants: ReadonlyMap<string, number>): number | undefined {
+  const values = new Map(constants);
+  setup.model.species.forEach((sp, i) => values.set(concentration(sp), state[i]!));
+  for (const balance of derived.law.catalystBalances) {
+    values.set(balance.total, setup.y0[setup.model.species.indexOf(balance.catalyst)]!);
+  }
+  if (derived.law.expression) {
+    const e = derived.law.expression;
+    const totals = e.symbols().filter((s) => s.endsWith(']_T'));
+    for (const t of totals) if (!values.has(t)) values.set(t, setup.y0[setup.model.species.indexOf(t.slice(1, -3))] ?? Number.NaN);
+    if (!e.symbols().every((s) => values.has(s))) return undefined;
+    const r = e.evaluate(values);
+    return Number.isFinite(r) ? r : undefined;
+  }
+  if (derived.law.nonlinear) {
+    for (const u of derived.law.nonlinear.unknowns) values.delete(u);
+    return solveSteadyStateNumeric(derived.law.nonlinear, values)?.rate;
+  }
+  return undefined;
+}
