@@ -1,26 +1,38 @@
 /**
- * `mechatlas build`: builds the catalogue from a folder of records into an output folder.
- * For now the catalogue is its review report (JSON for tools, markdown for people); the site
- * build joins it here.
+ * `mechatlas build [--content DIR] [--out DIR] [--strict]`: builds the catalogue site from a
+ * folder of records (the same Astro build, pointed elsewhere). Records with errors get pages that
+ * show their diagnostics; the build reports them and only fails on them with --strict.
  */
-import { mkdir, writeFile } from 'node:fs/promises';
-import { join } from 'node:path';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { findRecordFiles } from '../records/index.ts';
 import { checkRecordFiles } from './check-records.ts';
 import { UsageError, type Output } from './output.ts';
 import { catalogueReport } from './report/catalogue-report.ts';
-import { markdownReport } from './report/markdown.ts';
 import { summaryLine } from './report/text.ts';
 import { toolVersion } from './version.ts';
 
-/** Writes OUT/report.json and OUT/report.md; a record with errors is reported, not fatal. */
-export async function buildCommand(options: { content: string; out: string }, out: Output): Promise<number> {
-  const { files, missing } = await findRecordFiles([options.content]);
-  if (missing.length > 0) throw new UsageError(`no such folder: ${options.content}`);
+const ROOT = fileURLToPath(new URL('../..', import.meta.url));
+
+export interface BuildOptions {
+  content: string;
+  out: string;
+  strict: boolean;
+}
+
+/** Builds the site; exit 1 only with --strict and errors in some record. */
+export async function buildCommand(options: BuildOptions, out: Output): Promise<number> {
+  const content = resolve(options.content);
+  const outDir = resolve(options.out);
+  if (!existsSync(content)) throw new UsageError(`no such folder: ${options.content}`);
+  const { files } = await findRecordFiles([content]);
   const report = catalogueReport(await checkRecordFiles(files), toolVersion());
-  await mkdir(options.out, { recursive: true });
-  await writeFile(join(options.out, 'report.json'), JSON.stringify(report, null, 2) + '\n');
-  await writeFile(join(options.out, 'report.md'), markdownReport(report));
-  out.stdout(`built ${options.out}/report.json and ${options.out}/report.md — ${summaryLine(report)}\n`);
-  return 0;
+  process.env['MECHATLAS_CONTENT'] = content;
+  process.env['MECHATLAS_OUT'] = outDir;
+  const { build } = await import('astro');
+  await build({ root: ROOT, outDir, logLevel: 'warn' });
+  out.stdout(`built the catalogue of ${options.content} into ${options.out}/ — ${summaryLine(report)}\n`);
+  if (report.summary.errors > 0) out.stderr(`${report.summary.errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
+  return options.strict && report.summary.errors > 0 ? 1 : 0;
 }

@@ -14,8 +14,9 @@ commands:
                       check records (default folder content/mechanisms)
   derive FILE         print one record's derivation step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
-  build [--content DIR] [--out DIR]
-                      build the catalogue from a folder of records
+  build [--content DIR] [--out DIR] [--strict]
+                      build the catalogue site (default content/mechanisms into dist);
+                      --strict fails when a record has errors
 
 options:
   -h, --help          this text
@@ -61,8 +62,12 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
       return newCommand(positionals[0]!, values.dir, out);
     }
     case 'build': {
-      const { values } = parseArgs({ args: rest, allowPositionals: false, options: { content: { type: 'string', default: 'content/mechanisms' }, out: { type: 'string', default: 'dist' } } });
-      return buildCommand({ content: values.content, out: values.out }, out);
+      const { values } = parseArgs({
+        args: rest,
+        allowPositionals: false,
+        options: { content: { type: 'string', default: 'content/mechanisms' }, out: { type: 'string', default: 'dist' }, strict: { type: 'boolean', default: false } },
+      });
+      return buildCommand({ content: values.content, out: values.out, strict: values.strict }, out);
     }
     default:
       throw new UsageError(`unknown command '${command}'`);

@@ -1,0 +1,135 @@
+/**
+ * What a mechanism page shows, as plain JSON built from the engine's derivation (the site
+ * renders it and recomputes no chemistry): the report, the steps with their marks, the overall
+ * equation in LaTeX with catalysts over the arrow, and the species with their roles.
+ */
+import type { CheckedRecord } from '../cli/check-records.ts';
+import { recordReport, type RecordReport } from '../cli/report/record-report.ts';
+import { molecularity } from '../engine/molecularity.ts';
+import { energyProfileSvg } from '../engine/plots/energy-profile-svg.ts';
+import { speciesLatex } from '../engine/rate-law/species-latex.ts';
+import type { Rational } from '../engine/rational.ts';
+import type { Reference } from '../records/mechanism-record.ts';
+
+export interface StepView {
+  index: number;
+  label: string;
+  equation: string;
+  reversible: boolean;
+  rds: boolean;
+  molecularity: number;
+  sigma?: number;
+  k?: string;
+  kRev?: string;
+  K?: string;
+  barrier?: string;
+  change?: string;
+  /** atoms and charge: balanced, not balanced, or not checked (no composition) */
+  balance: 'balanced' | 'unbalanced' | 'unchecked';
+  note?: string;
+}
+
+export interface SpeciesView {
+  symbol: string;
+  role?: string;
+  buffered: boolean;
+  name?: string;
+  formula?: string;
+  inchi?: string;
+  smiles?: string;
+  aliases: string[];
+}
+
+export interface RecordView {
+  id: string;
+  file: string;
+  source: string;
+  title: string;
+  system?: string;
+  status?: string;
+  tags: string[];
+  contributors: string[];
+  added?: string;
+  notes?: string;
+  references: Reference[];
+  steps: StepView[];
+  species: SpeciesView[];
+  overallLatex?: string;
+  report: RecordReport;
+  /** the energy profile as SVG (schematic when the steps record no energies) */
+  energySvg?: string;
+  /** concentration–time curves of the simulation, where constants allow one */
+  concentrationSvg?: string;
+  errors: number;
+  warnings: number;
+  /** no errors and no observation contradicted by the primary rate law */
+  survives: boolean;
+}
+
+/** Builds the page data of one checked record. */
+export function recordView(checked: CheckedRecord, source: string): RecordView {
+  const report = recordReport(checked);
+  const record = checked.loaded.record;
+  const derivation = checked.derivation;
+  const count = (s: string) => report.diagnostics.filter((d) => d.severity === s).length;
+  const view: RecordView = {
+    id: checked.id,
+    file: checked.file,
+    source,
+    title: record?.title ?? checked.id,
+    tags: record?.tags ?? [],
+    contributors: record?.contributors ?? [],
+    references: record?.references ?? [],
+    steps: [],
+    species: [],
+    report,
+    errors: count('error'),
+    warnings: count('warning'),
+    survives: false,
+  };
+  if (record) Object.assign(view, { system: record.system, status: record.status }, record.added && { added: record.added }, record.notes && { notes: record.notes });
+  const mechanism = derivation?.mechanism;
+  if (mechanism && record) {
+    view.steps = mechanism.steps.map((step): StepView => {
+      const entry = record.steps[step.index]!;
+      const onStep = report.diagnostics.filter((d) => checked.diagnostics.some((x) => x.message === d.message && x.path?.[0] === 'steps' && x.path[1] === step.index));
+      const balance = onStep.some((d) => d.severity === 'error' && d.rule.startsWith('balance/'))
+        ? 'unbalanced'
+        : onStep.some((d) => d.rule === 'balance/atoms') || mechanism.notation === 'labels'
+          ? 'unchecked'
+          : 'balanced';
+      const out: StepView = { index: step.index, label: step.label, equation: step.text, reversible: step.reversible, rds: step.rds, molecularity: molecularity(step.reactants), balance };
+      const sigma = derivation.stoichiometricNumbers?.[step.index];
+      if (sigma !== undefined) out.sigma = sigma;
+      for (const [key, field] of [['k', 'k'], ['kRev', 'k_rev'], ['K', 'K']] as const) if (entry[field] !== undefined) out[key] = String(entry[field]);
+      if (entry.energy?.barrier !== undefined) out.barrier = String(entry.energy.barrier);
+      if (entry.energy?.change !== undefined) out.change = String(entry.energy.change);
+      if (entry.note) out.note = entry.note;
+      return out;
+    });
+    view.species = [...mechanism.species.values()].map((s) => {
+      const out: SpeciesView = { symbol: s.symbol, buffered: s.buffered, aliases: s.entry?.aliases ?? [] };
+      const role = derivation.roles?.get(s.symbol);
+      if (role) out.role = role;
+      if (s.entry?.name) out.name = s.entry.name;
+      const formula = s.entry?.formula ?? (mechanism.notation === 'formulas' ? s.symbol : undefined);
+      if (formula) out.formula = formula;
+      if (s.entry?.inchi) out.inchi = s.entry.inchi;
+      if (s.entry?.smiles) out.smiles = s.entry.smiles;
+      return out;
+    });
+  }
+  if (derivation?.energy) view.energySvg = energyProfileSvg(derivation.energy, { idPrefix: `energy-${checked.id}`, title: `Energy profile of ${view.title}` });
+  if (derivation?.overall) view.overallLatex = overallLatex(derivation.overall.reactants, derivation.overall.products, derivation.overall.catalysts);
+  const failed = (report.observations ?? []).some((o) => o.status === 'fail' && o.method === report.rate_laws?.[0]?.method);
+  view.survives = view.errors === 0 && !failed;
+  return view;
+}
+
+/** `2\,\mathrm{H_2O_2} \xrightarrow{\mathrm{I^-}} 2\,\mathrm{H_2O} + \mathrm{O_2}`: catalysts over the arrow. */
+export function overallLatex(reactants: ReadonlyMap<string, Rational>, products: ReadonlyMap<string, Rational>, catalysts: readonly string[]): string {
+  const side = (m: ReadonlyMap<string, Rational>) =>
+    [...m].map(([sp, c]) => `${c.equals(c.div(c)) ? '' : `${c.toString()}\\,`}${speciesLatex(sp)}`).join(' + ') || '\\varnothing';
+  const arrow = catalysts.length > 0 ? `\\xrightarrow{${catalysts.map(speciesLatex).join(',\\,')}}` : '\\longrightarrow';
+  return `${side(reactants)} ${arrow} ${side(products)}`;
+}
