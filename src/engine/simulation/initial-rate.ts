@@ -13,6 +13,10 @@ import type { MassActionModel } from './mass-action-system.ts';
 export const CONVERSION_FOR_INITIAL_RATE = 0.01;
 const LAST_TIME = 1e12;
 const OUTPUTS_PER_DECADE = 8;
+const COARSE_ABSOLUTE_TOLERANCE = 1e-14;
+// Radicals and bound catalyst sit many decades below the reactants: the refined pass resolves
+// each species relative to its own size along the coarse pass.
+const RELATIVE_TO_OWN_SCALE = 1e-9;
 
 export interface RateProbe {
   /** which species gives the overall rate, and its coefficient in the overall equation */
@@ -31,7 +35,7 @@ export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, p
   const target = CONVERSION_FOR_INITIAL_RATE * probe.maxExtent;
   const extent = (y: Float64Array) => (y[probe.product]! - y0[probe.product]!) / probe.coefficient;
   const times = logTimes(1e-9, LAST_TIME);
-  const coarse = integrateStiff(model.system, y0, { tEnd: LAST_TIME, outputTimes: times, rtol: 1e-7, atol: 1e-14 * Math.max(1, probe.maxExtent), nonNegative: true, maxSteps: 50_000 });
+  const coarse = integrateStiff(model.system, y0, { tEnd: LAST_TIME, outputTimes: times, rtol: 1e-7, atol: COARSE_ABSOLUTE_TOLERANCE * Math.max(1, probe.maxExtent), nonNegative: true, maxSteps: 50_000 });
   const hit = coarse.y.findIndex((y) => extent(y) >= target);
   if (hit < 0) {
     return { status: 'failed', message: coarse.status === 'ok' ? `the reaction does not reach ${CONVERSION_FOR_INITIAL_RATE * 100} % conversion within ${LAST_TIME} s` : coarse.message ?? coarse.status };
@@ -39,7 +43,8 @@ export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, p
   const t0 = hit === 0 ? 0 : coarse.t[hit - 1]!;
   const start = hit === 0 ? y0 : coarse.y[hit - 1]!;
   const fine = Array.from({ length: 40 }, (_, i) => t0 + ((coarse.t[hit]! - t0) * (i + 1)) / 40);
-  const refined = integrateStiff(model.system, start, { t0, tEnd: fine.at(-1)!, outputTimes: fine, rtol: 1e-8, atol: 1e-15 * Math.max(1, probe.maxExtent), nonNegative: true, maxSteps: 50_000 });
+  const atol = ownScaleTolerance([y0, ...coarse.y.slice(0, hit + 1)], probe.maxExtent);
+  const refined = integrateStiff(model.system, start, { t0, tEnd: fine.at(-1)!, outputTimes: fine, rtol: 1e-8, atol, nonNegative: true, maxSteps: 50_000 });
   const at = refined.y.findIndex((y) => extent(y) >= target);
   const index = at < 0 ? refined.y.length - 1 : at;
   const state = refined.y[index] ?? coarse.y[hit]!;
@@ -47,6 +52,16 @@ export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, p
   const dydt = new Float64Array(state.length);
   model.system.rhs(time, state, dydt);
   return { status: 'ok', rate: dydt[probe.product]! / probe.coefficient, time, state };
+}
+
+/** Absolute tolerance per species: a small fraction of the largest value it reached. */
+function ownScaleTolerance(states: readonly Float64Array[], maxExtent: number): Float64Array {
+  const atol = new Float64Array(states[0]!.length);
+  for (let i = 0; i < atol.length; i++) {
+    const scale = Math.max(...states.map((y) => Math.abs(y[i]!)));
+    atol[i] = Math.max(RELATIVE_TO_OWN_SCALE * scale, 1e-30 * maxExtent, Number.MIN_VALUE);
+  }
+  return atol;
 }
 
 function logTimes(first: number, last: number): number[] {
