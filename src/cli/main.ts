@@ -3,6 +3,7 @@ import { parseArgs } from 'node:util';
 import { buildCommand } from './build-command.ts';
 import { checkCommand } from './check-command.ts';
 import { deriveCommand } from './derive-command.ts';
+import { exportCommand } from './export-command.ts';
 import { newCommand } from './new-command.ts';
 import { processOutput, UsageError, type Output } from './output.ts';
 import { toolVersion } from './version.ts';
@@ -14,6 +15,8 @@ commands:
                       check records (default folder content/mechanisms)
   derive FILE         print one record's derivation step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
+  export --sbml ID|FILE [--out FILE]
+                      write the record's mass-action model as SBML Level 3 Version 2
   build [--content DIR] [--out DIR] [--strict]
                       build the catalogue site (default content/mechanisms into dist);
                       --strict fails when a record has errors
@@ -60,6 +63,12 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
       const { values, positionals } = parseArgs({ args: rest, allowPositionals: true, options: { dir: { type: 'string', default: 'content/mechanisms' } } });
       if (positionals.length !== 1) throw new UsageError('new takes exactly one record id');
       return newCommand(positionals[0]!, values.dir, out);
+    }
+    case 'export': {
+      const { values, positionals } = parseArgs({ args: rest, allowPositionals: true, options: { sbml: { type: 'boolean', default: false }, out: { type: 'string' } } });
+      if (!values.sbml) throw new UsageError('export needs a format: --sbml');
+      if (positionals.length !== 1) throw new UsageError('export takes exactly one record id or file');
+      return exportCommand(positionals[0]!, values.out, out);
     }
     case 'build': {
       const { values } = parseArgs({

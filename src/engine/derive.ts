@@ -31,6 +31,8 @@ export interface Derivation {
   buffered: string[];
   rateLaws?: DerivedRateLaw[];
   observations?: ObservationCheck[];
+  /** numeric rate and equilibrium constants by symbol (k_1, k_-1, K_1), given or from energies */
+  constants?: Map<string, number>;
   /** labels of the steps whose rate constants come from their energies (Eyring) */
   constantsFromEnergies?: string[];
   /** the energy profile (schematic without energies) and the energetic span */
@@ -80,6 +82,7 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
     buffered,
     rateLaws: rates.rateLaws,
     observations: rates.observations,
+    constants: constantValues(mechanism, fromEnergies.constants),
     constantsFromEnergies: fromEnergies.labels,
     diagnostics,
   };
@@ -87,11 +90,16 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
   if (energy.energy) derivation.energy = energy.energy;
   diagnostics.push(...energy.diagnostics);
   if (options.simulate !== false && (record.observations ?? []).length > 0) {
-    const simulated = checkApproximations(record, derivation, constantValues(mechanism, fromEnergies.constants), options.approximationThreshold);
+    const simulated = checkApproximations(record, derivation, derivation.constants!, options.approximationThreshold);
     derivation.simulation = simulated.checks;
     diagnostics.push(...simulated.diagnostics);
   }
   return derivation;
+}
+
+/** The numeric constants by symbol (k_1, k_-1, K_1) the simulations use: given, or from the step energies by Eyring. */
+export function simulationConstants(record: MechanismRecord, mechanism: Mechanism): Map<string, number> {
+  return constantValues(mechanism, fillFromEnergies(record, mechanism, readStepConstants(record, mechanism).constants).constants);
 }
 
 /**
