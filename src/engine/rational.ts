@@ -41,11 +41,19 @@ export class Rational {
     return Rational.of(sign === '-' ? -num : num, den);
   }
 
-  /** The exact value of a finite double (every double is a dyadic rational). */
+  /** The exact value of a finite double (every double is a dyadic rational m·2^e). */
   static fromNumber(x: number): Rational {
     if (!Number.isFinite(x)) throw new RangeError(`not a finite number: ${x}`);
-    if (Number.isInteger(x)) return Rational.of(BigInt(x));
-    return Rational.parse(x.toExponential(20)) ?? Rational.ZERO;
+    if (Number.isSafeInteger(x)) return Rational.of(BigInt(x));
+    const view = new DataView(new ArrayBuffer(8));
+    view.setFloat64(0, x);
+    const bits = view.getBigUint64(0);
+    const sign = bits >> 63n === 1n ? -1n : 1n;
+    const biased = Number((bits >> 52n) & 0x7ffn);
+    const fraction = bits & ((1n << 52n) - 1n);
+    const mantissa = biased === 0 ? fraction : fraction | (1n << 52n);
+    const exponent = (biased === 0 ? 1 : biased) - 1075;
+    return exponent >= 0 ? Rational.of(sign * (mantissa << BigInt(exponent))) : Rational.of(sign * mantissa, 1n << BigInt(-exponent));
   }
 
   add(o: Rational): Rational {
@@ -85,8 +93,14 @@ export class Rational {
   isInteger(): boolean {
     return this.den === 1n;
   }
+  /** The nearest double (within an ulp or so), also when numerator and denominator are huge. */
   toNumber(): number {
-    return Number(this.num) / Number(this.den);
+    const limit = 1n << 53n;
+    if ((this.num < limit && -this.num < limit) && this.den < limit) return Number(this.num) / Number(this.den);
+    // Keep 64 significant bits of the quotient, then scale back by a power of two.
+    const shift = bitLength(this.den) - bitLength(this.num < 0n ? -this.num : this.num) + 64;
+    const q = shift >= 0 ? (this.num << BigInt(shift)) / this.den : this.num / (this.den << BigInt(-shift));
+    return Number(q) * 2 ** -Math.min(shift, 1000) * 2 ** -Math.max(shift - 1000, 0);
   }
   /** `3`, `-1/2`. */
   toString(): string {
@@ -110,6 +124,10 @@ export function gcd(a: bigint, b: bigint): bigint {
 /** Least common multiple of positive bigints. */
 export function lcm(a: bigint, b: bigint): bigint {
   return (a / gcd(a, b)) * b;
+}
+
+function bitLength(x: bigint): number {
+  return x === 0n ? 0 : x.toString(2).length;
 }
 
 function toBigInt(x: bigint | number): bigint {

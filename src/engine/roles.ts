@@ -1,12 +1,14 @@
 /**
  * Roles of species (DESIGN.md item 3), derived from the route: net consumed → reactant,
- * net formed → product, net zero → intermediate (formed first) or catalyst (consumed first).
+ * net formed → product, net zero → catalyst when it must be present for the route to start
+ * (see catalyst-seeds.ts), otherwise intermediate.
  * A solvent keeps its stoichiometry but is named as such; a species on both sides of every
  * step it takes part in is a third body. Declared roles are checked against the derived ones.
  */
 import type { Role } from '../records/mechanism-record.ts';
 import { diagnostic, type Diagnostic } from './diagnostic.ts';
 import type { Mechanism } from './mechanism.ts';
+import { catalystSeeds } from './catalyst-seeds.ts';
 import { netOverRoute } from './overall-equation.ts';
 
 const NET_ZERO_KINDS: ReadonlySet<Role> = new Set(['intermediate', 'catalyst', 'inhibitor']);
@@ -16,6 +18,7 @@ export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { r
   const net = netOverRoute(mechanism, sigma);
   const roles = new Map<string, Role>();
   const offRoute = new Set<string>();
+  const seeds = catalystSeeds(mechanism, sigma, net);
   for (const [symbol, species] of mechanism.species) {
     const n = net.get(symbol)!;
     const firstOnRoute = firstChange(mechanism, symbol, (i) => (sigma[i] ?? 0) > 0);
@@ -26,10 +29,10 @@ export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { r
     else if (n.sign() < 0) role = 'reactant';
     else if (n.sign() > 0) role = 'product';
     else {
-      const first = firstOnRoute || firstAnywhere;
       if (firstOnRoute === 0) offRoute.add(symbol);
-      role = first > 0 ? 'intermediate' : 'catalyst';
-      // The record decides between the net-zero kinds; the step order is only a convention.
+      // Off the route, a binder that nothing makes (a free inhibitor) is consumed first; what it makes is an intermediate.
+      role = firstOnRoute === 0 ? (firstAnywhere > 0 ? 'intermediate' : 'catalyst') : seeds.has(symbol) ? 'catalyst' : 'intermediate';
+      // The record decides between the net-zero kinds where it says.
       if (species.declaredRole === 'intermediate' || species.declaredRole === 'catalyst') role = species.declaredRole;
     }
     roles.set(symbol, role);

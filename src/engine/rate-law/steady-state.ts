@@ -10,7 +10,7 @@ import { diagnostic, type Diagnostic } from '../diagnostic.ts';
 import { Rational } from '../rational.ts';
 import type { RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
-import { forwardRate, netRate, reverseRate } from './mass-action.ts';
+import { netRate } from './mass-action.ts';
 import type { RateLaw, TraceLine } from './rate-law.ts';
 import { overallRatePolynomial } from './overall-rate.ts';
 import { concentration } from './symbols.ts';
@@ -89,4 +89,3 @@ function substituteLinear(p: Polynomial, symbols: string[], values: RationalFunc
   return out;
 }
 
-export { forwardRate, reverseRate };
