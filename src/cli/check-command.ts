@@ -17,6 +17,8 @@ export interface CheckOptions {
   targets: string[];
   format: string;
   base?: string;
+  /** relative error above which an approximation is reported invalid */
+  approximationThreshold?: number;
 }
 
 /** Runs the check and returns the exit code: 0 no error, 1 an error in any record. */
@@ -27,7 +29,9 @@ export async function checkCommand(options: CheckOptions, out: Output): Promise<
   const { files, missing } = await findRecordFiles(targets);
   if (missing.length > 0) throw new UsageError(`no such file or folder: ${missing.join(', ')}`);
   const selected = options.base === undefined ? files : changedSince(options.base, files);
-  const checked = await checkRecordFiles(selected);
+  const threshold = options.approximationThreshold;
+  if (threshold !== undefined && !(threshold > 0)) throw new UsageError('--approximation-threshold must be a positive number, e.g. 0.1 for 10 %');
+  const checked = await checkRecordFiles(selected, threshold === undefined ? {} : { approximationThreshold: threshold });
   const report = catalogueReport(checked, toolVersion());
   out.stdout(render(report as never));
   return report.summary.errors > 0 ? 1 : 0;

@@ -12,7 +12,10 @@ const USAGE = `usage: mechatlas <command> [options]
 
 commands:
   check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]
-                      check records (default folder content/mechanisms)
+        [--approximation-threshold 0.1]
+                      check records (default folder content/mechanisms); --base keeps
+                      the records changed since GITREF; the threshold is the relative
+                      error above which an approximation is reported invalid
   derive FILE         print one record's derivation step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
@@ -51,8 +54,21 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
   }
   switch (command) {
     case 'check': {
-      const { values, positionals } = parseArgs({ args: rest, allowPositionals: true, options: { format: { type: 'string', default: 'text' }, base: { type: 'string' } } });
-      return checkCommand({ targets: positionals, format: values.format, ...(values.base !== undefined && { base: values.base }) }, out);
+      const { values, positionals } = parseArgs({
+        args: rest,
+        allowPositionals: true,
+        options: { format: { type: 'string', default: 'text' }, base: { type: 'string' }, 'approximation-threshold': { type: 'string' } },
+      });
+      const threshold = values['approximation-threshold'];
+      return checkCommand(
+        {
+          targets: positionals,
+          format: values.format,
+          ...(values.base !== undefined && { base: values.base }),
+          ...(threshold !== undefined && { approximationThreshold: Number(threshold) }),
+        },
+        out,
+      );
     }
     case 'derive': {
       const { positionals } = parseArgs({ args: rest, allowPositionals: true, options: {} });
