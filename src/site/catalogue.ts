@@ -25,6 +25,7 @@ export interface SpeciesPage {
   slug: string;
   names: string[];
   formula?: string;
+  charge?: number;
   inchi: string[];
   smiles: string[];
   aliases: string[];
@@ -100,6 +101,7 @@ function speciesPages(records: RecordView[], slugs: Record<string, string>): Spe
       addUnique(page.smiles, s.smiles);
       for (const a of s.aliases) addUnique(page.aliases, a);
       if (s.formula && !page.formula) page.formula = s.formula;
+      if (s.charge !== undefined && page.charge === undefined) page.charge = s.charge;
       page.occurrences.push({ mechanism: record.id, title: record.title, ...(s.role && { role: s.role }), buffered: s.buffered });
       pages.set(s.symbol, page);
     }

@@ -6,10 +6,12 @@
 import type { CheckedRecord } from '../cli/check-records.ts';
 import { recordReport, type RecordReport } from '../cli/report/record-report.ts';
 import { molecularity } from '../engine/molecularity.ts';
+import { concentrationTimeSvg } from '../engine/plots/concentration-time-svg.ts';
 import { energyProfileSvg } from '../engine/plots/energy-profile-svg.ts';
+import { firstObservationSeries } from '../engine/simulation/concentration-series.ts';
 import { speciesLatex } from '../engine/rate-law/species-latex.ts';
 import type { Rational } from '../engine/rational.ts';
-import type { Reference } from '../records/mechanism-record.ts';
+import type { Observation, Reference } from '../records/mechanism-record.ts';
 
 export interface StepView {
   index: number;
@@ -35,9 +37,22 @@ export interface SpeciesView {
   buffered: boolean;
   name?: string;
   formula?: string;
+  /** from the composition, where the species has one */
+  charge?: number;
   inchi?: string;
   smiles?: string;
   aliases: string[];
+}
+
+/** An observation as the record gives it: where and under which conditions it was measured. */
+export interface ObservationView {
+  id: string;
+  source?: string;
+  T?: string;
+  /** [symbol, quantity as written] */
+  concentrations: [string, string][];
+  orders: [string, string][];
+  note?: string;
 }
 
 export interface RecordView {
@@ -52,6 +67,8 @@ export interface RecordView {
   added?: string;
   notes?: string;
   references: Reference[];
+  /** the observations as written in the record (the checks against them are in `report`) */
+  observationsGiven: ObservationView[];
   steps: StepView[];
   species: SpeciesView[];
   overallLatex?: string;
@@ -80,6 +97,7 @@ export function recordView(checked: CheckedRecord, source: string): RecordView {
     tags: record?.tags ?? [],
     contributors: record?.contributors ?? [],
     references: record?.references ?? [],
+    observationsGiven: (record?.observations ?? []).map(observationView),
     steps: [],
     species: [],
     report,
@@ -114,16 +132,28 @@ export function recordView(checked: CheckedRecord, source: string): RecordView {
       if (s.entry?.name) out.name = s.entry.name;
       const formula = s.entry?.formula ?? (mechanism.notation === 'formulas' ? s.symbol : undefined);
       if (formula) out.formula = formula;
+      if (s.composition) out.charge = s.composition.charge;
       if (s.entry?.inchi) out.inchi = s.entry.inchi;
       if (s.entry?.smiles) out.smiles = s.entry.smiles;
       return out;
     });
   }
   if (derivation?.energy) view.energySvg = energyProfileSvg(derivation.energy, { idPrefix: `energy-${checked.id}`, title: `Energy profile of ${view.title}` });
+  const series = record && derivation ? firstObservationSeries(record, derivation) : undefined;
+  if (series?.status === 'ok') view.concentrationSvg = concentrationTimeSvg(series, { logTime: true, idPrefix: `concentration-${checked.id}`, title: `Simulated concentrations against time for ${view.title} (observation ${series.observation}, log time axis)` });
   if (derivation?.overall) view.overallLatex = overallLatex(derivation.overall.reactants, derivation.overall.products, derivation.overall.catalysts);
   const failed = (report.observations ?? []).some((o) => o.status === 'fail' && o.method === report.rate_laws?.[0]?.method);
   view.survives = view.errors === 0 && !failed;
   return view;
+}
+
+function observationView(o: Observation): ObservationView {
+  const pairs = (m: Record<string, string | number> | undefined) => Object.entries(m ?? {}).map(([k, v]): [string, string] => [k, String(v)]);
+  const out: ObservationView = { id: o.id, concentrations: pairs(o.concentrations), orders: pairs(o.orders) };
+  if (o.source !== undefined) out.source = o.source;
+  if (o.T !== undefined) out.T = String(o.T);
+  if (o.note !== undefined) out.note = o.note;
+  return out;
 }
 
 /** `2\,\mathrm{H_2O_2} \xrightarrow{\mathrm{I^-}} 2\,\mathrm{H_2O} + \mathrm{O_2}`: catalysts over the arrow. */

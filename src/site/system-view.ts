@@ -9,6 +9,8 @@ import type { RecordView } from './record-view.ts';
 
 export interface RivalColumn {
   id: string;
+  /** a short column header: the id without the prefix every rival's id shares */
+  short: string;
   title: string;
   status?: string;
   overallText?: string;
@@ -16,6 +18,10 @@ export interface RivalColumn {
   /** the primary rate law */
   rateLatex?: string;
   method?: string;
+  /** the primary rate law has no closed form (solved numerically at each observation) */
+  numericOnly?: boolean;
+  /** 1-based index of this rival's overall change among the distinct ones in the system */
+  overallVariant?: number;
   survives: boolean;
   errors: number;
 }
@@ -25,6 +31,8 @@ export interface MatrixRow {
   species: string;
   observed: number;
   tolerance: number;
+  /** ids of the rivals whose own record holds this observation */
+  recordedBy: string[];
   /** per rival id: status and prediction */
   cells: Record<string, { status: string; predicted?: number; range?: [number, number] }>;
 }
@@ -49,14 +57,22 @@ export interface SystemView {
 
 /** Builds the comparison; `judged` holds each rival's checks against the observations of all rivals. */
 export function systemView(system: string, rivals: RecordView[], judged: ReadonlyMap<string, ObservationJson[]> = new Map()): SystemView {
-  const columns = rivals.map((r): RivalColumn => {
+  const shorts = shortLabels(rivals.map((r) => r.id));
+  const variants: string[] = [];
+  const columns = rivals.map((r, i): RivalColumn => {
     const law = r.report.rate_laws?.[0];
-    const c: RivalColumn = { id: r.id, title: r.title, survives: false, errors: r.errors };
+    const c: RivalColumn = { id: r.id, short: shorts[i]!, title: r.title, survives: false, errors: r.errors };
     if (r.status) c.status = r.status;
     if (r.report.overall) c.overallText = r.report.overall.text;
     if (r.overallLatex) c.overallLatex = r.overallLatex;
     if (law?.latex) c.rateLatex = law.latex;
     if (law) c.method = law.method;
+    if (law?.numeric_only) c.numericOnly = true;
+    if (r.report.overall) {
+      const key = overallKey(r.report.overall);
+      if (!variants.includes(key)) variants.push(key);
+      c.overallVariant = variants.indexOf(key) + 1;
+    }
     return c;
   });
   const rows = new Map<string, MatrixRow>();
@@ -64,7 +80,8 @@ export function systemView(system: string, rivals: RecordView[], judged: Readonl
     const method = r.report.rate_laws?.[0]?.method;
     for (const o of (judged.get(r.id) ?? r.report.observations ?? []).filter((x) => x.method === method)) {
       const key = `${o.id}\u0000${o.species}`;
-      const row = rows.get(key) ?? { observation: o.id, species: o.species, observed: o.observed, tolerance: o.tolerance, cells: {} };
+      const recordedBy = rivals.filter((x) => (x.report.observations ?? []).some((own) => own.id === o.id && own.species === o.species)).map((x) => x.id);
+      const row = rows.get(key) ?? { observation: o.id, species: o.species, observed: o.observed, tolerance: o.tolerance, recordedBy, cells: {} };
       row.cells[r.id] = { status: o.status, ...(o.predicted !== undefined && { predicted: o.predicted }), ...(o.range && { range: o.range }) };
       rows.set(key, row);
     }
@@ -74,8 +91,26 @@ export function systemView(system: string, rivals: RecordView[], judged: Readonl
     const rival = rivals.find((r) => r.id === column.id)!;
     column.survives = rival.errors === 0 && matrix.every((row) => row.cells[column.id]?.status !== 'fail');
   }
-  const texts = new Set(columns.map((c) => c.overallText).filter(Boolean));
-  return { system, rivals: columns, overallDiffers: texts.size > 1, matrix, discriminators: discriminators(rivals, columns) };
+  return { system, rivals: columns, overallDiffers: variants.length > 1, matrix, discriminators: discriminators(rivals, columns) };
+}
+
+/**
+ * The overall change as a key independent of the order the terms are written in (`B + A -> P`
+ * is the same change as `A + B -> P`); catalysts over the arrow are not part of the change.
+ */
+function overallKey(overall: { reactants: Record<string, number | string>; products: Record<string, number | string> }): string {
+  const side = (m: Record<string, number | string>) => Object.entries(m).map(([s, c]) => `${String(c)} ${s}`).sort().join(' + ');
+  return `${side(overall.reactants)} -> ${side(overall.products)}`;
+}
+
+/** Column headers for ids: each id without the hyphen-separated prefix all of them share. */
+export function shortLabels(ids: readonly string[]): string[] {
+  if (ids.length < 2) return [...ids];
+  const parts = ids.map((id) => id.split('-'));
+  let shared = 0;
+  while (parts.every((p) => p.length > shared + 1 && p[shared] === parts[0]![shared])) shared++;
+  const shorts = parts.map((p) => p.slice(shared).join('-'));
+  return new Set(shorts).size === shorts.length ? shorts : [...ids];
 }
 
 function discriminators(rivals: RecordView[], columns: RivalColumn[]): Discriminator[] {
