@@ -9,6 +9,11 @@ export interface SymbolStyle {
   latex(symbol: string): string;
   /** Order of symbols within a term and between terms of equal degree (default: code-unit order). */
   compare?(a: string, b: string): number;
+  /**
+   * Where given, terms are written in ascending order of this weight (e.g. their degree in the
+   * concentrations, so a saturation denominator reads 1 + K[S]); otherwise by descending total degree.
+   */
+  termWeight?(m: Monomial): number;
 }
 
 /** Prints every symbol as it is, in text and in LaTeX alike. */
@@ -26,6 +31,7 @@ export type Expression = Monomial | Polynomial | RationalFunction;
  */
 interface Notation {
   order(a: string, b: string): number;
+  weight?: ((m: Monomial) => number) | undefined;
   symbol(s: string): string;
   power(base: string, exponent: Rational): string;
   product(factors: string[]): string;
@@ -36,6 +42,7 @@ interface Notation {
 
 const text = (style: SymbolStyle): Notation => ({
   order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
+  weight: style.termWeight?.bind(style),
   symbol: (s) => style.text(s),
   power: (base, e) => {
     // `k_-1^2` would misread; `[I-]^2` would not, since the brackets already group it.
@@ -50,6 +57,7 @@ const text = (style: SymbolStyle): Notation => ({
 
 const latex = (style: SymbolStyle): Notation => ({
   order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
+  weight: style.termWeight?.bind(style),
   symbol: (s) => style.latex(s),
   // A base that already has a superscript (a charge, say) is braced to avoid a double superscript.
   power: (base, e) => `${base.includes('^') ? `{${base}}` : base}^{${e}}`,
@@ -82,9 +90,11 @@ function formatWith(value: Expression, notation: Notation): string {
 function polynomial(p: Polynomial, notation: Notation): string {
   if (p.isZero()) return '0';
   const ordered = p.terms.map((t) => ({ t, factors: sortFactors(t.monomial, notation) }));
+  const weight = notation.weight;
   ordered.sort(
     (a, b) =>
-      b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree) || compareFactors(a.factors, b.factors, notation),
+      (weight ? weight(a.t.monomial) - weight(b.t.monomial) : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) ||
+      compareFactors(a.factors, b.factors, notation),
   );
   return ordered
     .map(({ t }, i) => {

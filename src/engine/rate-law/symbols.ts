@@ -53,6 +53,8 @@ export function rateLawStyle(stepLabels: readonly string[], speciesOrder: readon
       const [x, y] = [rank(a), rank(b)];
       return x[0] - y[0] || x[1] - y[1] || x[2] - y[2] || (a < b ? -1 : a > b ? 1 : 0);
     },
+    // Sums read from the constant term up: 1 + K_1[S], k_-1 + k_2 + k_1[S].
+    termWeight: (m) => m.factors.reduce((n, [s, e]) => (symbolMeaning(s)?.kind === 'constant' ? n : n + e.toNumber()), 0),
   };
 }
 
