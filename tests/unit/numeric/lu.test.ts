@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { luFactor, luSolve } from '../../../src/engine/numeric/lu.ts';
+import { luFactor, luSolve, luSolveRefined } from '../../../src/engine/numeric/lu.ts';
 
 const solve = (rows: number[][], b: number[]) => {
   const n = rows.length;
@@ -26,5 +26,49 @@ describe('LU with partial pivoting', () => {
   it('reports a singular matrix instead of dividing by zero', () => {
     expect(solve([[1, 2], [2, 4]], [1, 2])).toBeUndefined();
     expect(solve([[0, 0], [0, 0]], [0, 0])).toBeUndefined();
+  });
+});
+
+describe('LU with iterative refinement', () => {
+  // A radical's balance beside a reactant's: x_S = 1e-20 and 2 x_S + x_B = 1. Partial pivoting
+  // takes the reactant's row (|2| > |1|) and eliminates with it, which adds 1e-20 to 0.5 and
+  // loses it: x_S comes back as 0, a residual of 1e-20 that is small only beside ‖b‖ = 1.
+  const a = Float64Array.of(1, 0, 2, 1);
+  const b = Float64Array.of(1e-20, 1);
+  const factored = () => {
+    const lu = Float64Array.from(a);
+    const pivots = new Int32Array(2);
+    expect(luFactor(lu, 2, pivots)).toBe(true);
+    return { lu, pivots };
+  };
+
+  it('plain partial pivoting loses the small equation', () => {
+    const { lu, pivots } = factored();
+    const x = Float64Array.from(b);
+    luSolve(lu, 2, pivots, x);
+    expect(x[0]).toBe(0);
+  });
+
+  it('one refinement from the residual recovers every component to rounding, leaving b as it was', () => {
+    const { lu, pivots } = factored();
+    const x = new Float64Array(2);
+    luSolveRefined(a, lu, 2, pivots, b, x, new Float64Array(2));
+    expect(Math.abs(x[0]! / 1e-20 - 1)).toBeLessThan(1e-15);
+    expect(x[1]).toBe(1);
+    expect(Array.from(b)).toEqual([1e-20, 1]);
+  });
+
+  it.each([
+    ['3×3', [[2, 1, 1], [4, -6, 0], [-2, 7, 2]], [5, -2, 9], [1, 1, 2]],
+    ['tiny pivot', [[1e-20, 1], [1, 1]], [1, 2], [1, 1]],
+  ])('agrees with the plain solve on a well-scaled system: %s', (_, rows, rhs, expected) => {
+    const n = rows.length;
+    const matrix = Float64Array.from(rows.flat());
+    const lu = Float64Array.from(matrix);
+    const pivots = new Int32Array(n);
+    luFactor(lu, n, pivots);
+    const x = new Float64Array(n);
+    luSolveRefined(matrix, lu, n, pivots, Float64Array.from(rhs), x, new Float64Array(n));
+    x.forEach((v, i) => expect(v).toBeCloseTo(expected[i]!, 14));
   });
 });
