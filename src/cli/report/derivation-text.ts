@@ -1,6 +1,8 @@
-/** A person's view of one derivation: steps with σ, the overall equation and the roles. */
+/** A person's view of one derivation: steps with σ, the overall equation, roles, rate laws, energies and simulations. */
 import type { CheckedRecord } from '../check-records.ts';
+import { energyLines } from './energy-text.ts';
 import { rateLawLines } from './rate-law-text.ts';
+import { simulationLines } from './simulation-text.ts';
 
 /** Renders the derivation of one checked record as plain text. */
 export function derivationText(checked: CheckedRecord): string {
@@ -30,7 +32,7 @@ export function derivationText(checked: CheckedRecord): string {
       lines.push(`  ${sp.padEnd(12)} ${role.replace('_', ' ')}${extra}`);
     }
   }
-  lines.push(...rateLawLines(derivation));
-  lines.push('', 'Derived rate laws are models; decisions on scale-up, thermal hazards or exposure rest with calorimetry, local codes and licensed practice.');
+  lines.push(...rateLawLines(derivation), ...energyLines(derivation), ...simulationLines(record, derivation));
+  lines.push('', 'Derived rate laws are models; decisions on scale-up, thermal hazards or exposure rest with', 'calorimetry, local codes and licensed practice.');
   return lines.join('\n') + '\n';
 }

@@ -13,7 +13,7 @@ import { solveSteadyStateNumeric } from '../rate-law/steady-state-numeric.ts';
 import { concentration } from '../rate-law/symbols.ts';
 import { explainFailure } from './explain-failure.ts';
 import { simulatedInitialRate } from './initial-rate.ts';
-import { simulationSetup, type SimulationSetup } from './simulation-setup.ts';
+import { rateProbe, simulationSetup, type SimulationSetup } from './simulation-setup.ts';
 
 /** Relative error above which an approximation is reported invalid (10 %, configurable). */
 export const DEFAULT_APPROXIMATION_THRESHOLD = 0.1;
@@ -46,7 +46,7 @@ export function checkApproximations(record: MechanismRecord, derivation: Derivat
       checks.push({ ...base, status: 'failed', message: result.status === 'ok' ? 'the simulated rate is not positive' : result.message });
       return;
     }
-    const check: SimulationCheck = { ...base, status: 'ok', initialRate: result.rate, time: result.time, orders: simulatedOrders(setup, Object.keys(observation.orders ?? {})) };
+    const check: SimulationCheck = { ...base, status: 'ok', initialRate: result.rate, time: result.time, orders: simulatedOrders(derivation, setup, Object.keys(observation.orders ?? {})) };
     for (const derived of derivation.rateLaws ?? []) {
       const approx = lawRateAt(derived, setup, result.state, constants);
       if (approx === undefined) continue;
@@ -72,7 +72,7 @@ function describe(derived: DerivedRateLaw): string {
 }
 
 /** Apparent orders by simulation: central log–log slope over starting concentrations × 1.05^±1. */
-function simulatedOrders(setup: SimulationSetup, species: string[]): Record<string, number> {
+function simulatedOrders(derivation: Derivation, setup: SimulationSetup, species: string[]): Record<string, number> {
   const out: Record<string, number> = {};
   for (const sp of species) {
     const i = setup.model.species.indexOf(sp);
@@ -80,8 +80,10 @@ function simulatedOrders(setup: SimulationSetup, species: string[]): Record<stri
     const rates = [PERTURBATION, 1 / PERTURBATION].map((f) => {
       const y0 = Float64Array.from(setup.y0);
       y0[i] = y0[i]! * f;
-      const r = simulatedInitialRate(setup.model, y0, setup.probe);
-      return r.status === 'ok' ? r.rate : Number.NaN;
+      // Each run is read at the same fraction of its own largest extent, as the base run is.
+      const probe = rateProbe(derivation, setup.model.species, y0, setup.held);
+      const r = 'missing' in probe ? undefined : simulatedInitialRate(setup.model, y0, probe);
+      return r?.status === 'ok' ? r.rate : Number.NaN;
     });
     const slope = Math.log(rates[0]! / rates[1]!) / Math.log(PERTURBATION * PERTURBATION);
     if (Number.isFinite(slope)) out[sp] = Math.round(slope * 1e4) / 1e4;

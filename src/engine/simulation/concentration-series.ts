@@ -1,6 +1,6 @@
 /**
  * Concentration–time series of one observation by full mass-action simulation, for the
- * concentration–time plot (DESIGN.md item 7). The span runs from a decade before the fastest
+ * concentration–time plot (DESIGN.md item 7). The span runs from well before the fastest
  * transient to the first round time (1, 2 or 5 × 10ⁿ s) by which the reaction has gone 99 % of
  * the way it goes — full conversion of the limiting reactant, or equilibrium — and at most
  * 200 × ξmax/r0 (the time full conversion would take at the initial rate; 99 % of a second-order
@@ -109,17 +109,22 @@ function fastestRate(model: MassActionModel, states: Float64Array[]): number {
   return fastest;
 }
 
-/** A power of ten a decade before the fastest transient, keeping 3 to 9 decades below the end. */
+/** A power of ten well before the fastest transient (2 % of its time constant), keeping 3 to 9 decades below the end. */
 function firstTime(fastest: number, end: number): number {
-  const wanted = fastest > 0 ? 0.1 / fastest : end * 1e-3;
+  const wanted = fastest > 0 ? 0.02 / fastest : end * 1e-3;
   const clamped = Math.min(end * 1e-3, Math.max(end * 10 ** -MAX_DECADES, wanted));
-  return 10 ** Math.floor(Math.log10(clamped));
+  return decade(Math.floor(Math.log10(clamped)));
+}
+
+/** 10ⁿ exactly as written (10 ** -5 is 0.000009999999999999999 in floating point). */
+function decade(n: number): number {
+  return Number(`1e${n}`);
 }
 
 function logTimes(first: number, last: number, perDecade: number): number[] {
   const out: number[] = [];
   const steps = Math.ceil(Math.log10(last / first) * perDecade);
-  for (let i = 0; i < steps; i++) out.push(first * 10 ** (i / perDecade));
+  for (let i = 0; i < steps; i++) out.push(Number((first * 10 ** (i / perDecade)).toPrecision(12)));
   out.push(last);
   return out;
 }
@@ -127,11 +132,11 @@ function logTimes(first: number, last: number, perDecade: number): number[] {
 function mergeTimes(logSpaced: number[], count: number, end: number): number[] {
   const linear = Array.from({ length: count }, (_, k) => (end * (k + 1)) / count);
   const all = [0, ...logSpaced, ...linear].sort((a, b) => a - b);
-  return all.filter((t, i) => i === 0 || t - all[i - 1]! > 1e-9 * end);
+  return all.filter((t, i) => i === 0 || t - all[i - 1]! > 1e-9 * t);
 }
 
 /** The smallest 1, 2 or 5 × 10ⁿ at or above t. */
 function roundUp(t: number): number {
-  const power = 10 ** Math.floor(Math.log10(t));
-  return [1, 2, 5, 10].map((m) => m * power).find((v) => v >= t * (1 - 1e-12)) ?? 10 * power;
+  const n = Math.floor(Math.log10(t));
+  return [1, 2, 5, 10].map((m) => Number(`${m}e${n}`)).find((v) => v >= t * (1 - 1e-12)) ?? decade(n + 1);
 }

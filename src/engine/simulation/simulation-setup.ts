@@ -53,7 +53,8 @@ export function simulationSetup(derivation: Derivation, constants: ReadonlyMap<s
   return 'missing' in probe ? probe : { model, y0, probe, held };
 }
 
-function rateProbe(derivation: Derivation, species: string[], y0: Float64Array, held: ReadonlySet<string>): RateProbe | { missing: string } {
+/** The product that measures the overall rate, and the largest extent the starting mixture `y0` allows. */
+export function rateProbe(derivation: Derivation, species: string[], y0: Float64Array, held: ReadonlySet<string>): RateProbe | { missing: string } {
   const overall = derivation.overall!;
   const steps = derivation.mechanism!.steps;
   const products = [...overall.products].filter(([sp]) => !held.has(sp));
