@@ -3,8 +3,10 @@
  * folder of records (the same Astro build, pointed elsewhere). Records with errors get pages that
  * show their diagnostics; the build reports them and only fails on them with --strict.
  */
+import { createHash } from 'node:crypto';
 import { existsSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { findRecordFiles } from '../records/index.ts';
 import { checkRecordFiles } from './check-records.ts';
@@ -31,7 +33,10 @@ export async function buildCommand(options: BuildOptions, out: Output): Promise<
   process.env['MECHATLAS_CONTENT'] = content;
   process.env['MECHATLAS_OUT'] = outDir;
   const { build } = await import('astro');
-  await build({ root: ROOT, outDir, logLevel: 'warn' });
+  // Astro keeps the content data store in its cache folder and reads it back during the build, so
+  // builds into different folders (parallel test files) each get their own cache, outside the tree.
+  const cacheDir = join(tmpdir(), 'mechatlas-astro-cache', createHash('sha256').update(outDir).digest('hex').slice(0, 12));
+  await build({ root: ROOT, outDir, cacheDir, logLevel: 'warn' });
   out.stdout(`built the catalogue of ${options.content} into ${options.out}/ — ${summaryLine(report)}\n`);
   if (report.summary.errors > 0) out.stderr(`${report.summary.errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
   return options.strict && report.summary.errors > 0 ? 1 : 0;

@@ -20,9 +20,45 @@ const schema: SanitizeSchema = {
   },
 };
 
+interface MdNode {
+  type: string;
+  value?: string | undefined;
+  children?: MdNode[] | undefined;
+  position?: { start: { offset?: number | undefined } } | undefined;
+  data?: unknown;
+}
+
+/** A flow math node shaped as remark-math shapes one (its hast is `pre > code.math-display`). */
+function displayMath(value: string): MdNode {
+  const code = { type: 'element', tagName: 'code', properties: { className: ['language-math', 'math-display'] }, children: [{ type: 'text', value }] };
+  return { type: 'math', value, data: { hName: 'pre', hChildren: [code] } };
+}
+
+/**
+ * A paragraph that is only `$$ … $$` on one line is display math, as people mean it; remark-math
+ * reads it as inline math (double dollars inside a paragraph), so it would render small.
+ */
+function remarkLoneDisplayMath() {
+  return (tree: unknown, file: { value: unknown }) => {
+    const source = String(file.value);
+    const walk = (node: MdNode) => {
+      if (!node.children) return;
+      node.children = node.children.map((child) => {
+        const only = child.type === 'paragraph' && child.children?.length === 1 ? child.children[0] : undefined;
+        const at = only?.position?.start.offset;
+        if (only?.type === 'inlineMath' && at !== undefined && source.startsWith('$$', at)) return displayMath(only.value ?? '');
+        walk(child);
+        return child;
+      });
+    };
+    walk(tree as MdNode);
+  };
+}
+
 const processor = unified()
   .use(remarkParse)
   .use(remarkMath)
+  .use(remarkLoneDisplayMath)
   .use(remarkRehype)
   .use(rehypeSanitize, schema)
   .use(rehypeKatex, { trust: false, strict: 'ignore', maxSize: 10, maxExpand: 200, output: 'htmlAndMathml', throwOnError: false, errorColor: '#8a1c1c' } as KatexOptions)
