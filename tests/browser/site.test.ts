@@ -5,15 +5,12 @@
  *
  * Skipped only where /usr/bin/chromium is missing and this is not CI; CI (.ci/run) installs it.
  */
-import { execFile } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { mkdir, mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { mkdir } from 'node:fs/promises';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { promisify } from 'node:util';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { SearchDoc } from '../../src/search/search-doc.ts';
 import { serveStatic, type StaticServer } from './static-server.ts';
 
@@ -40,10 +37,8 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
   const consoleErrors: string[] = [];
 
   beforeAll(async () => {
-    out = await mkdtemp(join(tmpdir(), 'mechatlas-browser-'));
-    const started = Date.now();
-    await promisify(execFile)(process.execPath, [join(ROOT, 'bin/mechatlas.mjs'), 'build', '--out', out], { cwd: ROOT, maxBuffer: 16 * 1024 * 1024 });
-    console.info(`browser suite: demo site built in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+    // The demo site is built once for the whole run by tests/global-site-builds.ts.
+    out = inject('demoSite');
     server = await serveStatic(out);
     browser = await chromium.launch({
       executablePath: CHROMIUM,
@@ -60,7 +55,6 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
   afterAll(async () => {
     await browser?.close();
     await server?.close();
-    if (out) await rm(out, { recursive: true, force: true });
   }, 30_000);
 
   /** A new page whose console errors and uncaught exceptions are collected. */

@@ -2,28 +2,20 @@
  * The catalogue, species, system and checks pages of the demo site, built once with the
  * `mechatlas build` command into a temporary folder.
  */
-import { execFile } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { mkdtemp, readFile, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { promisify } from 'node:util';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { loadCatalogue, type Catalogue } from '../../src/site/catalogue.ts';
 
-const run = promisify(execFile);
 let out = '';
 let catalogue: Catalogue;
 
 beforeAll(async () => {
-  out = await mkdtemp(join(tmpdir(), 'mechatlas-pages-'));
-  await run(process.execPath, ['bin/mechatlas.mjs', 'build', '--out', out], { timeout: 170_000, maxBuffer: 16 * 1024 * 1024 });
+  // The demo site is built once for the whole run by tests/global-site-builds.ts.
+  out = inject('demoSite');
   catalogue = await loadCatalogue('content/mechanisms');
-}, 180_000);
-
-afterAll(async () => {
-  if (out) await rm(out, { recursive: true, force: true });
-});
+}, 60_000);
 
 /** A built page's HTML, without Astro's scoped-style attributes. */
 const page = async (path: string) => (await readFile(join(out, path, 'index.html'), 'utf8')).replace(/ data-astro-cid-[\w-]+/g, '');

@@ -4,12 +4,9 @@
  * built files are read: every demo page, KaTeX, the JSON API, no assets from the network, the
  * YAML downloads byte for byte, and pages that stay inert whatever the records say.
  */
-import { execFile } from 'node:child_process';
-import { cpSync, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
-import { promisify } from 'node:util';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { CatalogueReport } from '../../src/cli/report/catalogue-report.ts';
 import type { RecordReport } from '../../src/cli/report/record-report.ts';
 import { ROOT, runCli } from '../cli/run-cli.ts';
@@ -23,19 +20,11 @@ const BROKEN = 'broken-record';
 
 let content = '';
 let out = '';
-let work = '';
 
-beforeAll(async () => {
-  work = mkdtempSync(join(tmpdir(), 'mechatlas-site-'));
-  content = join(work, 'content');
-  out = join(work, 'dist');
-  cpSync(DEMO, content, { recursive: true });
-  for (const id of [HOSTILE, BROKEN]) cpSync(join(FIXTURES, `${id}.yaml`), join(content, `${id}.yaml`));
-  await promisify(execFile)(process.execPath, [join(ROOT, 'bin', 'mechatlas.mjs'), 'build', '--content', content, '--out', out], { cwd: ROOT, timeout: 280_000, maxBuffer: 32 * 1024 * 1024 });
-}, 300_000);
-
-afterAll(() => {
-  if (work) rmSync(work, { recursive: true, force: true });
+beforeAll(() => {
+  // Built once for the whole run by tests/global-site-builds.ts: the demo plus the two fixtures.
+  content = inject('fixtureContent');
+  out = inject('fixtureSite');
 });
 
 const read = (path: string) => readFileSync(join(out, path), 'utf8');
