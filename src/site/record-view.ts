@@ -8,6 +8,7 @@ import { recordReport, type RecordReport } from '../cli/report/record-report.ts'
 import { molecularity } from '../engine/molecularity.ts';
 import { concentrationTimeSvg } from '../engine/plots/concentration-time-svg.ts';
 import { energyProfileSvg } from '../engine/plots/energy-profile-svg.ts';
+import { sbmlDocument } from '../engine/export/sbml.ts';
 import { firstObservationSeries } from '../engine/simulation/concentration-series.ts';
 import { speciesLatex } from '../engine/rate-law/species-latex.ts';
 import type { Rational } from '../engine/rational.ts';
@@ -75,6 +76,8 @@ export interface RecordView {
   report: RecordReport;
   /** the energy profile as SVG (schematic when the steps record no energies) */
   energySvg?: string;
+  /** the mass-action model as SBML Level 3 Version 2, where the steps could be read */
+  sbml?: string;
   /** concentration–time curves of the simulation, where constants allow one */
   concentrationSvg?: string;
   errors: number;
@@ -141,6 +144,7 @@ export function recordView(checked: CheckedRecord, source: string): RecordView {
   if (derivation?.energy) view.energySvg = energyProfileSvg(derivation.energy, { idPrefix: `energy-${checked.id}`, title: `Energy profile of ${view.title}` });
   const series = record && derivation ? firstObservationSeries(record, derivation) : undefined;
   if (series?.status === 'ok') view.concentrationSvg = concentrationTimeSvg(series, { logTime: true, idPrefix: `concentration-${checked.id}`, title: `Simulated concentrations against time for ${view.title} (observation ${series.observation}, log time axis)` });
+  if (record && derivation?.mechanism) view.sbml = sbmlDocument(checked.id, record, derivation, derivation.constants ?? new Map());
   if (derivation?.overall) view.overallLatex = overallLatex(derivation.overall.reactants, derivation.overall.products, derivation.overall.catalysts);
   const failed = (report.observations ?? []).some((o) => o.status === 'fail' && o.method === report.rate_laws?.[0]?.method);
   view.survives = view.errors === 0 && !failed;

@@ -92,6 +92,17 @@ describe('the demo catalogue builds', () => {
     for (const id of demoIds) expect(readFileSync(join(out, 'm', id, `${id}.yaml`)), id).toEqual(readFileSync(join(DEMO, `${id}.yaml`)));
   });
 
+  it('offers each derivable record as SBML, the same document as `mechatlas export --sbml`', () => {
+    for (const id of demoIds) {
+      const sbml = readFileSync(join(out, 'm', id, `${id}.sbml.xml`), 'utf8');
+      expect(sbml, id).toContain('level="3" version="2"');
+      expect(page(id), id).toContain(`${id}.sbml.xml`);
+    }
+    const id = demoIds[0]!;
+    expect(readFileSync(join(out, 'm', id, `${id}.sbml.xml`), 'utf8')).toBe(runCli(['export', '--sbml', join(DEMO, `${id}.yaml`)]).stdout);
+    expect(existsSync(join(out, 'm', BROKEN, `${BROKEN}.sbml.xml`))).toBe(false);
+  });
+
   it('publishes the JSON API: the same report as `mechatlas check --format json`', () => {
     const all = JSON.parse(read('api/mechanisms.json')) as CatalogueReport;
     expect(all.tool.name).toBe('mechatlas');
