@@ -48,6 +48,9 @@ export function withAbsent(expression: RationalFunction, symbols: readonly strin
   let out = expression;
   for (const symbol of symbols) {
     if (!out.symbols().includes(symbol)) continue;
+    // A fractional power of an absent species has no value at zero: the law presumes it present.
+    const powers = [...out.numerator.terms, ...out.denominator.terms].map((t) => t.monomial.exponent(symbol));
+    if (!powers.every((e) => e.isInteger() && e.sign() >= 0)) continue;
     const numerator = out.numerator.substitute(symbol, Polynomial.ZERO);
     const denominator = out.denominator.substitute(symbol, Polynomial.ZERO);
     if (!numerator.isZero() && !denominator.isZero()) out = RationalFunction.of(numerator, denominator);
