@@ -26,6 +26,7 @@ export const RULE_IDS = [
   'step/rds',
   'observation/units',
   'observation/species',
+  'simulation/failed',
 ] as const;
 
 export type RuleId = (typeof RULE_IDS)[number];

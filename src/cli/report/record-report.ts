@@ -4,7 +4,7 @@
  */
 import type { Diagnostic } from '../../engine/diagnostic.ts';
 import type { Derivation } from '../../engine/derive.ts';
-import { formatText } from '../../engine/algebra/index.ts';
+import { formatText, type Polynomial } from '../../engine/algebra/index.ts';
 import type { ObservationCheck } from '../../engine/observations.ts';
 import type { DerivedRateLaw } from '../../engine/rate-law/derive-rate-laws.ts';
 import type { Rational } from '../../engine/rational.ts';
@@ -61,6 +61,8 @@ export interface RateLawJson {
   text?: string;
   latex?: string;
   grouped?: { name: string; value_text: string; value_latex: string; text: string; latex: string };
+  /** the rate law as data: terms of numerator and denominator, each a coefficient and symbol exponents */
+  structure?: { numerator: TermJson[]; denominator: TermJson[] };
   /** limits of the apparent order as [X] → 0 (low) and [X] → ∞ (high) */
   orders: Record<string, { low: number | string; high: number | string }>;
   /** solvents whose constant concentration is absorbed into the constants */
@@ -71,6 +73,12 @@ export interface RateLawJson {
   resting_states?: { observation: string; catalyst: string; species: string; fraction: number }[];
   numeric_only?: boolean;
   derivation: { say: string; text: string; latex: string }[];
+}
+
+export interface TermJson {
+  coefficient: number | string;
+  /** symbol → exponent, e.g. {"k_2": 1, "[O3]": 2, "[O2]": "1/2"} */
+  factors: Record<string, number | string>;
 }
 
 export interface ObservationJson {
@@ -139,7 +147,10 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
     orders: Object.fromEntries([...derived.orders].map(([sp, o]) => [sp, { low: o.low.toJSON(), high: o.high.toJSON() }])),
     derivation: [...law.trace, ...(presented?.trace ?? [])],
   };
-  if (presented) Object.assign(out, { text: presented.text, latex: presented.latex });
+  if (presented) {
+    Object.assign(out, { text: presented.text, latex: presented.latex });
+    out.structure = { numerator: termsJson(presented.expression.numerator), denominator: termsJson(presented.expression.denominator) };
+  }
   if (presented?.grouped) {
     const g = presented.grouped;
     out.grouped = { name: g.name, value_text: g.valueText, value_latex: g.valueLatex, text: g.text, latex: g.latex };
@@ -151,6 +162,10 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
   if (derived.restingStates.length > 0) out.resting_states = derived.restingStates;
   if (!law.expression) out.numeric_only = true;
   return out;
+}
+
+function termsJson(p: Polynomial): TermJson[] {
+  return p.terms.map((t) => ({ coefficient: t.coefficient.toJSON(), factors: Object.fromEntries(t.monomial.factors.map(([symbol, e]) => [symbol, e.toJSON()])) }));
 }
 
 function observationJson(check: ObservationCheck): ObservationJson {

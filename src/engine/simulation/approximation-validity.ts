@@ -43,7 +43,14 @@ export function checkApproximations(record: MechanismRecord, derivation: Derivat
     }
     const result = simulatedInitialRate(setup.model, setup.y0, setup.probe);
     if (result.status !== 'ok' || !(result.rate > 0)) {
-      checks.push({ ...base, status: 'failed', message: result.status === 'ok' ? 'the simulated rate is not positive' : result.message });
+      const message = result.status === 'ok' ? 'the simulated rate is not positive' : result.message;
+      checks.push({ ...base, status: 'failed', message });
+      diagnostics.push(
+        diagnostic('simulation/failed', 'warning', `the simulation of observation ${observation.id} gave no initial rate: ${message}`, {
+          path: ['observations', index],
+          note: 'the approximations could not be checked against it; look at the constants and concentrations',
+        }),
+      );
       return;
     }
     const check: SimulationCheck = { ...base, status: 'ok', initialRate: result.rate, time: result.time, orders: simulatedOrders(derivation, setup, Object.keys(observation.orders ?? {})) };
