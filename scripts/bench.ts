@@ -46,3 +46,22 @@ for (const n of [4, 8, 12, 16]) {
   const loaded = loadRecordSource(`bench-${n}.yaml`, sequence(n));
   time(`  n = ${n}`, 3, () => deriveMechanism(loaded.record!));
 }
+
+/** `npm run bench -- --site 10`: build the site of the demo copied ten times (ids suffixed) and time it. */
+const siteCopies = Number(process.argv[process.argv.indexOf('--site') + 1] ?? 0);
+if (process.argv.includes('--site') && siteCopies > 0) {
+  const { mkdtempSync, writeFileSync, mkdirSync, rmSync } = await import('node:fs');
+  const { tmpdir } = await import('node:os');
+  const { join } = await import('node:path');
+  const { execFileSync } = await import('node:child_process');
+  const work = mkdtempSync(join(tmpdir(), 'mechatlas-bench-'));
+  const content = join(work, 'content');
+  mkdirSync(content);
+  for (let copy = 0; copy < siteCopies; copy++) {
+    for (const { name, source } of demo) writeFileSync(join(content, name.replace('.yaml', `-copy${copy}.yaml`)), source.replace(/^system: (.+)$/m, `system: $1-copy${copy}`));
+  }
+  const start = performance.now();
+  execFileSync(process.execPath, ['bin/mechatlas.mjs', 'build', '--content', content, '--out', join(work, 'site')], { stdio: 'ignore' });
+  console.log(`\nsite build of ${demo.length * siteCopies} records: ${((performance.now() - start) / 1000).toFixed(1)} s (check + Astro build)`);
+  rmSync(work, { recursive: true, force: true });
+}
