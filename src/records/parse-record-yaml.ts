@@ -29,7 +29,7 @@ const FRIENDLY: Partial<Record<YAMLError['code'], (text: string) => string>> = {
     'the file holds more than one YAML document (a --- line); a record is one document',
   BAD_INDENT: () => 'the indentation is inconsistent here (or a bracket or quote is not closed)',
   BLOCK_AS_IMPLICIT_KEY: () =>
-    'the indentation is inconsistent here: a nested field is indented under a value',
+    'a value here contains ": " (colon and space), which YAML reads as a new field; put the value in quotes, or fix the indentation',
   MULTILINE_IMPLICIT_KEY: () =>
     'a field name must fit on one line (is a colon or indentation missing?)',
   TAG_RESOLVE_FAILED: (tag) =>
