@@ -16,11 +16,12 @@ export function checkMolecularity(mechanism: Mechanism): Diagnostic[] {
   return mechanism.steps.flatMap((step) => {
     const directions: [string, number][] = [['', molecularity(step.reactants)]];
     if (step.reversible) directions.push(['the reverse of ', molecularity(step.products)]);
-    return directions.flatMap(([which, n]) => judge(step, which, n));
+    const withThirdBody = [...step.reactants, ...step.products].some((t) => mechanism.species.get(t.species)?.thirdBody);
+    return directions.flatMap(([which, n]) => judge(step, which, n, withThirdBody));
   });
 }
 
-function judge(step: Step, which: string, n: number): Diagnostic[] {
+function judge(step: Step, which: string, n: number, withThirdBody: boolean): Diagnostic[] {
   const path = ['steps', step.index, 'equation'];
   if (n > 3) {
     return [
@@ -28,6 +29,14 @@ function judge(step: Step, which: string, n: number): Diagnostic[] {
         path,
         actual: n,
         note: 'split it into elementary steps',
+      }),
+    ];
+  }
+  if (n === 3 && withThirdBody) {
+    return [
+      diagnostic('step/molecularity', 'info', `${which}step ${step.label} is termolecular through a third body, as in gas-phase recombination at low pressure (common practice)`, {
+        path,
+        actual: n,
       }),
     ];
   }
