@@ -75,3 +75,17 @@ describe('robustness', () => {
     );
   }, 120_000);
 });
+
+describe('robustness of the loader', () => {
+  it('turns any text into diagnostics, never an exception', () => {
+    const yamlish = fc.stringMatching(/^[\w\s:\-\[\]{},&*!|>'"#%@`.+=<]{0,120}$/);
+    fc.assert(
+      fc.property(fc.oneof(fc.string({ maxLength: 200 }), yamlish), (text) => {
+        const loaded = loadRecordSource('fuzz.yaml', text);
+        for (const d of loaded.diagnostics) expect(d.rule.startsWith('record/')).toBe(true);
+        if (loaded.record) deriveMechanism(loaded.record);
+      }),
+      { numRuns: 500 },
+    );
+  });
+});
