@@ -1,39 +1,57 @@
 /**
- * Which net-zero species are catalysts: those that must be present at the start for the route
- * to run. Starting from the overall reactants (and solvents, buffered species, third bodies),
- * steps fire whenever their reactants are at hand — off-route steps too, so chain carriers made
- * by an initiation step count as made. A net-zero species never made this way has to be put in:
- * the first one a blocked step of the route needs (declared catalysts first, then record order)
- * is taken as a catalyst, and firing goes on. Everything else that cancels is an intermediate,
- * whatever order the steps are written in.
+ * Which net-zero species are catalysts, and in which order the steps of the route run. Starting
+ * from the overall reactants (and solvents and third bodies), steps fire whenever their reactants
+ * are at hand — off-route steps too, so chain carriers made by an initiation step count as made.
+ * A net-zero species never made this way has to be put in: of the blocked steps of the route, the
+ * one that already has most of its reactants (a catalyst meeting its substrate) names it — a
+ * declared catalyst first — and firing goes on. Everything else that cancels is an intermediate,
+ * whatever order the steps are written in; the order in which route steps first fire is the order
+ * of the route (a cycle starts where its catalyst is taken up).
  */
-import type { Mechanism } from './mechanism.ts';
+import type { Mechanism, Step } from './mechanism.ts';
 import type { Rational } from './rational.ts';
 
-/** The net-zero species that must be supplied for every step of the route to run. */
-export function catalystSeeds(mechanism: Mechanism, sigma: readonly number[], net: ReadonlyMap<string, Rational>): Set<string> {
+export interface RouteWalk {
+  /** the net-zero species that must be supplied for every step of the route to run */
+  seeds: Set<string>;
+  /** position of each step along the route (steps off the route: Infinity) */
+  order: number[];
+}
+
+/** Walks the route from its starting materials. */
+export function walkRoute(mechanism: Mechanism, sigma: readonly number[], net: ReadonlyMap<string, Rational>): RouteWalk {
   const available = new Set<string>();
   for (const s of mechanism.species.values()) {
     if ((net.get(s.symbol)?.sign() ?? 0) < 0 || s.solvent || s.thirdBody) available.add(s.symbol);
   }
-  const seeds = new Set<string>();
   const route = mechanism.steps.filter((s) => (sigma[s.index] ?? 0) > 0);
+  const order = mechanism.steps.map(() => Infinity);
+  const seeds = new Set<string>();
   const declared = [...mechanism.species.values()].filter((s) => s.declaredRole === 'catalyst').map((s) => s.symbol);
+  let position = 0;
   for (;;) {
-    fire(mechanism, available);
-    const blocked = route.find((step) => step.reactants.some((t) => !available.has(t.species)));
-    if (!blocked) return seeds;
-    const missing = blocked.reactants.map((t) => t.species).filter((sp) => !available.has(sp));
+    position = fire(mechanism, route, available, order, position);
+    const blocked = route.filter((step) => order[step.index] === Infinity);
+    if (blocked.length === 0) return { seeds, order };
+    const ready = (step: Step) => step.reactants.filter((t) => available.has(t.species)).length;
+    const next = [...blocked].sort((a, b) => ready(b) - ready(a) || a.index - b.index)[0]!;
+    const missing = next.reactants.map((t) => t.species).filter((sp) => !available.has(sp));
     const seed = missing.find((sp) => declared.includes(sp)) ?? missing[0]!;
     seeds.add(seed);
     available.add(seed);
   }
 }
 
-/** Fires steps (forward, and reversible ones backward) until nothing new becomes available. */
-function fire(mechanism: Mechanism, available: Set<string>): void {
+/** Fires steps until nothing new becomes available; route steps get their positions as they first fire. */
+function fire(mechanism: Mechanism, route: Step[], available: Set<string>, order: number[], position: number): number {
   for (let grew = true; grew; ) {
     grew = false;
+    for (const step of route) {
+      if (order[step.index] !== Infinity || !step.reactants.every((t) => available.has(t.species))) continue;
+      order[step.index] = position++;
+      grew = true;
+      for (const t of step.products) available.add(t.species);
+    }
     for (const step of mechanism.steps) {
       const sides = step.reversible ? [[step.reactants, step.products], [step.products, step.reactants]] : [[step.reactants, step.products]];
       for (const [from, to] of sides) {
@@ -47,4 +65,5 @@ function fire(mechanism: Mechanism, available: Set<string>): void {
       }
     }
   }
+  return position;
 }

@@ -25,6 +25,8 @@ export interface Derivation {
   routeSource?: 'given' | 'derived';
   overall?: OverallEquation;
   roles?: Map<string, Role>;
+  /** position of each step along the route (off-route steps: Infinity) */
+  routeOrder?: number[];
   /** net-zero species that occur only in steps off the route (σ = 0) */
   offRoute?: Set<string>;
   /** species whose free concentration is held constant */
@@ -61,16 +63,17 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
   const fromEnergies = fillFromEnergies(record, mechanism, constants.constants);
 
   const mustCancel = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate' || s.declaredRole === 'catalyst').map((s) => s.symbol));
-  const route = stoichiometricNumbers(mechanism.steps, mustCancel);
+  const carriers = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate').map((s) => s.symbol));
+  const route = stoichiometricNumbers(mechanism.steps, mustCancel, carriers);
   diagnostics.push(...route.diagnostics);
   if (!route.numbers) return { mechanism, buffered, diagnostics };
   const sigma = route.numbers;
 
-  const { roles, offRoute, diagnostics: roleDiagnostics } = deriveRoles(mechanism, sigma);
+  const { roles, offRoute, routeOrder, diagnostics: roleDiagnostics } = deriveRoles(mechanism, sigma);
   diagnostics.push(...roleDiagnostics);
   // Only catalysts on the route go over the arrow; a binder off the route (an inhibitor) does not.
   const catalysts = [...roles].filter(([sp, r]) => r === 'catalyst' && !offRoute.has(sp)).map(([sp]) => sp);
-  const rates = deriveRateLaws(record, mechanism, sigma, roles, offRoute, fromEnergies.constants);
+  const rates = deriveRateLaws(record, mechanism, sigma, roles, offRoute, fromEnergies.constants, routeOrder);
   diagnostics.push(...rates.diagnostics, ...inhibitorMismatches(mechanism, rates.roles, rates.rateLaws.length > 0));
   const derivation: Derivation = {
     mechanism,
@@ -79,6 +82,7 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
     overall: overallEquation(mechanism, sigma, catalysts),
     roles: rates.roles,
     offRoute,
+    routeOrder,
     buffered,
     rateLaws: rates.rateLaws,
     observations: rates.observations,

@@ -8,17 +8,17 @@
 import type { Role } from '../records/mechanism-record.ts';
 import { diagnostic, type Diagnostic } from './diagnostic.ts';
 import type { Mechanism } from './mechanism.ts';
-import { catalystSeeds } from './catalyst-seeds.ts';
+import { walkRoute } from './catalyst-seeds.ts';
 import { netOverRoute } from './overall-equation.ts';
 
 const NET_ZERO_KINDS: ReadonlySet<Role> = new Set(['intermediate', 'catalyst', 'inhibitor']);
 
 /** Derives the role of every species; `offRoute` lists net-zero species that only occur in steps with σ = 0. */
-export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { roles: Map<string, Role>; offRoute: Set<string>; diagnostics: Diagnostic[] } {
+export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { roles: Map<string, Role>; offRoute: Set<string>; routeOrder: number[]; diagnostics: Diagnostic[] } {
   const net = netOverRoute(mechanism, sigma);
   const roles = new Map<string, Role>();
   const offRoute = new Set<string>();
-  const seeds = catalystSeeds(mechanism, sigma, net);
+  const { seeds, order } = walkRoute(mechanism, sigma, net);
   for (const [symbol, species] of mechanism.species) {
     const n = net.get(symbol)!;
     const firstOnRoute = firstChange(mechanism, symbol, (i) => (sigma[i] ?? 0) > 0);
@@ -30,14 +30,19 @@ export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { r
     else if (n.sign() > 0) role = 'product';
     else {
       if (firstOnRoute === 0) offRoute.add(symbol);
-      // Off the route, a binder that nothing makes (a free inhibitor) is consumed first; what it makes is an intermediate.
-      role = firstOnRoute === 0 ? (firstAnywhere > 0 ? 'intermediate' : 'catalyst') : seeds.has(symbol) ? 'catalyst' : 'intermediate';
+      const oneWay = oneWaySign(mechanism, symbol);
+      // Off the route: a species only ever made by one-way steps is a side product (a termination
+      // product); only ever used up, a side reactant; a binder that nothing makes (a free inhibitor)
+      // is consumed first; what such binding makes is an intermediate (a dead-end complex).
+      if (firstOnRoute === 0 && oneWay !== 0) role = oneWay > 0 ? 'product' : 'reactant';
+      else role = firstOnRoute === 0 ? (firstAnywhere > 0 ? 'intermediate' : 'catalyst') : seeds.has(symbol) ? 'catalyst' : 'intermediate';
       // The record decides between the net-zero kinds where it says.
       if (species.declaredRole === 'intermediate' || species.declaredRole === 'catalyst') role = species.declaredRole;
     }
     roles.set(symbol, role);
   }
-  return { roles, offRoute, diagnostics: declaredMismatches(mechanism, roles) };
+  for (const [symbol, role] of roles) if (role === 'product' || role === 'reactant') offRoute.delete(symbol);
+  return { roles, offRoute, routeOrder: order, diagnostics: declaredMismatches(mechanism, roles) };
 }
 
 /** Sign of the first non-zero change of a species over the steps that pass the filter, in record order. */
@@ -48,6 +53,14 @@ function firstChange(mechanism: Mechanism, symbol: string, include: (index: numb
     if (v) return v.sign();
   }
   return 0;
+}
+
+/** +1 when a species is only ever formed, −1 only ever consumed, in one-way steps; 0 otherwise. */
+function oneWaySign(mechanism: Mechanism, symbol: string): number {
+  const steps = mechanism.steps.filter((s) => s.change.has(symbol));
+  if (steps.length === 0 || steps.some((s) => s.reversible)) return 0;
+  const signs = new Set(steps.map((s) => s.change.get(symbol)!.sign()));
+  return signs.size === 1 ? [...signs][0]! : 0;
 }
 
 function appearsInSteps(mechanism: Mechanism, symbol: string): boolean {

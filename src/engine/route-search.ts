@@ -16,12 +16,20 @@ export interface Candidate {
   plainSum: boolean;
   steps: number;
   size: bigint;
+  /** the sum of the overall equation's coefficients: smaller is the more economical account */
+  overallSize: number;
+  /** steps that only make declared chain carriers (initiation) or only destroy them (termination) */
+  chainEnds: number;
+  /** net reactants of the route that some step of the mechanism makes (not a starting material) */
+  madeReactants: number;
 }
 
 export interface Family {
   intermediates: number;
   cancelled: number;
   rays: bigint[][];
+  /** initiation and termination steps of declared carriers among its steps */
+  chainEnds: number;
 }
 
 /** Columns of the search: each step without `times`, plus the given steps as one fixed block. */
@@ -46,9 +54,10 @@ export function routeColumns(steps: readonly RouteStep[], free: number[]): Colum
 }
 
 /** Every candidate route and family over the connected supports. */
-export function searchSupports(steps: readonly RouteStep[], columns: Column[], mustCancel: ReadonlySet<string>) {
+export function searchSupports(steps: readonly RouteStep[], columns: Column[], mustCancel: ReadonlySet<string>, carriers: ReadonlySet<string> = new Set()) {
   const routes: Candidate[] = [];
   const families: Family[] = [];
+  const made = new Set(steps.flatMap((st) => [...st.change].filter(([, v]) => v.sign() > 0).map(([sp]) => sp)));
   const optional = columns.flatMap((c, i) => (c.required ? [] : [i]));
   const required = columns.flatMap((c, i) => (c.required ? [i] : []));
   for (let mask = 0; mask < 1 << optional.length; mask++) {
@@ -69,16 +78,18 @@ export function searchSupports(steps: readonly RouteStep[], columns: Column[], m
     const subsets = cancelSets(choosable, forced, firstSign);
     let best: [number, number] | undefined;
     for (const cancel of subsets) {
-      if (best && (cancel.intermediates < best[0] || (cancel.intermediates === best[0] && cancel.species.length < best[1]))) break;
+      if (best && (cancel.species.length < best[0] || (cancel.species.length === best[0] && cancel.intermediates < best[1]))) break;
       const kernel = positiveKernel(matrixFor(cancel.species), support.length);
       if (kernel.kind === 'none') continue;
-      best = [cancel.intermediates, cancel.species.length];
+      best = [cancel.species.length, cancel.intermediates];
       if (kernel.kind === 'family') {
-        families.push({ intermediates: cancel.intermediates, cancelled: cancel.species.length, rays: kernel.rays.map((r) => expandSigma(steps.length, columns, support, r)) });
+        const rays = kernel.rays.map((r) => expandSigma(steps.length, columns, support, r));
+        const used = steps.flatMap((st, i) => (rays.some((r) => r[i]! > 0n) && carriers.size > 0 && isChainEnd(st, carriers) ? [i] : []));
+        families.push({ intermediates: cancel.intermediates, cancelled: cancel.species.length, rays, chainEnds: used.length });
         continue;
       }
       const sigma = expandSigma(steps.length, columns, support, kernel.vector);
-      if (!routes.some((r) => r.sigma.join() === sigma.join())) routes.push(scoreRoute(steps, sigma));
+      if (!routes.some((r) => r.sigma.join() === sigma.join())) routes.push(scoreRoute(steps, sigma, carriers, made));
     }
   }
   return { routes, families };
@@ -101,21 +112,17 @@ function connected(support: number[], columns: Column[]): boolean {
 }
 
 /**
- * Subsets of the species that may cancel, best first: most intermediate-pattern species, then
- * most species. Generated lazily, because the first feasible set is almost always the full one.
+ * Subsets of the species that may cancel, best first: most species, then most of the
+ * intermediate pattern. Generated lazily, because the first feasible set is almost always the full one.
  */
 function* cancelSets(choosable: string[], forced: string[], firstSign: (sp: string) => number): Generator<{ species: string[]; intermediates: number }> {
-  const formedFirst = choosable.filter((sp) => firstSign(sp) > 0);
-  const consumedFirst = choosable.filter((sp) => firstSign(sp) <= 0);
   const forcedIntermediates = forced.filter((sp) => firstSign(sp) > 0).length;
-  for (let dropI = 0; dropI <= formedFirst.length; dropI++) {
-    for (const keptI of combinationsOf(formedFirst, formedFirst.length - dropI)) {
-      for (let dropC = 0; dropC <= consumedFirst.length; dropC++) {
-        for (const keptC of combinationsOf(consumedFirst, consumedFirst.length - dropC)) {
-          yield { species: [...forced, ...keptI, ...keptC], intermediates: forcedIntermediates + keptI.length };
-        }
-      }
-    }
+  for (let drop = 0; drop <= choosable.length; drop++) {
+    const sets = [...combinationsOf(choosable, choosable.length - drop)].map((kept) => ({
+      species: [...forced, ...kept],
+      intermediates: forcedIntermediates + kept.filter((sp) => firstSign(sp) > 0).length,
+    }));
+    yield* sets.sort((a, b) => b.intermediates - a.intermediates);
   }
 }
 
@@ -149,7 +156,7 @@ function expandSigma(n: number, columns: Column[], support: number[], vector: bi
 }
 
 /** Scores a route by what it cancels, from the σ it actually has. */
-function scoreRoute(steps: readonly RouteStep[], sigma: bigint[]): Candidate {
+function scoreRoute(steps: readonly RouteStep[], sigma: bigint[], carriers: ReadonlySet<string>, made: ReadonlySet<string>): Candidate {
   const used = sigma.flatMap((s, i) => (s > 0n ? [i] : []));
   const net = new Map<string, Rational>();
   const seenSigns = new Map<string, Set<number>>();
@@ -170,5 +177,17 @@ function scoreRoute(steps: readonly RouteStep[], sigma: bigint[]): Candidate {
     plainSum: sigma.every((s) => s === 1n),
     steps: used.length,
     size: sigma.reduce((a, b) => a + b, 0n),
+    overallSize: [...net.values()].reduce((n, v) => n + v.abs().toNumber(), 0),
+    chainEnds: carriers.size === 0 ? 0 : used.filter((i) => isChainEnd(steps[i]!, carriers)).length,
+    madeReactants: [...net].filter(([sp, v]) => v.sign() < 0 && made.has(sp)).length,
   };
+}
+
+/** Initiation makes carriers from none; termination destroys carriers and makes none. */
+function isChainEnd(step: RouteStep, carriers: ReadonlySet<string>): boolean {
+  const made = [...step.change].filter(([, v]) => v.sign() > 0).map(([sp]) => sp);
+  const used = [...step.change].filter(([, v]) => v.sign() < 0).map(([sp]) => sp);
+  const initiation = made.some((sp) => carriers.has(sp)) && !used.some((sp) => carriers.has(sp));
+  const termination = used.some((sp) => carriers.has(sp)) && !made.some((sp) => carriers.has(sp));
+  return initiation || termination;
 }

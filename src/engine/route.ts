@@ -24,7 +24,7 @@ export interface RouteResult {
 export const MAX_SEARCHED_STEPS = 16;
 
 /** Chooses the stoichiometric numbers of a mechanism's steps. */
-export function stoichiometricNumbers(steps: readonly RouteStep[], mustCancel: ReadonlySet<string>): RouteResult {
+export function stoichiometricNumbers(steps: readonly RouteStep[], mustCancel: ReadonlySet<string>, carriers: ReadonlySet<string> = new Set()): RouteResult {
   if (steps.length > 0 && steps.every((s) => s.times !== undefined)) {
     const numbers = steps.map((s) => s.times!);
     if (numbers.every((x) => x === 0)) {
@@ -41,7 +41,7 @@ export function stoichiometricNumbers(steps: readonly RouteStep[], mustCancel: R
     );
   }
   const columns = routeColumns(steps, free);
-  const { routes, families } = searchSupports(steps, columns, mustCancel);
+  const { routes, families } = searchSupports(steps, columns, mustCancel, carriers);
   const chosen = chooseRoute(routes, families, mustCancel);
   if (chosen.numbers) chosen.diagnostics.push(...separateReactions(steps, chosen.numbers));
   return chosen;
@@ -69,7 +69,8 @@ function chooseRoute(routes: Candidate[], families: Family[], mustCancel: Readon
   }
   const ranked = [...routes].sort(compareCandidates);
   const best = ranked[0];
-  const better = families.filter((f) => !best || f.intermediates > best.intermediates || (f.intermediates === best.intermediates && f.cancelled > best.cancelled));
+  // A family (a sum of independent routes) only stands in the way when it cancels strictly more.
+  const better = families.filter((f) => !best || f.chainEnds < best.chainEnds || (f.chainEnds === best.chainEnds && f.cancelled > best.cancelled));
   const ties = best ? ranked.filter((c) => compareCandidates(c, best) === 0) : [];
   if (best && better.length === 0 && ties.length === 1) return { numbers: best.sigma.map(Number), source: 'derived', diagnostics: [] };
   const alternatives = [...new Set([...ties.map((c) => c.sigma), ...better.flatMap((f) => f.rays)].map((a) => `[${a.join(', ')}]`))];
@@ -82,10 +83,20 @@ function chooseRoute(routes: Candidate[], families: Family[], mustCancel: Readon
   );
 }
 
+/**
+ * The preference order: declared chain carriers' initiation and termination stay off the route
+ * (the long-chain convention, common practice); the most species cancelled; the fewest net
+ * reactants that the mechanism itself makes (a route starts from starting materials, so a dead-end
+ * complex or a bound catalyst is not one); the most economical overall equation; the most species
+ * formed before they are consumed; the plain sum; the fewest steps; the smallest numbers.
+ */
 function compareCandidates(a: Candidate, b: Candidate): number {
   return (
-    b.intermediates - a.intermediates ||
+    a.chainEnds - b.chainEnds ||
     b.cancelled - a.cancelled ||
+    a.madeReactants - b.madeReactants ||
+    a.overallSize - b.overallSize ||
+    b.intermediates - a.intermediates ||
     Number(b.plainSum) - Number(a.plainSum) ||
     a.steps - b.steps ||
     (a.size < b.size ? -1 : a.size > b.size ? 1 : 0)

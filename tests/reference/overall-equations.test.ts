@@ -174,3 +174,61 @@ steps:
     expect(errorRules(d2)).toEqual(['balance/atoms']);
   });
 });
+
+describe('routes a kineticist expects (found in review)', () => {
+  it('product inhibition: the dead-end E·P complex stays off the route, the enzyme a catalyst', () => {
+    // Competitive product inhibition, e.g. Cornish-Bowden, Fundamentals of Enzyme Kinetics (from memory).
+    const d = deriveYaml(`${header('product-inhibition')}notation: labels
+steps:
+  - equation: E + S <=> ES
+  - equation: ES -> E + P
+  - equation: E + P <=> EP
+`);
+    expect(errorRules(d)).toEqual([]);
+    expect(d.stoichiometricNumbers).toEqual([1, 1, 0]);
+    expect(overallSides(d)).toEqual({ reactants: { S: 1 }, products: { P: 1 }, catalysts: ['E'] });
+  });
+
+  it('methane chlorination: the overall equation is that of the propagation steps', () => {
+    // Radical chain of CH4 + Cl2, e.g. Atkins & de Paula, Physical Chemistry (from memory):
+    // the long-chain overall reaction is CH4 + Cl2 -> CH3Cl + HCl.
+    const d = deriveYaml(`${header('chlorination')}steps:
+  - equation: Cl2 -> 2 Cl•
+  - equation: Cl• + CH4 -> HCl + CH3•
+  - equation: CH3• + Cl2 -> CH3Cl + Cl•
+  - equation: 2 CH3• -> C2H6
+`);
+    expect(errorRules(d)).toEqual([]);
+    expect(d.stoichiometricNumbers).toEqual([0, 1, 1, 0]);
+    expect(overallSides(d)).toEqual({ reactants: { CH4: 1, Cl2: 1 }, products: { HCl: 1, CH3Cl: 1 }, catalysts: [] });
+    expect(d.roles!.get('C2H6')).toBe('product');
+  });
+
+  it('Rice–Herzfeld ethane pyrolysis with declared chain carriers: C2H6 -> C2H4 + H2', () => {
+    // F. O. Rice and K. F. Herzfeld (1934), as in Atkins & de Paula, Physical Chemistry (from memory).
+    const d = deriveYaml(`${header('ethane')}species:
+  CH3•: { role: intermediate }
+  C2H5•: { role: intermediate }
+  H•: { role: intermediate }
+steps:
+  - equation: C2H6 -> 2 CH3•
+  - equation: CH3• + C2H6 -> CH4 + C2H5•
+  - equation: C2H5• -> C2H4 + H•
+  - equation: H• + C2H6 -> H2 + C2H5•
+  - equation: H• + C2H5• -> C2H6
+`);
+    expect(errorRules(d)).toEqual([]);
+    expect(d.stoichiometricNumbers).toEqual([0, 0, 1, 1, 0]);
+    expect(overallSides(d)).toEqual({ reactants: { C2H6: 1 }, products: { C2H4: 1, H2: 1 }, catalysts: [] });
+  });
+
+  it('a catalytic cycle written from the slow step on still has the enzyme as its catalyst', () => {
+    const d = deriveYaml(`${header('cycle-order')}notation: labels
+steps:
+  - { equation: ES -> E + P, rds: true }
+  - equation: E + S <=> ES
+`);
+    expect(overallSides(d)).toEqual({ reactants: { S: 1 }, products: { P: 1 }, catalysts: ['E'] });
+    expect(d.roles!.get('ES')).toBe('intermediate');
+  });
+});

@@ -90,9 +90,10 @@ function nonlinearBalance(conservation: Conservation, law: RationalFunction, per
   };
 }
 
-/** True when some step before the rds (in record order) forms the species. */
+/** True when some step before the rds along the route forms the species. */
 function formedBeforeRds(species: string, context: RateLawContext, rds: Step): boolean {
-  return context.mechanism.steps.some((s) => s.index < rds.index && (s.change.get(species)?.sign() ?? 0) !== 0);
+  const rank = (index: number) => context.order[index] ?? Infinity;
+  return context.mechanism.steps.some((s) => rank(s.index) < rank(rds.index) && (s.change.get(species)?.sign() ?? 0) !== 0);
 }
 
 function problem(rds: Step, message: string): Diagnostic {

@@ -23,13 +23,21 @@ export interface RateLawContext {
   mechanism: Mechanism;
   sigma: readonly number[];
   roles: ReadonlyMap<string, Role>;
+  /** position of each step along the route (a cycle starts where its catalyst is taken up) */
+  order: readonly number[];
   internal: string[];
   solvents: string[];
   conservations: Conservation[];
 }
 
 /** Classifies the species of a mechanism for rate-law derivation. */
-export function rateLawContext(mechanism: Mechanism, sigma: readonly number[], roles: ReadonlyMap<string, Role>, offRoute: ReadonlySet<string>): RateLawContext {
+export function rateLawContext(
+  mechanism: Mechanism,
+  sigma: readonly number[],
+  roles: ReadonlyMap<string, Role>,
+  offRoute: ReadonlySet<string>,
+  order: readonly number[] = mechanism.steps.map((s) => s.index),
+): RateLawContext {
   const species = [...mechanism.species.values()].filter((s) => !s.buffered && !s.solvent && !s.thirdBody);
   const internal = species.filter((s) => roles.get(s.symbol) === 'intermediate' || (roles.get(s.symbol) === 'catalyst' && !offRoute.has(s.symbol))).map((s) => s.symbol);
   // A net-zero species consumed first off the route is either a free inhibitor in excess, or a
@@ -41,7 +49,7 @@ export function rateLawContext(mechanism: Mechanism, sigma: readonly number[], r
     if (joinsCatalyst) internal.push(candidate.symbol);
   }
   const solvents = [...mechanism.species.values()].filter((s) => s.solvent).map((s) => s.symbol);
-  return { mechanism, sigma, roles, internal, solvents, conservations: conservationRelations(mechanism, internal, roles) };
+  return { mechanism, sigma, roles, order, internal, solvents, conservations: conservationRelations(mechanism, internal, roles) };
 }
 
 function conservationRelations(mechanism: Mechanism, internal: string[], roles: ReadonlyMap<string, Role>): Conservation[] {

@@ -10,7 +10,8 @@ import type { StepConstants } from '../step-units.ts';
 import { rateLawContext, type RateLawContext } from './context.ts';
 import { formatterFor } from './formatter.ts';
 import { checkObservations } from './check-observations.ts';
-import { orderLimitsOf, orderSymbols } from './orders.ts';
+import { orderLimitsOf, orderSymbols, withAbsent } from './orders.ts';
+import type { RationalFunction } from '../algebra/index.ts';
 import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
 import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
@@ -42,9 +43,10 @@ export function deriveRateLaws(
   roles: ReadonlyMap<string, Role>,
   offRoute: ReadonlySet<string>,
   constants: readonly StepConstants[],
+  routeOrder: readonly number[] = mechanism.steps.map((s) => s.index),
 ): RateLawStage {
   const diagnostics: Diagnostic[] = [];
-  const context = rateLawContext(mechanism, sigma, roles, offRoute);
+  const context = rateLawContext(mechanism, sigma, roles, offRoute, routeOrder);
   const fmt = formatterFor(mechanism);
   const rdsSteps = mechanism.steps.filter((s) => s.rds);
   for (const extra of rdsSteps.slice(1)) {
@@ -72,12 +74,34 @@ export function deriveRateLaws(
     }
     const presented = presentLaw(law.expression, context.solvents, fmt);
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(`[${s}]`));
-    // General limits, every species present; each observation takes its absent species out (check-observations).
-    rateLaws.push({ law, presented, orders: orderLimitsOf(presented.expression, symbols), restingStates: [] });
+    rateLaws.push({ law, presented, orders: reportedOrders(presented.expression, symbols, roles), restingStates: [] });
   }
   const checked = checkObservations(record, context, rateLaws, constants, symbols);
   diagnostics.push(...checked.diagnostics);
   return { context, rateLaws, observations: checked.checks, roles: confirmInhibitors(roles, offRoute, rateLaws[0]), diagnostics };
+}
+
+/**
+ * The order limits a record reports. With every species present they are the limits of the law as
+ * written (the retardation by a product of a pre-equilibrium shows). Where the law is a difference
+ * (a reversible overall reaction), those limits describe |r| near equilibrium, not initial rates:
+ * then the orders of reactants and catalysts are taken with the products absent, and each
+ * product's with the others absent.
+ * Each observation takes out its own absent species (check-observations.ts).
+ */
+function reportedOrders(expression: RationalFunction, symbols: readonly { species: string; symbol: string }[], roles: ReadonlyMap<string, Role>): Map<string, OrderRange> {
+  const orders = orderLimitsOf(expression, symbols);
+  if (expression.numerator.terms.every((t) => t.coefficient.sign() > 0)) return orders;
+  const products = symbols.filter((s) => roles.get(s.species) === 'product').map((s) => s.symbol);
+  const initial = withAbsent(expression, products);
+  for (const [species, range] of orderLimitsOf(initial, symbols.filter((s) => !products.includes(s.symbol)))) orders.set(species, range);
+  // A product's own order is read with the other products absent: its inhibition of the initial rate.
+  for (const product of symbols.filter((s) => products.includes(s.symbol))) {
+    const alone = withAbsent(expression, products.filter((p) => p !== product.symbol));
+    const range = orderLimitsOf(alone, [product]).get(product.species);
+    if (range) orders.set(product.species, range);
+  }
+  return orders;
 }
 
 function chooseMethods(approximation: string, hasRds: boolean): RateLawMethod[] {

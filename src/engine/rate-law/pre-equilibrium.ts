@@ -24,7 +24,9 @@ export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt
   const sigmaRds = sigma[rds.index] ?? 0;
   const freeCatalysts = new Set(context.conservations.map((c) => c.catalyst));
   const unknowns = context.internal.filter((sp) => !freeCatalysts.has(sp));
-  const equilibria = mechanism.steps.filter((s) => s !== rds && s.reversible && (s.index < rds.index || (sigma[s.index] ?? 0) === 0));
+  // "Before the rds" is along the route, not down the page: a cycle may be written from any step.
+  const before = (s: Step) => (context.order[s.index] ?? Infinity) < (context.order[rds.index] ?? Infinity);
+  const equilibria = mechanism.steps.filter((s) => s !== rds && s.reversible && (before(s) || (sigma[s.index] ?? 0) === 0));
 
   let rate = Polynomial.term(Rational.of(1, sigmaRds), Monomial.ONE).mul(forwardRate(rds));
   trace.push(fmt.line(`rate of the overall reaction: the rate of the rate-determining step ${rds.label} divided by its σ = ${sigmaRds}`, ['r', 'r'], rate));

@@ -17,10 +17,11 @@ function explainRds(derivation: Derivation, setup: SimulationSetup, state: Float
   const mechanism = derivation.mechanism!;
   const sigma = derivation.stoichiometricNumbers ?? [];
   const rds = mechanism.steps.find((s) => s.rds)!;
+  const rank = (index: number) => derivation.routeOrder?.[index] ?? index;
   const at = (sp: string) => state[setup.model.species.indexOf(sp)]!;
   const fluxes = setup.model.stepFluxes(state);
   for (const step of mechanism.steps) {
-    const preEquilibrium = step !== rds && step.reversible && (step.index < rds.index || sigma[step.index] === 0);
+    const preEquilibrium = step !== rds && step.reversible && (rank(step.index) < rank(rds.index) || sigma[step.index] === 0);
     if (!preEquilibrium) continue;
     // The net flux through a step at equilibrium is a vanishing share of its one-way fluxes.
     const { forward, reverse } = fluxes[step.index]!;
@@ -29,7 +30,7 @@ function explainRds(derivation: Derivation, setup: SimulationSetup, state: Float
       return `the pre-equilibrium of step ${step.label} is not fast compared with step ${rds.label} at these constants (its net flux is ${(share * 100).toFixed(0)} % of its one-way fluxes)`;
     }
   }
-  const after = mechanism.steps.filter((s) => s.index > rds.index).flatMap((s) => [...s.change.keys()]);
+  const after = mechanism.steps.filter((s) => rank(s.index) > rank(rds.index)).flatMap((s) => [...s.change.keys()]);
   const internal = [...(derivation.roles ?? [])].filter(([sp, role]) => role === 'intermediate' && after.includes(sp) && !rds.reactants.some((t) => t.species === sp));
   const piled = internal.filter(([sp]) => at(sp) > 0).sort(([a], [b]) => at(b) - at(a))[0];
   if (piled) return `species formed after the rate-determining step are not negligible (${piled[0]} builds up to ${at(piled[0]).toExponential(2)} M): step ${rds.label} is not the slowest`;
