@@ -237,10 +237,11 @@ observations:
     expect(check.status).toBe('pass');
   });
 
-  it('SN1 solvolysis in water: the solvent concentration is absorbed into the constants', () => {
+  it('SN1 solvolysis in water: the solvent is constant and has no order, but keeps its place in the law', () => {
     // Source: as above (Ingold, from memory), with water the nucleophile and solvent:
-    // r = k_1 k_2 [RX][H2O]/(k_-1[Cl-] + k_2[H2O]); at constant [H2O] the presented law is
-    // k_1 k_2' [RX]/(k_-1[Cl-] + k_2') with k_2' = k_2[H2O].
+    // r = k_1 k_2 [RX][H2O]/(k_-1[Cl-] + k_2[H2O]). [H2O] is constant (pseudo-first order in
+    // the carbocation), but it stays in the presented law so that every term of the sum keeps its
+    // units; it has no order of its own.
     const d = deriveYaml(`${header('sn1-solvolysis')}species:
   tBuCl: { formula: C4H9Cl }
   tBu+: { formula: C4H9+ }
@@ -259,8 +260,8 @@ steps:
     });
     expect(ss.law.absorbed).toEqual(['H2O']);
     expectSameLaw(ss.presented?.expression, {
-      symbols: ['k_1', 'k_-1', 'k_2', '[tBuCl]', '[Cl-]'],
-      rate: (v) => (v('k_1') * v('k_2') * v('[tBuCl]')) / (v('k_-1') * v('[Cl-]') + v('k_2')),
+      symbols: ['k_1', 'k_-1', 'k_2', '[tBuCl]', '[Cl-]', '[H2O]'],
+      rate: (v) => (v('k_1') * v('k_2') * v('[tBuCl]') * v('[H2O]')) / (v('k_-1') * v('[Cl-]') + v('k_2') * v('[H2O]')),
     });
     expect(orderTable(ss)).toEqual({ tBuCl: ['1', '1'], 'Cl-': ['0', '-1'], tBuOH: ['0', '0'], 'H+': ['0', '0'] });
   });

@@ -1,6 +1,7 @@
 /**
- * A rate law as people read it: solvent concentrations absorbed into the constants, and the
- * product of constants in front named k_obs (k_obs = k_2 K_1), shown beside the full form.
+ * A rate law as people read it: the product of constants in front named k_obs (k_obs = k_2 K_1),
+ * shown beside the full form. A solvent's concentration is constant: it stays visible in the
+ * full law (so every term keeps its units) and is absorbed into k_obs with the constants.
  */
 import { Monomial, Polynomial, RationalFunction } from '../algebra/index.ts';
 import { Rational } from '../rational.ts';
@@ -9,7 +10,7 @@ import type { TraceLine } from './rate-law.ts';
 import { concentration, symbolMeaning } from './symbols.ts';
 
 export interface PresentedLaw {
-  /** the law with solvents absorbed */
+  /** the law, solvent concentrations included */
   expression: RationalFunction;
   text: string;
   latex: string;
@@ -17,18 +18,16 @@ export interface PresentedLaw {
   trace: TraceLine[];
 }
 
-/** Absorbs the solvents and names the grouped constant. */
+/** Names the grouped constant; solvent concentrations count as constants. */
 export function presentLaw(expression: RationalFunction, solvents: readonly string[], fmt: Formatter): PresentedLaw {
   const trace: TraceLine[] = [];
-  let shown = expression;
-  for (const solvent of solvents) {
-    const symbol = concentration(solvent);
-    if (!shown.symbols().includes(symbol)) continue;
-    shown = RationalFunction.of(shown.numerator.substitute(symbol, Polynomial.ONE), shown.denominator.substitute(symbol, Polynomial.ONE));
-    trace.push({ say: `${solvent} is the solvent: its constant concentration is absorbed into the constants`, text: `${symbol} = const.`, latex: `${fmt.style.latex(symbol)} = \\text{const.}` });
+  const shown = expression;
+  const solventSymbols = new Set(solvents.map(concentration).filter((s) => shown.symbols().includes(s)));
+  for (const symbol of solventSymbols) {
+    trace.push({ say: `${symbol.slice(1, -1)} is the solvent: its concentration is constant and belongs with the constants`, text: `${symbol} = const.`, latex: `${fmt.style.latex(symbol)} = \\text{const.}` });
   }
   const out: PresentedLaw = { expression: shown, text: fmt.text(shown), latex: fmt.latex(shown), trace };
-  const grouped = groupConstants(shown);
+  const grouped = groupConstants(shown, (symbol) => isConstant(symbol) || solventSymbols.has(symbol));
   if (grouped) {
     const name = 'k_obs';
     const withName = RationalFunction.of(Polynomial.term(grouped.rest.coefficient, grouped.rest.monomial.mul(Monomial.of(name))), grouped.denominator);
@@ -47,13 +46,13 @@ export function presentLaw(expression: RationalFunction, solvents: readonly stri
 const isConstant = (symbol: string) => symbolMeaning(symbol)?.kind === 'constant';
 
 /** Splits a one-term numerator (over a one-term or unit-led denominator) into constants × the rest. */
-function groupConstants(f: RationalFunction) {
+function groupConstants(f: RationalFunction, constant: (symbol: string) => boolean) {
   const [num] = f.numerator.terms;
   if (f.numerator.terms.length !== 1 || !num) return undefined;
   const den = f.denominator.terms;
   const single = den.length === 1 ? den[0] : undefined;
   if (!single && !den.some((t) => t.monomial.isOne())) return undefined;
-  const constantPart = (m: Monomial) => Monomial.fromFactors(m.factors.filter(([s]) => isConstant(s)));
+  const constantPart = (m: Monomial) => Monomial.fromFactors(m.factors.filter(([s]) => constant(s)));
   const numConst = constantPart(num.monomial);
   const denConst = single ? constantPart(single.monomial) : Monomial.ONE;
   const coefficient = single ? num.coefficient.div(single.coefficient) : num.coefficient;
