@@ -33,13 +33,33 @@ export function walkRoute(mechanism: Mechanism, sigma: readonly number[], net: R
     position = fire(mechanism, route, available, order, position);
     const blocked = route.filter((step) => order[step.index] === Infinity);
     if (blocked.length === 0) return { seeds, order };
-    const ready = (step: Step) => step.reactants.filter((t) => available.has(t.species)).length;
-    const next = [...blocked].sort((a, b) => ready(b) - ready(a) || a.index - b.index)[0]!;
-    const missing = next.reactants.map((t) => t.species).filter((sp) => !available.has(sp));
-    const seed = missing.find((sp) => declared.includes(sp)) ?? missing[0]!;
+    const seed = chooseSeed(mechanism, route, blocked, available, declared);
     seeds.add(seed);
     available.add(seed);
   }
+}
+
+/**
+ * The species to supply: a declared catalyst if one is missing; otherwise the one that lets the
+ * most of the route run (fewest catalysts in all), then the one taken up beside a substrate
+ * already at hand (E in E + S), then record order.
+ */
+function chooseSeed(mechanism: Mechanism, route: Step[], blocked: Step[], available: ReadonlySet<string>, declared: readonly string[]): string {
+  const missing = [...new Set(blocked.flatMap((step) => step.reactants.map((t) => t.species).filter((sp) => !available.has(sp))))];
+  const wanted = missing.find((sp) => declared.includes(sp));
+  if (wanted) return wanted;
+  const ready = (step: Step) => step.reactants.filter((t) => available.has(t.species)).length;
+  const score = (sp: string) => {
+    const trial = new Set([...available, sp]);
+    const order = mechanism.steps.map(() => Infinity);
+    fire(mechanism, route, trial, order, 0);
+    const runs = route.filter((step) => order[step.index] !== Infinity).length;
+    const takenUp = Math.max(...blocked.filter((step) => step.reactants.some((t) => t.species === sp)).map(ready));
+    return { runs, takenUp, first: blocked.findIndex((step) => step.reactants.some((t) => t.species === sp)) };
+  };
+  const scored = missing.map((sp) => ({ sp, ...score(sp) }));
+  scored.sort((a, b) => b.runs - a.runs || b.takenUp - a.takenUp || a.first - b.first);
+  return scored[0]!.sp;
 }
 
 /** Fires steps until nothing new becomes available; route steps get their positions as they first fire. */

@@ -66,11 +66,26 @@ function conservationRelations(mechanism: Mechanism, internal: string[], roles: 
     if (oriented.some((x) => x.sign() < 0)) continue;
     if (rank([...chosen, oriented], internal.length) > chosen.length) chosen.push(oriented);
   }
-  return chosen.map((w) => {
+  const named = new Set<string>();
+  // Relations with a catalyst form first, the largest first: the catalyst's name goes to its own
+  // pool (all its forms), and a smaller pool it shares (a released ligand) is named after another member.
+  const size = (w: Rational[]) => w.filter((x) => !x.isZero()).length;
+  const ordered = [...chosen].sort((a, b) => Number(hasCatalyst(b)) - Number(hasCatalyst(a)) || size(b) - size(a));
+  function hasCatalyst(w: Rational[]): boolean {
+    return internal.some((sp, i) => !w[i]!.isZero() && roles.get(sp) === 'catalyst');
+  }
+  return ordered.map((w) => {
     const species = internal.filter((_, i) => !w[i]!.isZero());
     const weights = w.filter((x) => !x.isZero());
-    // Name the total after the catalyst form that runs the cycle (weight 1), not a reservoir dimer.
-    const catalyst = species.find((sp, i) => roles.get(sp) === 'catalyst' && weights[i]!.equals(Rational.ONE)) ?? species.find((sp) => roles.get(sp) === 'catalyst') ?? species[0]!;
+    // Name the total after the catalyst form that runs the cycle (weight 1), not a reservoir dimer;
+    // two pools (the metal, a released ligand) never share a name.
+    const candidates = [
+      ...species.filter((sp, i) => roles.get(sp) === 'catalyst' && weights[i]!.equals(Rational.ONE)),
+      ...species.filter((sp) => roles.get(sp) === 'catalyst'),
+      ...species,
+    ];
+    const catalyst = candidates.find((sp) => !named.has(sp)) ?? species[0]!;
+    named.add(catalyst);
     return { species, weights, catalyst, total: totalConcentration(catalyst) };
   });
 }

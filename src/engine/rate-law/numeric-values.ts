@@ -27,11 +27,15 @@ export function constantValues(mechanism: Mechanism, constants: readonly StepCon
   return values;
 }
 
-/** Concentrations of one observation by symbol, with the products taken as absent. */
+/**
+ * Concentrations of one observation by symbol. A conserved pool's total is what the observation
+ * puts into it: Σ weight × listed concentration of each of its forms (a catalyst listed alone is
+ * its total; an added ligand joins the pool it is released from).
+ */
 export function observationValues(observation: Observation, index: number, context: RateLawContext): { values: Map<string, number>; assumedZero: string[]; diagnostics: Diagnostic[] } {
   const values = new Map<string, number>();
+  const listed = new Map<string, number>();
   const diagnostics: Diagnostic[] = [];
-  const totals = new Map(context.conservations.map((c) => [c.catalyst, c.total]));
   for (const [species, text] of Object.entries(observation.concentrations ?? {})) {
     const path = ['observations', index, 'concentrations', species];
     if (!context.mechanism.species.has(species)) {
@@ -44,7 +48,12 @@ export function observationValues(observation: Observation, index: number, conte
       diagnostics.push(diagnostic('observation/units', 'error', `concentration of ${species}: ${why}`, { path, note: 'e.g. 0.10 M, 5 mM, 2.0e17 molecule cm^-3' }));
       continue;
     }
-    values.set(totals.get(species) ?? concentration(species), toCanonical(parsed.quantity));
+    listed.set(species, toCanonical(parsed.quantity));
+    if (!context.internal.includes(species)) values.set(concentration(species), toCanonical(parsed.quantity));
+  }
+  for (const pool of context.conservations) {
+    if (!pool.species.some((sp) => listed.has(sp))) continue;
+    values.set(pool.total, pool.species.reduce((sum, sp, i) => sum + pool.weights[i]!.toNumber() * (listed.get(sp) ?? 0), 0));
   }
   const assumedZero: string[] = [];
   for (const [species, role] of context.roles) {
