@@ -5,6 +5,7 @@
  */
 import type { MechanismRecord, Role } from '../records/mechanism-record.ts';
 import { checkBalance } from './balance.ts';
+import { checkDetailedBalance } from './detailed-balance.ts';
 import { diagnostic, type Diagnostic } from './diagnostic.ts';
 import { buildMechanism, type Mechanism } from './mechanism.ts';
 import { checkMolecularity } from './molecularity.ts';
@@ -61,6 +62,7 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
   const constants = readStepConstants(record, mechanism);
   diagnostics.push(...checkBalance(mechanism), ...checkMolecularity(mechanism), ...constants.diagnostics);
   const fromEnergies = fillFromEnergies(record, mechanism, constants.constants);
+  diagnostics.push(...checkDetailedBalance(mechanism, fromEnergies.constants));
 
   const mustCancel = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate' || s.declaredRole === 'catalyst').map((s) => s.symbol));
   const carriers = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate').map((s) => s.symbol));

@@ -27,6 +27,7 @@ export const RULE_IDS = [
   'observation/units',
   'observation/species',
   'simulation/failed',
+  'constants/detailed-balance',
 ] as const;
 
 export type RuleId = (typeof RULE_IDS)[number];

@@ -42,7 +42,7 @@ export function stoichiometricNumbers(steps: readonly RouteStep[], mustCancel: R
   }
   const columns = routeColumns(steps, free);
   const { routes, families } = searchSupports(steps, columns, mustCancel, carriers);
-  const chosen = chooseRoute(routes, families, mustCancel);
+  const chosen = chooseRoute(routes, families, mustCancel, steps);
   if (chosen.numbers) chosen.diagnostics.push(...separateReactions(steps, chosen.numbers));
   return chosen;
 }
@@ -57,7 +57,7 @@ function separateReactions(steps: readonly RouteStep[], numbers: number[]): Diag
   );
 }
 
-function chooseRoute(routes: Candidate[], families: Family[], mustCancel: ReadonlySet<string>): RouteResult {
+function chooseRoute(routes: Candidate[], families: Family[], mustCancel: ReadonlySet<string>, steps: readonly RouteStep[]): RouteResult {
   if (routes.length === 0 && families.length === 0) {
     const declared = [...mustCancel].join(', ');
     return failed(
@@ -73,7 +73,23 @@ function chooseRoute(routes: Candidate[], families: Family[], mustCancel: Readon
   const better = families.filter((f) => !best || f.chainEnds < best.chainEnds || (f.chainEnds === best.chainEnds && f.cancelled > best.cancelled));
   const ties = best ? ranked.filter((c) => compareCandidates(c, best) === 0) : [];
   if (best && better.length === 0 && ties.length === 1) return { numbers: best.sigma.map(Number), source: 'derived', diagnostics: [] };
-  const alternatives = [...new Set([...ties.map((c) => c.sigma), ...better.flatMap((f) => f.rays)].map((a) => `[${a.join(', ')}]`))];
+  const competing = [...ties.map((c) => c.sigma), ...better.flatMap((f) => f.rays)];
+  // Parallel paths to one and the same overall reaction (random-order binding, two colliders) are
+  // not a choice between reactions: follow the best-ranked path and say which steps run beside it.
+  if (best && sameOverall(steps, [best.sigma, ...competing])) {
+    const beside = steps.flatMap((_, i) => (best.sigma[i] === 0n && competing.some((s) => s[i]! > 0n) ? [i + 1] : []));
+    return {
+      numbers: best.sigma.map(Number),
+      source: 'derived',
+      diagnostics: [
+        diagnostic('route/ambiguous', 'info', `steps ${beside.join(', ')} form a parallel path to the same overall reaction; σ follows the path through steps ${best.sigma.flatMap((x, i) => (x > 0n ? [i + 1] : [])).join(', ')}`, {
+          path: ['steps'],
+          note: 'the steady-state rate law includes every path; give times to choose another',
+        }),
+      ],
+    };
+  }
+  const alternatives = [...new Set(competing.map((a) => `[${a.join(', ')}]`))];
   const listed = alternatives.slice(0, 4).join(' or ');
   return failed(
     diagnostic('route/ambiguous', 'error', `the steps allow several independent routes (${listed}); say which with times on each step`, {
@@ -90,6 +106,21 @@ function chooseRoute(routes: Candidate[], families: Family[], mustCancel: Readon
  * complex or a bound catalyst is not one); the most economical overall equation; the most species
  * formed before they are consumed; the plain sum; the fewest steps; the smallest numbers.
  */
+/** True when every σ gives the same overall equation, up to a positive factor. */
+function sameOverall(steps: readonly RouteStep[], sigmas: bigint[][]): boolean {
+  const direction = (sigma: bigint[]) => {
+    const net = new Map<string, Rational>();
+    steps.forEach((step, i) => {
+      for (const [sp, v] of step.change) net.set(sp, (net.get(sp) ?? Rational.ZERO).add(v.mul(Rational.of(sigma[i]!))));
+    });
+    const entries = [...net].filter(([, v]) => !v.isZero()).sort(([a], [b]) => (a < b ? -1 : 1));
+    const scale = entries[0]?.[1].abs();
+    return entries.map(([sp, v]) => `${sp}:${scale ? v.div(scale).toString() : '0'}`).join(' ');
+  };
+  const first = direction(sigmas[0]!);
+  return first !== '' && sigmas.every((s) => direction(s) === first);
+}
+
 function compareCandidates(a: Candidate, b: Candidate): number {
   return (
     a.chainEnds - b.chainEnds ||

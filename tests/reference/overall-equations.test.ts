@@ -232,3 +232,20 @@ steps:
     expect(d.roles!.get('ES')).toBe('intermediate');
   });
 });
+
+describe('parallel paths to one overall reaction', () => {
+  it('random-order binding of two substrates: one overall reaction, the other path noted', () => {
+    // Random-order bi-substrate mechanism, e.g. Cornish-Bowden, Fundamentals of Enzyme Kinetics (from memory).
+    const d = deriveYaml(`${header('random-bi')}notation: labels
+steps:
+  - equation: E + A <=> EA
+  - equation: E + B <=> EB
+  - equation: EA + B <=> EAB
+  - equation: EB + A <=> EAB
+  - { equation: EAB -> E + P, rds: true }
+`);
+    expect(errorRules(d)).toEqual([]);
+    expect(overallSides(d)).toEqual({ reactants: { A: 1, B: 1 }, products: { P: 1 }, catalysts: ['E'] });
+    expect(d.diagnostics.find((x) => x.rule === 'route/ambiguous')).toMatchObject({ severity: 'info' });
+  });
+});

@@ -68,6 +68,7 @@ export function deriveRateLaws(
     diagnostics.push(...result.diagnostics);
     if (!result.law) continue;
     const law = result.law;
+    law.pools = context.conservations.map((c) => ({ total: c.total, species: c.species, weights: c.weights.map((w) => w.toNumber()) }));
     if (!law.expression) {
       rateLaws.push({ law, orders: new Map(), restingStates: [] });
       continue;

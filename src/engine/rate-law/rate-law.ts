@@ -41,6 +41,8 @@ export interface RateLaw {
   /** a named product of constants, k_obs, that multiplies the concentration part */
   grouped?: { name: string; value: Polynomial; law: RationalFunction };
   catalystBalances: CatalystBalance[];
+  /** the conserved pools whose totals the law uses: total symbol, member species, weights */
+  pools?: { total: string; species: string[]; weights: number[] }[];
   trace: TraceLine[];
 }
 

@@ -98,17 +98,15 @@ function simulatedOrders(derivation: Derivation, setup: SimulationSetup, species
   return out;
 }
 
-/** The rate law's value at the simulated state (external concentrations, catalyst totals). */
+/** The rate law's value at the simulated state (external concentrations, pool totals from the start). */
 export function lawRateAt(derived: DerivedRateLaw, setup: SimulationSetup, state: Float64Array, constants: ReadonlyMap<string, number>): number | undefined {
   const values = new Map(constants);
+  const at = (sp: string, y: Float64Array) => y[setup.model.species.indexOf(sp)] ?? 0;
   setup.model.species.forEach((sp, i) => values.set(concentration(sp), state[i]!));
-  for (const balance of derived.law.catalystBalances) {
-    values.set(balance.total, setup.y0[setup.model.species.indexOf(balance.catalyst)]!);
-  }
+  // A pool's total is conserved: what the starting mixture put into it.
+  for (const pool of derived.law.pools ?? []) values.set(pool.total, pool.species.reduce((sum, sp, i) => sum + pool.weights[i]! * at(sp, setup.y0), 0));
   if (derived.law.expression) {
     const e = derived.law.expression;
-    const totals = e.symbols().filter((s) => s.endsWith(']_T'));
-    for (const t of totals) if (!values.has(t)) values.set(t, setup.y0[setup.model.species.indexOf(t.slice(1, -3))] ?? Number.NaN);
     if (!e.symbols().every((s) => values.has(s))) return undefined;
     const r = e.evaluate(values);
     return Number.isFinite(r) ? r : undefined;
