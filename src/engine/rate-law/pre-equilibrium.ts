@@ -44,7 +44,7 @@ export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt
   unknowns.forEach((sp, i) => solved[i] && value.set(sp, solved[i]!));
 
   const stuck = rds.reactants.map((t) => t.species).filter((sp) => unknowns.includes(sp) && !value.has(sp));
-  if (stuck.length > 0) return { diagnostics: [notEliminable(rds, stuck)] };
+  if (stuck.length > 0) return { diagnostics: [notEliminable(rds, stuck, equilibria, unknowns.filter((sp) => !value.has(sp)))] };
   rate = substitute(rate, value);
   for (const sp of rds.reactants.map((t) => t.species).filter((s) => value.has(s))) {
     trace.push(fmt.line(`${sp} from the equilibria`, [concentration(sp), fmt.style.latex(concentration(sp))], Polynomial.term(Rational.ONE, value.get(sp)!)));
@@ -90,11 +90,18 @@ function equilibriumLine(step: Step, fmt: Formatter): TraceLine {
   return fmt.line(`step ${step.label} at equilibrium`, [K, fmt.style.latex(K)], quotient);
 }
 
-function notEliminable(rds: Step, stuck: string[]): Diagnostic {
-  return diagnostic(
-    'rate/not-eliminable',
-    'error',
-    `${stuck.join(', ')} cannot be eliminated: no reversible step before the rate-determining step ${rds.label} fixes ${stuck.length === 1 ? 'its' : 'their'} concentration`,
-    { path: ['steps', rds.index], note: 'use approximation: steady_state, or make the step that forms it reversible' },
-  );
+function notEliminable(rds: Step, stuck: string[], equilibria: Step[], undetermined: string[]): Diagnostic {
+  const reasons = stuck.map((sp) => {
+    const holding = equilibria.filter((s) => s.change.has(sp));
+    if (holding.length === 0) return `no reversible step before the rate-determining step ${rds.label} forms ${sp}`;
+    const others = [...new Set(holding.flatMap((s) => [...s.change.keys()]))].filter((x) => x !== sp && undetermined.includes(x));
+    const steps = holding.map((s) => s.label).join(', ');
+    return others.length > 0
+      ? `the equilibrium of step ${steps} ties ${sp} to ${others.join(', ')}, which no other equilibrium or measured concentration fixes`
+      : `the equilibria of steps ${steps} do not fix ${sp} on their own`;
+  });
+  return diagnostic('rate/not-eliminable', 'error', `${stuck.join(', ')} cannot be eliminated: ${reasons.join('; ')}`, {
+    path: ['steps', rds.index],
+    note: 'use approximation: steady_state; make the step that forms it reversible; or declare a co-product held constant (buffered: true)',
+  });
 }

@@ -39,7 +39,13 @@ export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, p
   const coarse = integrateStiff(model.system, y0, { tEnd: LAST_TIME, outputTimes: times, rtol: 1e-7, atol: COARSE_ABSOLUTE_TOLERANCE * Math.max(1, probe.maxExtent), nonNegative: true, maxSteps: 50_000 });
   const hit = coarse.y.findIndex((y) => extent(y) >= target);
   if (hit < 0) {
-    return { status: 'failed', message: coarse.status === 'ok' ? `the reaction does not reach ${CONVERSION_FOR_INITIAL_RATE * 100} % conversion within 1e12 s (about 30 000 years)` : coarse.message ?? coarse.status };
+    if (coarse.status !== 'ok') return { status: 'failed', message: coarse.message ?? coarse.status };
+    const reached = extent(coarse.y.at(-1) ?? y0) / probe.maxExtent;
+    const message =
+      reached <= 0
+        ? 'the overall reaction does not run forwards from these concentrations (a species it needs may be absent, or the mixture may be past equilibrium)'
+        : `the reaction reaches only ${(reached * 100).toPrecision(2)} % of its extent within 1e12 s (about 30 000 years), short of the ${CONVERSION_FOR_INITIAL_RATE * 100} % at which the initial rate is read`;
+    return { status: 'failed', message };
   }
   const t0 = hit === 0 ? 0 : coarse.t[hit - 1]!;
   const start = hit === 0 ? y0 : coarse.y[hit - 1]!;
