@@ -68,7 +68,7 @@ export interface RateLawJson {
   /** solvents whose constant concentration is absorbed into the constants */
   absorbed?: string[];
   /** the conserved catalysts' forms, for the resting state */
-  catalyst_balances?: { catalyst: string; total: string; forms: { species: string; fraction: string }[] }[];
+  catalyst_balances?: { catalyst: string; total: string; forms: { species: string; fraction: string; fraction_latex: string }[] }[];
   /** the dominant catalyst form at each observation's conditions */
   resting_states?: { observation: string; catalyst: string; species: string; fraction: number }[];
   numeric_only?: boolean;
@@ -157,7 +157,7 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
   }
   if (law.absorbed.length > 0) out.absorbed = law.absorbed;
   if (law.catalystBalances.length > 0) {
-    out.catalyst_balances = law.catalystBalances.map((b) => ({ catalyst: b.catalyst, total: b.total, forms: b.forms.map((f) => ({ species: f.species, fraction: formatText(f.fraction) })) }));
+    out.catalyst_balances = law.catalystBalances.map((b) => ({ catalyst: b.catalyst, total: b.total, forms: b.forms.map((f) => ({ species: f.species, fraction: f.text, fraction_latex: f.latex })) }));
   }
   if (derived.restingStates.length > 0) out.resting_states = derived.restingStates;
   if (!law.expression) out.numeric_only = true;

@@ -64,7 +64,10 @@ export function catalystBalance(
     },
     fmt.line('the rate in terms of the total catalyst', ['r', 'r'], result),
   ];
-  const fractions = forms.map((f) => ({ species: f.species, fraction: RationalFunction.of(f.term, denominator) }));
+  const fractions = forms.map((f) => {
+    const fraction = RationalFunction.of(f.term, denominator);
+    return { species: f.species, fraction, text: fmt.text(fraction), latex: fmt.latex(fraction) };
+  });
   return { balance: { catalyst: conservation.catalyst, total, forms: fractions }, law: result, trace };
 }
 

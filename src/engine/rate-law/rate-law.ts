@@ -18,7 +18,7 @@ export interface CatalystBalance {
   /** the symbol of the total, e.g. `[E]_T` */
   total: string;
   /** each form's share of the total, [form]/[E]_T, as an exact function of the conditions */
-  forms: { species: string; fraction: RationalFunction }[];
+  forms: { species: string; fraction: RationalFunction; text: string; latex: string }[];
 }
 
 /** The steady-state equations kept for a numeric solution where they are not linear. */

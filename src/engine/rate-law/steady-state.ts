@@ -66,7 +66,10 @@ export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { l
   const catalystBalances = context.conservations.map((c) => ({
     catalyst: c.catalyst,
     total: c.total,
-    forms: c.species.map((sp) => ({ species: sp, fraction: solution[internal.indexOf(sp)]!.div(RationalFunction.fromPolynomial(Polynomial.symbol(c.total))) })),
+    forms: c.species.map((sp) => {
+      const fraction = solution[internal.indexOf(sp)]!.div(RationalFunction.fromPolynomial(Polynomial.symbol(c.total)));
+      return { species: sp, fraction, text: fmt.text(fraction), latex: fmt.latex(fraction) };
+    }),
   }));
   return { law: { method: 'steady_state', expression, absorbed: [], catalystBalances, trace }, diagnostics: [] };
 }
