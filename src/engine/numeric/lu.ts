@@ -42,7 +42,8 @@ export function luFactor(a: Float64Array, n: number, pivots: Int32Array): boolea
 
 /** Solves A x = b in place in `b`, given the factors and pivots from `luFactor`. */
 export function luSolve(lu: Float64Array, n: number, pivots: Int32Array, b: Float64Array): void {
-  // Forward substitution applies the row swaps in the order they were made.
+  // luFactor swaps whole rows, multipliers included, so the stored L belongs to the final row
+  // order: apply every swap, in the order made, before any elimination.
   for (let k = 0; k < n; k++) {
     const p = pivots[k]!;
     if (p !== k) {
@@ -50,6 +51,8 @@ export function luSolve(lu: Float64Array, n: number, pivots: Int32Array, b: Floa
       b[k] = b[p]!;
       b[p] = tmp;
     }
+  }
+  for (let k = 0; k < n; k++) {
     const bk = b[k]!;
     if (bk === 0) continue;
     for (let i = k + 1; i < n; i++) b[i] = b[i]! - lu[i * n + k]! * bk;

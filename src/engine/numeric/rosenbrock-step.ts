@@ -1,24 +1,21 @@
 /**
  * One step of the Rosenbrock method in transformed form (Hairer & Wanner II, section IV.7):
  * a single LU factorisation of I/(hγ) − J serves every stage, and each stage is one linear solve,
- * so the step stays stable however stiff the kinetics is. Each solve is refined against the matrix
- * (lu.ts), since the stages of a radical at 1e-15 M must not carry the rounding of a reactant's
- * equation at 1e-3 M: an error the embedded estimate, built from the same stages, cannot see.
+ * so the step stays stable however stiff the kinetics is. The factorisation and solves are carried
+ * in double-double (extended-lu.ts): a fast pre-equilibrium beside a long step makes the matrix
+ * near-singular along the conservation laws, and a radical at 1e-15 M must not carry the rounding
+ * of a reactant's equation at 1e-3 M; in either case an error the embedded estimate, built from the
+ * same stages, cannot see.
  */
-import { luFactor, luSolveRefined } from './lu.ts';
+import { createExtendedLuWorkspace, extendedLuFactor, extendedLuSolve, setShiftedNegative, type ExtendedLuWorkspace } from './extended-lu.ts';
 import { ROSENBROCK_METHOD, type TransformedMethod } from './rosenbrock-method.ts';
 import type { OdeSystem } from './stiff-integrator.ts';
 
 /** Scratch arrays of one integration, allocated once so that steps allocate nothing. */
 export interface StepWorkspace {
   n: number;
-  /** The iteration matrix I/(hγ) − J, kept beside its LU factors for the refinement residual. */
-  matrix: Float64Array;
-  factors: Float64Array;
-  pivots: Int32Array;
-  /** A stage's right-hand side, kept while its solution is refined, and the residual. */
-  rhs: Float64Array;
-  residual: Float64Array;
+  /** The iteration matrix I/(hγ) − J and its factors, in double-double. */
+  lu: ExtendedLuWorkspace;
   stages: Float64Array[];
   argument: Float64Array;
 }
@@ -30,11 +27,7 @@ export type StepOutcome = 'ok' | 'singular' | 'non-finite';
 export function createWorkspace(n: number, method: TransformedMethod = ROSENBROCK_METHOD): StepWorkspace {
   return {
     n,
-    matrix: new Float64Array(n * n),
-    factors: new Float64Array(n * n),
-    pivots: new Int32Array(n),
-    rhs: new Float64Array(n),
-    residual: new Float64Array(n),
+    lu: createExtendedLuWorkspace(n),
     stages: Array.from({ length: method.stages }, () => new Float64Array(n)),
     argument: new Float64Array(n),
   };
@@ -57,12 +50,9 @@ export function rosenbrockStep(
   ws: StepWorkspace,
   method: TransformedMethod = ROSENBROCK_METHOD,
 ): StepOutcome {
-  const { n, matrix, factors, pivots, rhs, residual, stages, argument } = ws;
-  const diagonal = 1 / (h * method.gamma);
-  for (let k = 0; k < n * n; k++) matrix[k] = -jacobian[k]!;
-  for (let i = 0; i < n; i++) matrix[i * n + i] = matrix[i * n + i]! + diagonal;
-  factors.set(matrix);
-  if (!luFactor(factors, n, pivots)) return 'singular';
+  const { n, lu, stages, argument } = ws;
+  setShiftedNegative(lu, 1 / (h * method.gamma), jacobian);
+  if (!extendedLuFactor(lu)) return 'singular';
 
   for (let s = 0; s < method.stages; s++) {
     const u = stages[s]!;
@@ -79,8 +69,7 @@ export function rosenbrockStep(
       system.rhs(t + method.stageTimes[s]! * h, argument, u);
     }
     for (let j = 0; j < s; j++) addScaled(u, cRow[j]! / h, stages[j]!);
-    rhs.set(u);
-    luSolveRefined(matrix, factors, n, pivots, rhs, u, residual);
+    extendedLuSolve(lu, u, u);
   }
 
   y1.set(y0);
