@@ -5,15 +5,13 @@
  */
 import { createHash } from 'node:crypto';
 import { existsSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { findRecordFiles } from '../records/index.ts';
-import { checkRecordFiles } from './check-records.ts';
 import { UsageError, type Output } from './output.ts';
-import { catalogueReport } from './report/catalogue-report.ts';
+import type { CatalogueReport } from './report/catalogue-report.ts';
 import { summaryLine } from './report/text.ts';
-import { toolVersion } from './version.ts';
 
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 
@@ -28,8 +26,6 @@ export async function buildCommand(options: BuildOptions, out: Output): Promise<
   const content = resolve(options.content);
   const outDir = resolve(options.out);
   if (!existsSync(content)) throw new UsageError(`no such folder: ${options.content}`);
-  const { files } = await findRecordFiles([content]);
-  const report = catalogueReport(await checkRecordFiles(files), toolVersion());
   process.env['MECHATLAS_CONTENT'] = content;
   process.env['MECHATLAS_OUT'] = outDir;
   const { build } = await import('astro');
@@ -37,6 +33,8 @@ export async function buildCommand(options: BuildOptions, out: Output): Promise<
   // builds into different folders (parallel test files) each get their own cache, outside the tree.
   const cacheDir = join(tmpdir(), 'mechatlas-astro-cache', createHash('sha256').update(outDir).digest('hex').slice(0, 12));
   await build({ root: ROOT, outDir, cacheDir, logLevel: 'warn' });
+  // The site's own API holds the report the build derived; the records are not derived twice.
+  const report = JSON.parse(await readFile(join(outDir, 'api', 'mechanisms.json'), 'utf8')) as CatalogueReport;
   out.stdout(`built the catalogue of ${options.content} into ${options.out}/ — ${summaryLine(report)}\n`);
   if (report.summary.errors > 0) out.stderr(`${report.summary.errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
   return options.strict && report.summary.errors > 0 ? 1 : 0;
