@@ -62,6 +62,6 @@ if (process.argv.includes('--site') && siteCopies > 0) {
   }
   const start = performance.now();
   execFileSync(process.execPath, ['bin/mechatlas.mjs', 'build', '--content', content, '--out', join(work, 'site')], { stdio: 'ignore' });
-  console.log(`\nsite build of ${demo.length * siteCopies} records: ${((performance.now() - start) / 1000).toFixed(1)} s (check + Astro build)`);
+  console.log(`\nsite build of ${demo.length * siteCopies} records: ${((performance.now() - start) / 1000).toFixed(1)} s (derivations + Astro build)`);
   rmSync(work, { recursive: true, force: true });
 }
