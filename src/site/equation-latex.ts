@@ -1,7 +1,8 @@
 /**
- * A step equation as LaTeX for KaTeX: each species through speciesLatex (which lets no user text
- * become a command), coefficients before their species, and the one-way or reversible arrow.
- * The equation is read by the engine's own parser, so the page shows exactly what was derived.
+ * Equations as LaTeX for KaTeX: each species through speciesLatex (which lets no user text
+ * become a command), coefficients before their species. A step gets its one-way or reversible
+ * arrow (the text is read by the engine's own parser, so the page shows exactly what was
+ * derived); the overall equation gets its catalysts over the arrow.
  */
 import { parseEquation, type Term } from '../engine/equation.ts';
 import { Rational } from '../engine/rational.ts';
@@ -16,6 +17,13 @@ export function equationLatex(equation: string): string | undefined {
   return `${sideLatex(reactants)} ${arrow} ${sideLatex(products)}`;
 }
 
-function sideLatex(terms: readonly Term[]): string {
+/** `2\,\mathrm{H_2O_2} \xrightarrow{\mathrm{I^-}} 2\,\mathrm{H_2O} + \mathrm{O_2}`: catalysts over the arrow. */
+export function overallLatex(reactants: ReadonlyMap<string, Rational>, products: ReadonlyMap<string, Rational>, catalysts: readonly string[]): string {
+  const arrow = catalysts.length > 0 ? `\\xrightarrow{${catalysts.map(speciesLatex).join(',\\,')}}` : '\\longrightarrow';
+  return `${sideLatex([...reactants].map(([species, coefficient]) => ({ species, coefficient })))} ${arrow} ${sideLatex([...products].map(([species, coefficient]) => ({ species, coefficient })))}`;
+}
+
+function sideLatex(terms: readonly Pick<Term, 'species' | 'coefficient'>[]): string {
+  if (terms.length === 0) return '\\varnothing';
   return terms.map((t) => `${t.coefficient.equals(Rational.ONE) ? '' : `${t.coefficient.toString()}\\,`}${speciesLatex(t.species)}`).join(' + ');
 }

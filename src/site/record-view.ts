@@ -5,13 +5,12 @@
  */
 import type { CheckedRecord } from '../cli/check-records.ts';
 import { recordReport, type RecordReport } from '../cli/report/record-report.ts';
+import { overallLatex } from './equation-latex.ts';
 import { molecularity } from '../engine/molecularity.ts';
 import { concentrationTimeSvg } from '../engine/plots/concentration-time-svg.ts';
 import { energyProfileSvg } from '../engine/plots/energy-profile-svg.ts';
 import { sbmlDocument } from '../engine/export/sbml.ts';
 import { firstObservationSeries } from '../engine/simulation/concentration-series.ts';
-import { speciesLatex } from '../engine/rate-law/species-latex.ts';
-import type { Rational } from '../engine/rational.ts';
 import type { Observation, Reference } from '../records/mechanism-record.ts';
 
 export interface StepView {
@@ -113,7 +112,7 @@ export function recordView(checked: CheckedRecord, source: string): RecordView {
   if (mechanism && record) {
     view.steps = mechanism.steps.map((step): StepView => {
       const entry = record.steps[step.index]!;
-      const onStep = report.diagnostics.filter((d) => checked.diagnostics.some((x) => x.message === d.message && x.path?.[0] === 'steps' && x.path[1] === step.index));
+      const onStep = checked.diagnostics.filter((d) => d.path?.[0] === 'steps' && d.path[1] === step.index);
       const balance = onStep.some((d) => d.severity === 'error' && d.rule.startsWith('balance/'))
         ? 'unbalanced'
         : onStep.some((d) => d.rule === 'balance/atoms') || mechanism.notation === 'labels'
@@ -158,12 +157,4 @@ function observationView(o: Observation): ObservationView {
   if (o.T !== undefined) out.T = String(o.T);
   if (o.note !== undefined) out.note = o.note;
   return out;
-}
-
-/** `2\,\mathrm{H_2O_2} \xrightarrow{\mathrm{I^-}} 2\,\mathrm{H_2O} + \mathrm{O_2}`: catalysts over the arrow. */
-export function overallLatex(reactants: ReadonlyMap<string, Rational>, products: ReadonlyMap<string, Rational>, catalysts: readonly string[]): string {
-  const side = (m: ReadonlyMap<string, Rational>) =>
-    [...m].map(([sp, c]) => `${c.equals(c.div(c)) ? '' : `${c.toString()}\\,`}${speciesLatex(sp)}`).join(' + ') || '\\varnothing';
-  const arrow = catalysts.length > 0 ? `\\xrightarrow{${catalysts.map(speciesLatex).join(',\\,')}}` : '\\longrightarrow';
-  return `${side(reactants)} ${arrow} ${side(products)}`;
 }
