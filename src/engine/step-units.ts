@@ -54,11 +54,6 @@ export function readStepConstants(record: MechanismRecord, mechanism: Mechanism)
   return { constants, diagnostics };
 }
 
-/** The unit checks alone, for the foundation stage of a derivation. */
-export function checkStepUnits(record: MechanismRecord, mechanism: Mechanism): Diagnostic[] {
-  return readStepConstants(record, mechanism).diagnostics;
-}
-
 function checkedQuantity(
   text: string | number,
   expected: Dimension,

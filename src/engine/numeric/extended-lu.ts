@@ -11,6 +11,7 @@
  * The arithmetic is Dekker's (Numer. Math. 18, 1971) with Knuth's two-sum, as described by Hida,
  * Li & Bailey for double-double libraries (all from memory).
  */
+import { pivotRow } from './lu.ts';
 
 /** Double-double scratch: the iteration matrix and its factors as hi and lo parts, row-major n × n. */
 export interface ExtendedLuWorkspace {
@@ -56,16 +57,10 @@ export function extendedLuFactor(ws: ExtendedLuWorkspace): boolean {
   hi.set(ws.matrixHi);
   lo.set(ws.matrixLo);
   for (let k = 0; k < n; k++) {
-    let p = k;
-    let max = Math.abs(hi[k * n + k]!);
-    for (let i = k + 1; i < n; i++) {
-      const v = Math.abs(hi[i * n + k]!);
-      if (v > max) {
-        max = v;
-        p = i;
-      }
-    }
+    // The high words order the candidates as the full values do, to within rounding.
+    const p = pivotRow(hi, n, k);
     pivots[k] = p;
+    const max = Math.abs(hi[p * n + k]!);
     if (max === 0 || !Number.isFinite(max)) return false;
     if (p !== k) {
       for (let j = 0; j < n; j++) {

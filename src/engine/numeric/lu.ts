@@ -4,23 +4,30 @@
  * iterative refinement is what the integrator uses: species twenty decades apart need it.
  */
 
+/** The row at or below k with the largest entry in column k (partial pivoting). */
+export function pivotRow(a: Float64Array, n: number, k: number): number {
+  // The largest pivot in the column keeps the multipliers at most 1 in size.
+  let p = k;
+  let max = Math.abs(a[k * n + k]!);
+  for (let i = k + 1; i < n; i++) {
+    const v = Math.abs(a[i * n + k]!);
+    if (v > max) {
+      max = v;
+      p = i;
+    }
+  }
+  return p;
+}
+
 /**
  * Factors `a` in place into unit-lower L and upper U with row swaps recorded in `pivots`;
  * returns false when a pivot is exactly zero or not finite (the caller shrinks the step).
  */
 export function luFactor(a: Float64Array, n: number, pivots: Int32Array): boolean {
   for (let k = 0; k < n; k++) {
-    // The largest pivot in the column keeps the multipliers at most 1 in size.
-    let p = k;
-    let max = Math.abs(a[k * n + k]!);
-    for (let i = k + 1; i < n; i++) {
-      const v = Math.abs(a[i * n + k]!);
-      if (v > max) {
-        max = v;
-        p = i;
-      }
-    }
+    const p = pivotRow(a, n, k);
     pivots[k] = p;
+    const max = Math.abs(a[p * n + k]!);
     if (max === 0 || !Number.isFinite(max)) return false;
     if (p !== k) {
       for (let j = 0; j < n; j++) {

@@ -17,6 +17,7 @@ import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
 import type { RestingState } from './resting-state.ts';
 import { steadyStateRateLaw } from './steady-state.ts';
+import { concentration } from './symbols.ts';
 
 export interface DerivedRateLaw {
   law: RateLaw;
@@ -74,7 +75,7 @@ export function deriveRateLaws(
       continue;
     }
     const presented = presentLaw(law.expression, context.solvents, fmt);
-    law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(`[${s}]`));
+    law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(concentration(s)));
     rateLaws.push({ law, presented, orders: reportedOrders(presented.expression, symbols, roles), restingStates: [] });
   }
   const checked = checkObservations(record, context, rateLaws, constants, symbols);

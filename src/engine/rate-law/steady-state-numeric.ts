@@ -16,7 +16,7 @@ export function solveSteadyStateNumeric(system: NonlinearSystem, values: Readonl
   const { unknowns, equations } = system;
   const needed = new Set([...equations.flatMap((e) => e.symbols()), ...system.rate.symbols()]);
   for (const s of needed) if (!unknowns.includes(s) && !values.has(s)) return undefined;
-  const jacobian = equations.map((eq) => unknowns.map((u) => eq.derivative(u)));
+  const jacobian = jacobianOf(system);
   for (const scale of STARTING_SCALES) {
     const z = unknowns.map(() => Math.log(scale));
     if (newton(equations, jacobian, unknowns, values, z)) {
@@ -26,6 +26,19 @@ export function solveSteadyStateNumeric(system: NonlinearSystem, values: Readonl
     }
   }
   return undefined;
+}
+
+// A system is solved many times (each observation, each perturbed concentration): its symbolic
+// Jacobian is worked out once.
+const jacobians = new WeakMap<NonlinearSystem, Polynomial[][]>();
+
+function jacobianOf(system: NonlinearSystem): Polynomial[][] {
+  let jacobian = jacobians.get(system);
+  if (!jacobian) {
+    jacobian = system.equations.map((eq) => system.unknowns.map((u) => eq.derivative(u)));
+    jacobians.set(system, jacobian);
+  }
+  return jacobian;
 }
 
 function newton(equations: Polynomial[], jacobian: Polynomial[][], unknowns: string[], values: ReadonlyMap<string, number>, z: number[]): boolean {
