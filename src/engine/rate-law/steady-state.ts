@@ -48,7 +48,7 @@ export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { l
     return {
       law,
       diagnostics: [
-        diagnostic('rate/nonlinear', 'info', 'a step is second order in internal species, so the steady state is solved numerically at each observation with constants', {
+        diagnostic('rate/nonlinear', 'info', 'a step brings two intermediates or catalyst forms together (a recombination, say), so the steady-state equations are not linear: they are solved numerically at each observation that gives constants and concentrations, with no closed-form law', {
           path: ['steps'],
         }),
       ],
