@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 /**
- * Writes src/records/mechanism-record.ts from schemas/mechanism.schema.json, so the record types
+ * Writes src/model/mechanism-record.ts from schemas/mechanism.schema.json, so the record types
  * cannot drift from the schema. `--stdout` prints the result instead (the freshness test uses it).
  */
 import { readFile, writeFile } from 'node:fs/promises';
@@ -8,7 +8,7 @@ import { fileURLToPath } from 'node:url';
 import { compile } from 'json-schema-to-typescript';
 
 const schemaPath = fileURLToPath(new URL('../schemas/mechanism.schema.json', import.meta.url));
-const outputPath = fileURLToPath(new URL('../src/records/mechanism-record.ts', import.meta.url));
+const outputPath = fileURLToPath(new URL('../src/model/mechanism-record.ts', import.meta.url));
 
 const BANNER = `/**
  * GENERATED from schemas/mechanism.schema.json by scripts/generate-record-types.mjs.

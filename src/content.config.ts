@@ -4,7 +4,7 @@
  * with errors still gets its page, showing its diagnostics.
  */
 import { defineCollection } from 'astro:content';
-import { loadCatalogue } from './site/catalogue.ts';
+import { loadCatalogue } from './catalogue/catalogue.ts';
 
 function catalogueLoader<T>(name: string, pick: (c: Awaited<ReturnType<typeof loadCatalogue>>) => { id: string; data: T }[]) {
   return {

@@ -4,7 +4,7 @@
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { checkRecordFile } from '../src/cli/check-records.ts';
+import { checkRecordFile } from '../src/catalogue/check-records.ts';
 import { readExpectations } from './fixture-expectations.ts';
 
 const dir = (kind: string) => `tests/fixtures/${kind}`;

@@ -2,13 +2,13 @@
 import { execFileSync } from 'node:child_process';
 import { relative, resolve } from 'node:path';
 import { findRecordFiles } from '../records/index.ts';
-import { checkRecordFiles } from './check-records.ts';
-import { catalogueReport } from './report/catalogue-report.ts';
-import { markdownReport } from './report/markdown.ts';
-import { sarifReport } from './report/sarif.ts';
-import { textReport } from './report/text.ts';
+import { checkRecordFiles } from '../catalogue/check-records.ts';
+import { catalogueReport } from '../render/report/catalogue-report.ts';
+import { markdownReport } from '../render/report/markdown.ts';
+import { sarifReport } from '../render/report/sarif.ts';
+import { textReport } from '../render/report/text.ts';
 import { UsageError, type Output } from './output.ts';
-import { toolVersion } from './version.ts';
+import { toolVersion } from '../catalogue/tool-version.ts';
 
 const FORMATS = { text: textReport, json: (r: object) => JSON.stringify(r, null, 2) + '\n', markdown: markdownReport, sarif: sarifReport } as const;
 export const DEFAULT_CATALOGUE = 'content/mechanisms';

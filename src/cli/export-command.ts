@@ -2,8 +2,8 @@
 import { existsSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { sbmlDocument } from '../engine/export/sbml.ts';
-import { checkRecordFile } from './check-records.ts';
+import { sbmlDocument } from '../render/sbml/sbml.ts';
+import { checkRecordFile } from '../catalogue/check-records.ts';
 import { DEFAULT_CATALOGUE } from './check-command.ts';
 import { UsageError, type Output } from './output.ts';
 

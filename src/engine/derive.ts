@@ -3,18 +3,18 @@
  * Pure: a valid record in, a value with diagnostics out. Later stages (rate laws, orders,
  * observations, energies) add to the same value.
  */
-import type { MechanismRecord, Role } from '../records/mechanism-record.ts';
-import { checkBalance } from './balance.ts';
-import { checkDetailedBalance } from './detailed-balance.ts';
-import { diagnostic, type Diagnostic } from './diagnostic.ts';
-import { buildMechanism, type Mechanism } from './mechanism.ts';
-import { checkMolecularity } from './molecularity.ts';
-import { overallEquation, type OverallEquation } from './overall-equation.ts';
-import { deriveRoles } from './roles.ts';
-import { stoichiometricNumbers } from './route.ts';
-import type { ObservationCheck } from './observations.ts';
+import type { MechanismRecord, Role } from '../model/mechanism-record.ts';
+import { checkBalance } from './mechanism/balance.ts';
+import { checkDetailedBalance } from './mechanism/detailed-balance.ts';
+import { diagnostic, type Diagnostic } from '../model/diagnostic.ts';
+import { buildMechanism, type Mechanism } from './mechanism/mechanism.ts';
+import { checkMolecularity } from './mechanism/molecularity.ts';
+import { overallEquation, type OverallEquation } from './route/overall-equation.ts';
+import { deriveRoles } from './route/roles.ts';
+import { stoichiometricNumbers } from './route/stoichiometric-numbers.ts';
+import type { ObservationCheck } from './observations/judge-order.ts';
 import { deriveRateLaws, type DerivedRateLaw } from './rate-law/derive-rate-laws.ts';
-import { readStepConstants, type StepConstants } from './step-units.ts';
+import { readStepConstants, type StepConstants } from './mechanism/step-constants.ts';
 import { energyAnalysis, energyConditions, eyringStepConstants, type EnergyResult } from './energy/index.ts';
 import { constantValues } from './rate-law/numeric-values.ts';
 import { checkApproximations, type SimulationCheck } from './simulation/approximation-validity.ts';

@@ -3,9 +3,9 @@
  * "Contracts"): the engine's report of each record, with file paths relative to the repository
  * as the CLI prints them, never the build machine's absolute paths.
  */
-import type { CatalogueReport } from '../cli/report/catalogue-report.ts';
-import type { RecordReport } from '../cli/report/record-report.ts';
-import { toolVersion } from '../cli/version.ts';
+import type { CatalogueReport } from '../render/report/catalogue-report.ts';
+import type { RecordReport } from '../render/report/record-report.ts';
+import { toolVersion } from '../catalogue/tool-version.ts';
 import type { RecordView } from './record-view.ts';
 
 /** The report of one record with its file given as the catalogue names it. */

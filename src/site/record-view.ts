@@ -3,15 +3,15 @@
  * renders it and recomputes no chemistry): the report, the steps with their marks, the overall
  * equation in LaTeX with catalysts over the arrow, and the species with their roles.
  */
-import type { CheckedRecord } from '../cli/check-records.ts';
-import { recordReport, type RecordReport } from '../cli/report/record-report.ts';
-import { overallLatex } from './equation-latex.ts';
-import { molecularity } from '../engine/molecularity.ts';
-import { concentrationTimeSvg } from '../engine/plots/concentration-time-svg.ts';
-import { energyProfileSvg } from '../engine/plots/energy-profile-svg.ts';
-import { sbmlDocument } from '../engine/export/sbml.ts';
+import type { CheckedRecord } from '../catalogue/check-records.ts';
+import { recordReport, type RecordReport } from '../render/report/record-report.ts';
+import { overallLatex } from '../render/words/equation-latex.ts';
+import { molecularity } from '../engine/mechanism/molecularity.ts';
+import { concentrationTimeSvg } from '../render/plots/concentration-time-svg.ts';
+import { energyProfileSvg } from '../render/plots/energy-profile-svg.ts';
+import { sbmlDocument } from '../render/sbml/sbml.ts';
 import { firstObservationSeries } from '../engine/simulation/concentration-series.ts';
-import type { Observation, Reference } from '../records/mechanism-record.ts';
+import type { Observation, Reference } from '../model/mechanism-record.ts';
 
 export interface StepView {
   index: number;

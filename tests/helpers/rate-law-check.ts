@@ -3,7 +3,7 @@
  * law with a formula written independently in the test, and order limits as plain strings.
  */
 import { expect } from 'vitest';
-import type { RationalFunction } from '../../src/engine/algebra/index.ts';
+import type { RationalFunction } from '../../src/engine/exact/index.ts';
 import type { Derivation } from '../../src/engine/derive.ts';
 import type { DerivedRateLaw } from '../../src/engine/rate-law/derive-rate-laws.ts';
 

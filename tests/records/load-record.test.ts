@@ -3,7 +3,7 @@ import { mkdir, mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { diagnostic } from '../../src/engine/diagnostic.ts';
+import { diagnostic } from '../../src/model/diagnostic.ts';
 import * as records from '../../src/records/index.ts';
 import {
   findRecordFiles,

@@ -10,7 +10,7 @@ const root = fileURLToPath(new URL('../../', import.meta.url));
 const run = promisify(execFile);
 
 describe('generated record types', () => {
-  it('src/records/mechanism-record.ts is up to date with the schema (run `npm run types`)', async () => {
+  it('src/model/mechanism-record.ts is up to date with the schema (run `npm run types`)', async () => {
     const { stdout } = await run(
       process.execPath,
       ['scripts/generate-record-types.mjs', '--stdout'],
@@ -18,12 +18,12 @@ describe('generated record types', () => {
         cwd: root,
       },
     );
-    const committed = await readFile(`${root}src/records/mechanism-record.ts`, 'utf8');
+    const committed = await readFile(`${root}src/model/mechanism-record.ts`, 'utf8');
     expect(committed).toBe(stdout);
   });
 
   it('export the names the rest of the code uses', async () => {
-    const source = await readFile(`${root}src/records/mechanism-record.ts`, 'utf8');
+    const source = await readFile(`${root}src/model/mechanism-record.ts`, 'utf8');
     const names = [
       'MechanismRecord',
       'SpeciesEntry',

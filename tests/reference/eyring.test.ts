@@ -5,7 +5,7 @@
  * stated in the test rather than imported, so the engine's constants are checked too.
  */
 import { describe, expect, it } from 'vitest';
-import { buildMechanism } from '../../src/engine/mechanism.ts';
+import { buildMechanism } from '../../src/engine/mechanism/mechanism.ts';
 import { eyringRateConstant, eyringStepConstants, thermalFrequency } from '../../src/engine/energy/eyring.ts';
 import { loadRecordSource } from '../../src/records/index.ts';
 

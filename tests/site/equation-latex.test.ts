@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { renderMath } from '../../src/site/math.ts';
-import { equationLatex } from '../../src/site/equation-latex.ts';
+import { equationLatex } from '../../src/render/words/equation-latex.ts';
 
 describe('equationLatex', () => {
   const cases: [equation: string, latex: string][] = [

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { ObservationJson } from '../../src/cli/report/record-report.ts';
-import { constantNameLatex, limitsText, methodName, numberText, observationRows, percentText, predictionText, quantityText, roleRank, verdictText } from '../../src/site/mechanism-format.ts';
+import type { ObservationJson } from '../../src/render/report/record-report.ts';
+import { constantNameLatex, limitsText, methodName, numberText, observationRows, percentText, predictionText, quantityText, roleRank, verdictText } from '../../src/render/words/mechanism-words.ts';
 
 describe('mechanism page formats', () => {
   it.each([

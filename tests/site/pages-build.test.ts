@@ -6,7 +6,7 @@ import { existsSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
-import { loadCatalogue, type Catalogue } from '../../src/site/catalogue.ts';
+import { loadCatalogue, type Catalogue } from '../../src/catalogue/catalogue.ts';
 
 let out = '';
 let catalogue: Catalogue;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { anchorId, formatLimits, formatOrder, groupDiagnostics, recentRecords, roleSummary, ruleIndex, severityCount, statusMark } from '../../src/components/atlas-summaries.ts';
+import { anchorId, formatLimits, formatOrder, groupDiagnostics, recentRecords, roleSummary, ruleIndex, severityCount, statusMark } from '../../src/site/summaries.ts';
 import type { RecordView } from '../../src/site/record-view.ts';
 import { shortLabels } from '../../src/site/system-view.ts';
 

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { parseEquation, type ParsedEquation } from '../../src/engine/equation.ts';
+import { parseEquation, type ParsedEquation } from '../../src/engine/notation/equation.ts';
 
 function equationOf(text: string): ParsedEquation {
   const r = parseEquation(text);

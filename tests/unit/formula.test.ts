@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { ELEMENT_SYMBOLS, atomicNumber, isAtomSymbol, nuclideSymbol, splitNuclide } from '../../src/engine/elements.ts';
-import { formatComposition, parseFormula, type Composition, type Phase } from '../../src/engine/formula.ts';
+import { ELEMENT_SYMBOLS, atomicNumber, isAtomSymbol, nuclideSymbol, splitNuclide } from '../../src/engine/notation/elements.ts';
+import { formatComposition, parseFormula, type Composition, type Phase } from '../../src/engine/notation/formula.ts';
 
 function compositionOf(text: string): Composition {
   const r = parseFormula(text);

@@ -7,8 +7,8 @@ import {
   parseQuantity,
   toCanonical,
   type Quantity,
-} from '../../src/engine/quantity.ts';
-import { parseUnit, sameDimension } from '../../src/engine/units.ts';
+} from '../../src/engine/units/quantity.ts';
+import { parseUnit, sameDimension } from '../../src/engine/units/units.ts';
 
 // CODATA 2018 exact defining constant, stated rather than imported (independent of the engine).
 const N_A = 6.02214076e23;

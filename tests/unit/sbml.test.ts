@@ -4,8 +4,8 @@
  * only to declared ids, and whose species carry the attributes L3 requires.
  */
 import { describe, expect, it } from 'vitest';
-import { sbmlDocument } from '../../src/engine/export/sbml.ts';
-import { sbmlIds } from '../../src/engine/export/sbml-ids.ts';
+import { sbmlDocument } from '../../src/render/sbml/sbml.ts';
+import { sbmlIds } from '../../src/render/sbml/sbml-ids.ts';
 import { deriveYaml } from '../helpers/derive-yaml.ts';
 import { loadRecordSource } from '../../src/records/index.ts';
 

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import * as constants from '../../src/engine/constants.ts';
-import { Rational } from '../../src/engine/rational.ts';
+import * as constants from '../../src/engine/units/physical-constants.ts';
+import { Rational } from '../../src/engine/exact/rational.ts';
 import {
   BASE_DIMENSIONS,
   CONCENTRATION,
@@ -17,7 +17,7 @@ import {
   rateConstantDimension,
   sameDimension,
   type Dimension,
-} from '../../src/engine/units.ts';
+} from '../../src/engine/units/units.ts';
 
 // CODATA 2018 exact defining constants, stated here rather than imported so the tests do not
 // check the engine against itself.

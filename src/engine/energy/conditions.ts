@@ -3,11 +3,11 @@
  * and the standard concentration. Read in one place so that Eyring constants, the profile and the
  * energetic span all use the same values.
  */
-import type { MechanismRecord } from '../../records/mechanism-record.ts';
-import { GAS_CONSTANT } from '../constants.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import { parseQuantity, toCanonical } from '../quantity.ts';
-import { CONCENTRATION, PRESSURE, TEMPERATURE, sameDimension } from '../units.ts';
+import type { MechanismRecord } from '../../model/mechanism-record.ts';
+import { GAS_CONSTANT } from '../units/physical-constants.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { parseQuantity, toCanonical } from '../units/quantity.ts';
+import { CONCENTRATION, PRESSURE, TEMPERATURE, sameDimension } from '../units/units.ts';
 
 /** Gibbs energy, enthalpy or electronic energy. */
 export type EnergyBasis = 'G' | 'H' | 'E';

@@ -9,7 +9,7 @@
  * The largest term names the TOF-determining transition state (TDTS) and intermediate (TDI);
  * δE = T − I if the TDTS comes after the TDI, T − I + ΔG_r if before, and TOF ≈ (k_B T/h) e^{−δE/RT}.
  */
-import { GAS_CONSTANT } from '../constants.ts';
+import { GAS_CONSTANT } from '../units/physical-constants.ts';
 import { thermalFrequency } from './eyring.ts';
 
 /** One turnover's minima and transition states, in route order. */

@@ -3,10 +3,10 @@
  * span where every step of the route records its energies, and the check that the declared
  * rate-determining step is the one the span points at. Shaped for the JSON report's `energy`.
  */
-import type { MechanismRecord } from '../../records/mechanism-record.ts';
+import type { MechanismRecord } from '../../model/mechanism-record.ts';
 import type { Derivation } from '../derive.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import type { Mechanism } from '../mechanism.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
 import { energyConditions } from './conditions.ts';
 import { energeticSpan, type SpanResult } from './energetic-span.ts';
 import { buildEnergyProfile, type EnergyProfile } from './profile.ts';

@@ -5,11 +5,11 @@
  * thermodynamic constant of a step of molecularity n into one in M^(1−n) s^-1, because ΔG‡ refers
  * to the standard state c° of each of the n reacting particles.
  */
-import type { MechanismRecord } from '../../records/mechanism-record.ts';
-import { BOLTZMANN, GAS_CONSTANT, PLANCK } from '../constants.ts';
-import type { Diagnostic } from '../diagnostic.ts';
-import type { Mechanism } from '../mechanism.ts';
-import { molecularity } from '../molecularity.ts';
+import type { MechanismRecord } from '../../model/mechanism-record.ts';
+import { BOLTZMANN, GAS_CONSTANT, PLANCK } from '../units/physical-constants.ts';
+import type { Diagnostic } from '../../model/diagnostic.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
+import { molecularity } from '../mechanism/molecularity.ts';
 import { energyConditions, type EnergyConditions } from './conditions.ts';
 import { readStepEnergies } from './step-energies.ts';
 

@@ -3,9 +3,9 @@
  * every species present at each state. Energies are added up from the steps' own barriers and
  * changes, so a missing value leaves the rest of the profile schematic rather than wrong.
  */
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import type { Mechanism } from '../mechanism.ts';
-import type { Rational } from '../rational.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
+import type { Rational } from '../exact/rational.ts';
 import type { EnergyBasis } from './conditions.ts';
 import { routeSequence, speciesRecord, walkSpecies } from './route-species.ts';
 import type { StepEnergyValues } from './step-energies.ts';

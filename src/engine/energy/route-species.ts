@@ -4,8 +4,8 @@
  * catalysts — and applies each step's change in turn, so excess reactants, the catalyst carried
  * through, intermediates and finally the products all appear where they are.
  */
-import type { Mechanism, Step } from '../mechanism.ts';
-import { Rational } from '../rational.ts';
+import type { Mechanism, Step } from '../mechanism/mechanism.ts';
+import { Rational } from '../exact/rational.ts';
 
 /** The steps of one turnover in order: each step σ times in a row, steps with σ = 0 left out. */
 export function routeSequence(mechanism: Mechanism, sigma: readonly number[]): Step[] {

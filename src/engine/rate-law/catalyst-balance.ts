@@ -4,10 +4,10 @@
  * [C]_T = [C](1 + K_1[S] + …) and the rate gains the saturation denominator. Forms made only
  * after the rate-determining step are negligible and left out.
  */
-import { Monomial, Polynomial, RationalFunction } from '../algebra/index.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import type { Step } from '../mechanism.ts';
-import { Rational } from '../rational.ts';
+import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Step } from '../mechanism/mechanism.ts';
+import { Rational } from '../exact/rational.ts';
 import type { Conservation, RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
 import type { CatalystBalance, NonlinearSystem, TraceLine } from './rate-law.ts';

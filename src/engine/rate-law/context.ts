@@ -4,11 +4,11 @@
  * third bodies, solvents), with the conservation relations among the internal ones: the left null
  * space of their stoichiometric matrix (e.g. [E]_T = [E] + [ES] + [EI]).
  */
-import type { Role } from '../../records/mechanism-record.ts';
-import { nullSpace, primitiveIntegerVector, rank } from '../linear-algebra.ts';
-import type { Mechanism } from '../mechanism.ts';
-import { extremeRays } from '../positive-kernel.ts';
-import { Rational } from '../rational.ts';
+import type { Role } from '../../model/mechanism-record.ts';
+import { nullSpace, primitiveIntegerVector, rank } from '../exact/linear-algebra.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
+import { extremeRays } from '../exact/positive-kernel.ts';
+import { Rational } from '../exact/rational.ts';
 import { totalConcentration } from './symbols.ts';
 
 export interface Conservation {

@@ -2,16 +2,16 @@
  * The rate-law stage of a derivation (DESIGN.md items 4–6): choose the methods, derive each law,
  * read off the orders, judge the observations, and confirm inhibitors by their negative order.
  */
-import type { MechanismRecord, Role } from '../../records/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import type { Mechanism } from '../mechanism.ts';
-import type { ObservationCheck } from '../observations.ts';
-import type { StepConstants } from '../step-units.ts';
+import type { MechanismRecord, Role } from '../../model/mechanism-record.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
+import type { ObservationCheck } from '../observations/judge-order.ts';
+import type { StepConstants } from '../mechanism/step-constants.ts';
 import { rateLawContext, type RateLawContext } from './context.ts';
 import { formatterFor } from './formatter.ts';
-import { checkObservations } from './check-observations.ts';
+import { checkObservations } from '../observations/check-observations.ts';
 import { orderLimitsOf, orderSymbols, withAbsent } from './orders.ts';
-import type { RationalFunction } from '../algebra/index.ts';
+import type { RationalFunction } from '../exact/index.ts';
 import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
 import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';

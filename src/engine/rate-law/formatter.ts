@@ -1,6 +1,6 @@
 /** Writes expressions of one mechanism's rate laws consistently, in text and LaTeX. */
-import { formatLatex, formatText, type Expression, type SymbolStyle } from '../algebra/index.ts';
-import type { Mechanism } from '../mechanism.ts';
+import { formatLatex, formatText, type Expression, type SymbolStyle } from '../exact/index.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
 import type { TraceLine } from './rate-law.ts';
 import { rateLawStyle } from './symbols.ts';
 

@@ -3,8 +3,8 @@
  * system exactly over the rationals gives each unknown as a monomial with rational exponents,
  * so a dissociation (A2 ⇌ 2 A) yields [A] = K^(1/2) [A2]^(1/2).
  */
-import { Monomial } from '../algebra/index.ts';
-import { Rational } from '../rational.ts';
+import { Monomial } from '../exact/index.ts';
+import { Rational } from '../exact/rational.ts';
 
 export interface LogLinearRow {
   /** exponent of each unknown on the left */

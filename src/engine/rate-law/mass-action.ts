@@ -3,10 +3,10 @@
  * reversible step, reverse k_-i Π[product]^ν. A species on both sides (a third body) counts in
  * both rates and cancels in the net change.
  */
-import { Monomial, Polynomial } from '../algebra/index.ts';
-import type { Term } from '../equation.ts';
-import type { Step } from '../mechanism.ts';
-import { Rational } from '../rational.ts';
+import { Monomial, Polynomial } from '../exact/index.ts';
+import type { Term } from '../notation/equation.ts';
+import type { Step } from '../mechanism/mechanism.ts';
+import { Rational } from '../exact/rational.ts';
 import { concentration, forwardConstant, reverseConstant } from './symbols.ts';
 
 /** k Π[X]^ν over one side of a step. */

@@ -4,12 +4,12 @@
  * the observation does not list is taken as 0 (initial rates); a catalyst's listed
  * concentration is its total.
  */
-import type { Observation } from '../../records/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import { CONCENTRATION, sameDimension } from '../dimension.ts';
-import type { Mechanism } from '../mechanism.ts';
-import { parseQuantity, toCanonical } from '../quantity.ts';
-import type { StepConstants } from '../step-units.ts';
+import type { Observation } from '../../model/mechanism-record.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { CONCENTRATION, sameDimension } from '../units/dimension.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
+import { parseQuantity, toCanonical } from '../units/quantity.ts';
+import type { StepConstants } from '../mechanism/step-constants.ts';
 import type { RateLawContext } from './context.ts';
 import { concentration, equilibriumConstant, forwardConstant, reverseConstant } from './symbols.ts';
 

@@ -3,7 +3,7 @@
  * degrees, and the apparent order at given conditions from the exact logarithmic derivative.
  * A conserved catalyst's order is in its total concentration.
  */
-import { orderLimits, Polynomial, RationalFunction } from '../algebra/index.ts';
+import { orderLimits, Polynomial, RationalFunction } from '../exact/index.ts';
 import type { RateLawContext } from './context.ts';
 import type { OrderRange } from './rate-law.ts';
 import { concentration } from './symbols.ts';

@@ -3,9 +3,9 @@
  * ν_P is its coefficient in the overall equation. A product made in one step only is preferred,
  * so the expression stays short; failing a product, a reactant's consumption is used.
  */
-import { Polynomial } from '../algebra/index.ts';
-import { netOverRoute } from '../overall-equation.ts';
-import { Rational } from '../rational.ts';
+import { Polynomial } from '../exact/index.ts';
+import { netOverRoute } from '../route/overall-equation.ts';
+import { Rational } from '../exact/rational.ts';
 import type { RateLawContext } from './context.ts';
 import { netRate } from './mass-action.ts';
 

@@ -5,10 +5,10 @@
  * Steps after the rds do not enter; species formed only after it are negligible. A conserved
  * catalyst's total is the sum of its pre-equilibrium forms, which gives the saturation denominator.
  */
-import { Monomial, Polynomial, RationalFunction } from '../algebra/index.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import type { Step } from '../mechanism.ts';
-import { Rational } from '../rational.ts';
+import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Step } from '../mechanism/mechanism.ts';
+import { Rational } from '../exact/rational.ts';
 import type { RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
 import { solveLogLinear, type LogLinearRow } from './log-linear-solve.ts';

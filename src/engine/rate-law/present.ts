@@ -3,8 +3,8 @@
  * shown beside the full form. A solvent's concentration is constant: it stays visible in the
  * full law (so every term keeps its units) and is absorbed into k_obs with the constants.
  */
-import { Monomial, Polynomial, RationalFunction } from '../algebra/index.ts';
-import { Rational } from '../rational.ts';
+import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
+import { Rational } from '../exact/rational.ts';
 import type { Formatter } from './formatter.ts';
 import type { TraceLine } from './rate-law.ts';
 import { concentration, symbolMeaning } from './symbols.ts';

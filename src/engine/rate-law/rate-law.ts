@@ -1,6 +1,6 @@
 /** What a rate-law derivation produces, whichever method made it. */
-import type { Polynomial, RationalFunction } from '../algebra/index.ts';
-import type { Rational } from '../rational.ts';
+import type { Polynomial, RationalFunction } from '../exact/index.ts';
+import type { Rational } from '../exact/rational.ts';
 
 export type RateLawMethod = 'rds' | 'steady_state';
 

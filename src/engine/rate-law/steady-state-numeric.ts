@@ -4,7 +4,7 @@
  * (concentrations stay positive), with an analytic Jacobian from the polynomial derivatives,
  * damping, and several starting scales because radical concentrations span many decades.
  */
-import type { Polynomial } from '../algebra/index.ts';
+import type { Polynomial } from '../exact/index.ts';
 import { solveDense } from '../numeric/solve-dense.ts';
 import type { NonlinearSystem } from './rate-law.ts';
 

@@ -5,9 +5,9 @@
  * is solved exactly by Cramer's rule with fraction-free Bareiss determinants (for catalytic cycles
  * this is the King–Altman result). Otherwise the equations are kept for a numeric solution.
  */
-import { Monomial, Polynomial, RationalFunction, solveLinear } from '../algebra/index.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
-import { Rational } from '../rational.ts';
+import { Monomial, Polynomial, RationalFunction, solveLinear } from '../exact/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { Rational } from '../exact/rational.ts';
 import type { RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
 import { netRate } from './mass-action.ts';

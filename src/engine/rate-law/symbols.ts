@@ -3,8 +3,8 @@
  * `k_1`, `k_-1`, `K_1` for the constants of the step labelled 1; `[S]` for a concentration;
  * `[E]_T` for the total of a conserved catalyst. LaTeX follows the trade's typography.
  */
-import type { SymbolStyle } from '../algebra/index.ts';
-import { speciesLatex } from './species-latex.ts';
+import type { SymbolStyle } from '../exact/index.ts';
+import { speciesLatex } from '../notation/species-latex.ts';
 
 /** Forward rate constant of a step. */
 export const forwardConstant = (label: string) => `k_${label}`;

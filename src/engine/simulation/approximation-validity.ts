@@ -5,9 +5,9 @@
  * evaluated at the simulated state at 1 % conversion. Errors above the threshold become
  * `approximation/invalid` warnings that say which assumption fails.
  */
-import type { MechanismRecord } from '../../records/mechanism-record.ts';
+import type { MechanismRecord } from '../../model/mechanism-record.ts';
 import type { Derivation } from '../derive.ts';
-import { diagnostic, type Diagnostic } from '../diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
 import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
 import { solveSteadyStateNumeric } from '../rate-law/steady-state-numeric.ts';
 import { concentration } from '../rate-law/symbols.ts';

@@ -7,7 +7,7 @@
  * reaction needs 99 of them). Output times are log-spaced, so fast transients show on a log axis,
  * merged with evenly spaced ones, so a linear axis is smooth too, and start at t = 0.
  */
-import type { MechanismRecord, Observation, Role } from '../../records/mechanism-record.ts';
+import type { MechanismRecord, Observation, Role } from '../../model/mechanism-record.ts';
 import { simulationConstants, type Derivation } from '../derive.ts';
 import { integrateStiff } from '../numeric/stiff-integrator.ts';
 import { simulatedInitialRate } from './initial-rate.ts';

@@ -4,7 +4,7 @@
  * (a third body) counts in the rate and cancels in the net change. Species held constant
  * (buffered, solvent) have no derivative. The Jacobian is analytic.
  */
-import type { Mechanism } from '../mechanism.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
 import type { OdeSystem } from '../numeric/stiff-integrator.ts';
 
 export interface RateConstants {

@@ -3,10 +3,10 @@
  * starting concentrations, which species are held constant, and which product measures the
  * overall rate. Returns a reason instead when something is missing.
  */
-import type { Observation } from '../../records/mechanism-record.ts';
+import type { Observation } from '../../model/mechanism-record.ts';
 import type { Derivation } from '../derive.ts';
-import { CONCENTRATION, sameDimension } from '../dimension.ts';
-import { parseQuantity, toCanonical } from '../quantity.ts';
+import { CONCENTRATION, sameDimension } from '../units/dimension.ts';
+import { parseQuantity, toCanonical } from '../units/quantity.ts';
 import { equilibriumConstant, forwardConstant, reverseConstant } from '../rate-law/symbols.ts';
 import { massActionModel, type MassActionModel } from './mass-action-system.ts';
 import type { RateProbe } from './initial-rate.ts';

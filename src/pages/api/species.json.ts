@@ -1,8 +1,8 @@
 // /api/species.json: every species across the catalogue, its identity and its role in each mechanism.
 import { getCollection } from 'astro:content';
-import { toolVersion } from '../../cli/version.ts';
+import { toolVersion } from '../../catalogue/tool-version.ts';
 import { jsonResponse } from '../../site/api-report.ts';
-import type { SpeciesPage } from '../../site/catalogue.ts';
+import type { SpeciesPage } from '../../catalogue/catalogue.ts';
 
 /** The species collection. */
 export async function GET(): Promise<Response> {

@@ -7,7 +7,7 @@ import {
   RationalFunction,
   solveLinear,
   type PolynomialMatrix,
-} from '../../../src/engine/algebra/index.ts';
+} from '../../../src/engine/exact/index.ts';
 import { arbCoefficient, arbMonomial, poly, rf } from './helpers.ts';
 
 const matrix = (rows: string[][]): Polynomial[][] => rows.map((r) => r.map(poly));

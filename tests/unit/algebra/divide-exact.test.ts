@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { divideExact, formatText, Polynomial } from '../../../src/engine/algebra/index.ts';
+import { divideExact, formatText, Polynomial } from '../../../src/engine/exact/index.ts';
 import { poly } from './helpers.ts';
 
 describe('divideExact', () => {

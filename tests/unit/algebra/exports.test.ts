@@ -1,5 +1,5 @@
 import { expect, it } from 'vitest';
-import * as algebra from '../../../src/engine/algebra/index.ts';
+import * as algebra from '../../../src/engine/exact/index.ts';
 
 it('pins the public API of the algebra module', () => {
   expect(Object.keys(algebra).sort()).toEqual([

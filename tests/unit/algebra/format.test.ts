@@ -10,7 +10,7 @@ import {
   RationalFunction,
   type Expression,
   type SymbolStyle,
-} from '../../../src/engine/algebra/index.ts';
+} from '../../../src/engine/exact/index.ts';
 import { arbGeneralPolynomial, arbNonZeroPolynomial, poly, q, rf } from './helpers.ts';
 
 const TEXT: Record<string, string> = { S: '[S]', ET: '[E]_T', O2: '[O2]', NO: '[NO]', km1: 'k_-1', I: '[I-]' };

@@ -4,8 +4,8 @@
  * different shapes. (mathjs is kept for the cross-check file: importing it costs most of a second.)
  */
 import fc from 'fast-check';
-import { Monomial, Polynomial, RationalFunction } from '../../../src/engine/algebra/index.ts';
-import { Rational } from '../../../src/engine/rational.ts';
+import { Monomial, Polynomial, RationalFunction } from '../../../src/engine/exact/index.ts';
+import { Rational } from '../../../src/engine/exact/rational.ts';
 
 type Node = { num: Rational } | { sym: string } | { op: string; args: Node[] };
 

@@ -5,8 +5,8 @@
 import fc from 'fast-check';
 import { all, create, type Fraction } from 'mathjs';
 import { describe, expect, it } from 'vitest';
-import { determinant, Polynomial, RationalFunction } from '../../../src/engine/algebra/index.ts';
-import { Rational } from '../../../src/engine/rational.ts';
+import { determinant, Polynomial, RationalFunction } from '../../../src/engine/exact/index.ts';
+import { Rational } from '../../../src/engine/exact/rational.ts';
 import { arbCoefficient, arbNonZeroPolynomial, arbPoint, arbPolynomial, close, SYMBOLS } from './helpers.ts';
 
 const math = create(all!);

@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { Monomial } from '../../../src/engine/algebra/index.ts';
-import { MonomialHeap } from '../../../src/engine/algebra/monomial-heap.ts';
-import { Rational } from '../../../src/engine/rational.ts';
+import { Monomial } from '../../../src/engine/exact/index.ts';
+import { MonomialHeap } from '../../../src/engine/exact/monomial-heap.ts';
+import { Rational } from '../../../src/engine/exact/rational.ts';
 import { arbGeneralMonomial, q } from './helpers.ts';
 
 const m = (...factors: [string, Rational | number][]) => Monomial.fromFactors(factors);

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { orderLimits, RationalFunction } from '../../../src/engine/algebra/index.ts';
+import { orderLimits, RationalFunction } from '../../../src/engine/exact/index.ts';
 import { arbNonZeroPolynomial, rf } from './helpers.ts';
 
 const limits = (text: string, symbol: string) => {

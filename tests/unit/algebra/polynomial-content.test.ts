@@ -6,7 +6,7 @@ import {
   monomialContent,
   Polynomial,
   primitivePart,
-} from '../../../src/engine/algebra/index.ts';
+} from '../../../src/engine/exact/index.ts';
 import { arbGeneralPolynomial, poly } from './helpers.ts';
 
 describe('contents and primitive part', () => {

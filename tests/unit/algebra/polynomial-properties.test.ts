@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { divideExact, Polynomial } from '../../../src/engine/algebra/index.ts';
+import { divideExact, Polynomial } from '../../../src/engine/exact/index.ts';
 import {
   arbExactPoint,
   arbGeneralPolynomial,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { formatText, Monomial, Polynomial } from '../../../src/engine/algebra/index.ts';
-import { Rational } from '../../../src/engine/rational.ts';
+import { formatText, Monomial, Polynomial } from '../../../src/engine/exact/index.ts';
+import { Rational } from '../../../src/engine/exact/rational.ts';
 import { poly, q } from './helpers.ts';
 
 const same = (a: Polynomial, b: Polynomial) => expect(formatText(a)).toBe(formatText(b));

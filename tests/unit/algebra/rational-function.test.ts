@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatText, Polynomial, RationalFunction } from '../../../src/engine/algebra/index.ts';
+import { formatText, Polynomial, RationalFunction } from '../../../src/engine/exact/index.ts';
 import { arbGeneralPolynomial, arbNonZeroPolynomial, arbExactPoint, arbPolynomial, poly, q, rf } from './helpers.ts';
 
 const parts = (f: RationalFunction) => [formatText(f.numerator), formatText(f.denominator)];

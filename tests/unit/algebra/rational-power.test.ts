@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { integerRoot, rationalPower } from '../../../src/engine/algebra/index.ts';
+import { integerRoot, rationalPower } from '../../../src/engine/exact/index.ts';
 import { q } from './helpers.ts';
 
 describe('rationalPower', () => {

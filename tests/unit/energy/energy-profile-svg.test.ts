@@ -6,7 +6,7 @@ import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { deriveMechanism } from '../../../src/engine/derive.ts';
 import { energyAnalysis } from '../../../src/engine/energy/energy-analysis.ts';
-import { energyProfileSvg } from '../../../src/engine/plots/energy-profile-svg.ts';
+import { energyProfileSvg } from '../../../src/render/plots/energy-profile-svg.ts';
 import { loadRecordSource } from '../../../src/records/index.ts';
 
 function energyOf(yaml: string, id = 'svg-case') {

@@ -6,9 +6,9 @@
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { deriveMechanism } from '../../../src/engine/derive.ts';
-import { concentrationTimeSvg } from '../../../src/engine/plots/concentration-time-svg.ts';
+import { concentrationTimeSvg } from '../../../src/render/plots/concentration-time-svg.ts';
 import { firstObservationSeries, type ConcentrationSeries } from '../../../src/engine/simulation/concentration-series.ts';
-import type { Role } from '../../../src/records/mechanism-record.ts';
+import type { Role } from '../../../src/model/mechanism-record.ts';
 import { loadRecordSource } from '../../../src/records/index.ts';
 
 const texts = (svg: string) => [...svg.matchAll(/<text[^>]*>(.*?)<\/text>/g)].map((m) => m[1]!.replace(/<title>.*?<\/title>/g, '').replace(/<[^>]+>/g, ''));

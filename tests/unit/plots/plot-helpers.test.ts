@@ -3,10 +3,10 @@
  * unit and magnification, curve styles told apart without colour, and end labels moved apart.
  */
 import { describe, expect, it } from 'vitest';
-import { spreadApart } from '../../../src/engine/plots/concentration-time-labels.ts';
-import { concentrationUnit, magnificationExponent } from '../../../src/engine/plots/concentration-scale.ts';
-import { curveStyle } from '../../../src/engine/plots/curve-style.ts';
-import { linearTicks, logTicks, powerOfTen, timeUnit } from '../../../src/engine/plots/time-axis.ts';
+import { spreadApart } from '../../../src/render/plots/concentration-time-labels.ts';
+import { concentrationUnit, magnificationExponent } from '../../../src/render/plots/concentration-scale.ts';
+import { curveStyle } from '../../../src/render/plots/curve-style.ts';
+import { linearTicks, logTicks, powerOfTen, timeUnit } from '../../../src/render/plots/time-axis.ts';
 
 describe('log time ticks', () => {
   it('labels every decade inside the range, with minor ticks at 2…9', () => {

@@ -1,0 +1,139 @@
+import type { Rational } from './rational.ts';
+import { compareSymbols, Monomial, type Factor } from './monomial.ts';
+import { Polynomial, type Term } from './polynomial.ts';
+import { RationalFunction } from './rational-function.ts';
+
+/** How the caller wants each symbol written (e.g. `K1` → `K_{1}`, `S` → `[\mathrm{S}]`). */
+export interface SymbolStyle {
+  text(symbol: string): string;
+  latex(symbol: string): string;
+  /** Order of symbols within a term and between terms of equal degree (default: code-unit order). */
+  compare?(a: string, b: string): number;
+  /**
+   * Where given, terms are written in ascending order of this weight (e.g. their degree in the
+   * concentrations, so a saturation denominator reads 1 + K[S]); otherwise by descending total degree.
+   */
+  termWeight?(m: Monomial): number;
+}
+
+/** Prints every symbol as it is, in text and in LaTeX alike. */
+export const defaultSymbolStyle: SymbolStyle = { text: (s) => s, latex: (s) => s };
+
+/** Anything this module can print. */
+export type Expression = Monomial | Polynomial | RationalFunction;
+
+/**
+ * The two outputs differ only in these few choices. Shared rules: terms by descending total degree,
+ * then by their symbols in the style's order (a higher power first); factors within a term in the
+ * style's order, so output is deterministic for a given style. Negative exponents and coefficient
+ * denominators go below a fraction bar; a fractional exponent is written with a slash
+ * (`x^(1/2)`, `x^{1/2}`).
+ */
+interface Notation {
+  order(a: string, b: string): number;
+  weight?: ((m: Monomial) => number) | undefined;
+  symbol(s: string): string;
+  power(base: string, exponent: Rational): string;
+  product(factors: string[]): string;
+  quotient(num: string, den: string, denFactors: number): string;
+  /** Top-level fraction of two polynomials, each with its number of terms. */
+  fraction(num: string, numTerms: number, den: string, denTerms: number): string;
+}
+
+const text = (style: SymbolStyle): Notation => ({
+  order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
+  weight: style.termWeight?.bind(style),
+  symbol: (s) => style.text(s),
+  power: (base, e) => {
+    // `k_-1^2` would misread; `[I-]^2` would not, since the brackets already group it.
+    const b = /[\s^*/+-]/.test(base.replace(/\[[^\]]*\]|\([^)]*\)/g, '')) ? `(${base})` : base;
+    return e.isInteger() ? `${b}^${e}` : `${b}^(${e})`;
+  },
+  product: (factors) => factors.join('*'),
+  quotient: (num, den, denFactors) => `${num}/${denFactors > 1 ? `(${den})` : den}`,
+  fraction: (num, numTerms, den, denTerms) =>
+    `${numTerms > 1 || num.includes('/') ? `(${num})` : num} / ${denTerms > 1 || /[*/]/.test(den) ? `(${den})` : den}`,
+});
+
+const latex = (style: SymbolStyle): Notation => ({
+  order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
+  weight: style.termWeight?.bind(style),
+  symbol: (s) => style.latex(s),
+  // A base that already has a superscript (a charge, say) is braced to avoid a double superscript.
+  power: (base, e) => `${base.includes('^') ? `{${base}}` : base}^{${e}}`,
+  product: (factors) => factors.join(' '),
+  quotient: (num, den) => `\\frac{${num}}{${den}}`,
+  fraction: (num, numTerms, den) =>
+    numTerms === 1 && num.startsWith('-') ? `-\\frac{${num.slice(1)}}{${den}}` : `\\frac{${num}}{${den}}`,
+});
+
+/** Plain text, e.g. `k1*k2*[E]_T*[S] / (k1*[S] + k2 + k_-1)`. */
+export function formatText(value: Expression, style: SymbolStyle = defaultSymbolStyle): string {
+  return formatWith(value, text(style));
+}
+
+/** LaTeX for KaTeX, e.g. `\frac{k_{1} k_{2} [\mathrm{S}]}{k_{-1} + k_{2} + k_{1} [\mathrm{S}]}`. */
+export function formatLatex(value: Expression, style: SymbolStyle = defaultSymbolStyle): string {
+  return formatWith(value, latex(style));
+}
+
+function formatWith(value: Expression, notation: Notation): string {
+  if (value instanceof Monomial) return magnitude(value, 1n, 1n, notation);
+  if (value instanceof Polynomial) return polynomial(value, notation);
+  const whole = value.toPolynomial();
+  if (whole) return polynomial(whole, notation);
+  const num = polynomial(value.numerator, notation);
+  const den = polynomial(value.denominator, notation);
+  return notation.fraction(num, value.numerator.terms.length, den, value.denominator.terms.length);
+}
+
+function polynomial(p: Polynomial, notation: Notation): string {
+  if (p.isZero()) return '0';
+  const ordered = p.terms.map((t) => ({ t, factors: sortFactors(t.monomial, notation) }));
+  const weight = notation.weight;
+  ordered.sort(
+    (a, b) =>
+      (weight ? weight(a.t.monomial) - weight(b.t.monomial) : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) ||
+      compareFactors(a.factors, b.factors, notation),
+  );
+  return ordered
+    .map(({ t }, i) => {
+      const sign = t.coefficient.sign() < 0 ? '-' : '+';
+      const body = term(t, notation);
+      return i === 0 ? (sign === '-' ? `-${body}` : body) : ` ${sign} ${body}`;
+    })
+    .join('');
+}
+
+function term(t: Term, notation: Notation): string {
+  const c = t.coefficient.abs();
+  return magnitude(t.monomial, c.num, c.den, notation);
+}
+
+/** (num/den)·monomial without its sign: positive powers above the bar, negative ones below. */
+function magnitude(m: Monomial, num: bigint, den: bigint, notation: Notation): string {
+  const factor = (s: string, e: Rational): string =>
+    e.isInteger() && e.num === 1n ? notation.symbol(s) : notation.power(notation.symbol(s), e);
+  const factors = sortFactors(m, notation);
+  const above = factors.filter(([, e]) => e.sign() > 0).map(([s, e]) => factor(s, e));
+  const below = factors.filter(([, e]) => e.sign() < 0).map(([s, e]) => factor(s, e.neg()));
+  if (num !== 1n || above.length === 0) above.unshift(num.toString());
+  if (den !== 1n) below.unshift(den.toString());
+  const top = notation.product(above);
+  return below.length === 0 ? top : notation.quotient(top, notation.product(below), below.length);
+}
+
+function sortFactors(m: Monomial, notation: Notation): Factor[] {
+  return [...m.factors].sort(([a], [b]) => notation.order(a, b));
+}
+
+/** Earlier symbol first, then the higher power of it, then the term that has more factors. */
+function compareFactors(a: readonly Factor[], b: readonly Factor[], notation: Notation): number {
+  for (let i = 0; i < Math.min(a.length, b.length); i++) {
+    const [sa, ea] = a[i]!;
+    const [sb, eb] = b[i]!;
+    const c = notation.order(sa, sb) || eb.compare(ea);
+    if (c !== 0) return c;
+  }
+  return b.length - a.length;
+}

@@ -1,0 +1,65 @@
+/**
+ * Atom and charge balance of each elementary step, from the species' compositions.
+ * Steps with a species of unknown composition are skipped with a note.
+ */
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Mechanism, Step } from './mechanism.ts';
+
+/** Checks every step's atoms and charge; skipped steps get an info note in `formulas` records. */
+export function checkBalance(mechanism: Mechanism): Diagnostic[] {
+  return mechanism.steps.flatMap((step) => checkStepBalance(mechanism, step));
+}
+
+function checkStepBalance(mechanism: Mechanism, step: Step): Diagnostic[] {
+  const path = ['steps', step.index, 'equation'];
+  // A species without composition that nets to nothing in the step (a third body) does not hide an imbalance.
+  const unknown = [...step.change.keys()].filter((s) => !mechanism.species.get(s)?.composition);
+  if (unknown.length > 0) {
+    if (mechanism.notation === 'labels') return [];
+    return [
+      diagnostic('balance/atoms', 'info', `atoms and charge not checked: ${unknown.join(', ')} ${unknown.length === 1 ? 'has' : 'have'} no composition`, { path }),
+    ];
+  }
+  const atoms = new Map<string, { left: number; right: number }>();
+  let leftCharge = 0;
+  let rightCharge = 0;
+  for (const [side, terms] of [['left', step.reactants], ['right', step.products]] as const) {
+    for (const term of terms) {
+      const composition = mechanism.species.get(term.species)!.composition;
+      if (!composition) continue;
+      const n = term.coefficient.toNumber();
+      for (const [element, count] of composition.elements) {
+        const entry = atoms.get(element) ?? { left: 0, right: 0 };
+        entry[side] += n * count;
+        atoms.set(element, entry);
+      }
+      if (side === 'left') leftCharge += n * composition.charge;
+      else rightCharge += n * composition.charge;
+    }
+  }
+  const out: Diagnostic[] = [];
+  const unbalanced = [...atoms].filter(([, c]) => c.left !== c.right);
+  if (unbalanced.length > 0) {
+    const detail = unbalanced.map(([el, c]) => `${el} ${c.left} → ${c.right}`).join(', ');
+    out.push(
+      diagnostic('balance/atoms', 'error', `atoms do not balance (left → right): ${detail}`, {
+        path,
+        actual: Object.fromEntries(unbalanced.map(([el, c]) => [el, c.right - c.left])),
+      }),
+    );
+  }
+  if (leftCharge !== rightCharge) {
+    out.push(
+      diagnostic('balance/charge', 'error', `charge does not balance: ${signed(leftCharge)} on the left, ${signed(rightCharge)} on the right`, {
+        path,
+        actual: rightCharge,
+        expected: leftCharge,
+      }),
+    );
+  }
+  return out;
+}
+
+function signed(x: number): string {
+  return x > 0 ? `+${x}` : String(x);
+}

@@ -1,0 +1,135 @@
+/**
+ * The mechanism as the engine sees it: parsed steps with their net changes, and every species
+ * with its declared properties and composition. Built once from a valid record.
+ */
+import type { MechanismRecord, Role, SpeciesEntry } from '../../model/mechanism-record.ts';
+import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { parseEquation, type Term } from '../notation/equation.ts';
+import { parseFormula, type Composition } from '../notation/formula.ts';
+import { Rational } from '../exact/rational.ts';
+
+export interface Step {
+  index: number;
+  /** names the constants: k_label, k_{-label}, K_label */
+  label: string;
+  text: string;
+  reactants: Term[];
+  products: Term[];
+  reversible: boolean;
+  rds: boolean;
+  times?: number;
+  /** net change per species, products minus reactants; zero entries kept out */
+  change: Map<string, Rational>;
+}
+
+export interface Species {
+  symbol: string;
+  entry?: SpeciesEntry;
+  /** undefined when the species has no composition (labels, or `formula: null`) */
+  composition?: Composition;
+  declaredRole?: Role;
+  solvent: boolean;
+  thirdBody: boolean;
+  buffered: boolean;
+}
+
+export interface Mechanism {
+  notation: 'formulas' | 'labels';
+  steps: Step[];
+  /** every species the steps use, in order of first appearance */
+  species: Map<string, Species>;
+}
+
+/** Parses every step and species; returns no mechanism when an equation cannot be read. */
+export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism; diagnostics: Diagnostic[] } {
+  const diagnostics: Diagnostic[] = [];
+  const steps: Step[] = [];
+  record.steps.forEach((entry, index) => {
+    const parsed = parseEquation(entry.equation);
+    if ('error' in parsed) {
+      diagnostics.push(diagnostic('equation/syntax', 'error', parsed.error, { path: ['steps', index, 'equation'], offset: parsed.offset }));
+      return;
+    }
+    const { reactants, products, reversible } = parsed.equation;
+    steps.push({
+      index,
+      label: entry.label ?? String(index + 1),
+      text: entry.equation,
+      reactants,
+      products,
+      reversible,
+      rds: entry.rds === true,
+      ...(entry.times !== undefined && { times: entry.times }),
+      change: netChange(reactants, products),
+    });
+  });
+  if (diagnostics.length > 0) return { diagnostics };
+  diagnostics.push(...duplicateLabels(steps));
+  const notation = record.notation ?? 'formulas';
+  const species = new Map<string, Species>();
+  const firstUse = new Map<string, { step: number; offset: number }>();
+  for (const step of steps) {
+    for (const term of [...step.reactants, ...step.products]) {
+      if (!firstUse.has(term.species)) firstUse.set(term.species, { step: step.index, offset: term.offset });
+    }
+  }
+  for (const symbol of Object.keys(record.species ?? {}).filter((s) => !firstUse.has(s))) {
+    diagnostics.push(diagnostic('species/unused', 'warning', `${symbol} is declared but no step uses it`, { path: ['species', symbol] }));
+  }
+  for (const symbol of firstUse.keys()) {
+    const entry = record.species?.[symbol];
+    const { composition, problem } = compositionOf(symbol, entry, notation);
+    if (problem) {
+      const use = firstUse.get(symbol)!;
+      const where = entry?.formula
+        ? { path: ['species', symbol, 'formula'], offset: problem.offset }
+        : { path: ['steps', use.step, 'equation'], offset: use.offset + problem.offset };
+      diagnostics.push(
+        diagnostic('formula/syntax', 'error', `'${entry?.formula ?? symbol}' is not a formula: ${problem.error}`, {
+          ...where,
+          note: 'give the species a formula, `formula: null` for no composition, or set `notation: labels` for the record',
+        }),
+      );
+    }
+    species.set(symbol, {
+      symbol,
+      ...(entry && { entry }),
+      ...(composition && { composition }),
+      ...(entry?.role && { declaredRole: entry.role }),
+      solvent: entry?.solvent === true || entry?.role === 'solvent',
+      thirdBody: entry?.third_body === true || entry?.role === 'third_body',
+      buffered: entry?.buffered === true,
+    });
+  }
+  return { mechanism: { notation, steps, species }, diagnostics };
+}
+
+function compositionOf(symbol: string, entry: SpeciesEntry | undefined, notation: 'formulas' | 'labels') {
+  // A collision partner stands for any molecule of the bath; it has a composition only when given.
+  const thirdBody = entry?.third_body === true || entry?.role === 'third_body';
+  if (entry?.formula === null || (thirdBody && entry?.formula === undefined)) return {};
+  const text = entry?.formula ?? (notation === 'formulas' ? symbol : undefined);
+  if (text === undefined) return {};
+  const parsed = parseFormula(text);
+  return 'error' in parsed ? { problem: parsed } : { composition: parsed.composition };
+}
+
+/** Products minus reactants; a species on both sides with equal coefficients (a third body) nets to nothing. */
+export function netChange(reactants: readonly Term[], products: readonly Term[]): Map<string, Rational> {
+  const change = new Map<string, Rational>();
+  for (const t of reactants) change.set(t.species, (change.get(t.species) ?? Rational.ZERO).sub(t.coefficient));
+  for (const t of products) change.set(t.species, (change.get(t.species) ?? Rational.ZERO).add(t.coefficient));
+  for (const [sp, v] of change) if (v.isZero()) change.delete(sp);
+  return change;
+}
+
+function duplicateLabels(steps: Step[]): Diagnostic[] {
+  const seen = new Set<string>();
+  return steps.flatMap((s) => {
+    if (!seen.has(s.label)) {
+      seen.add(s.label);
+      return [];
+    }
+    return [diagnostic('record/schema', 'error', `step label '${s.label}' is used twice; labels name the rate constants and must differ`, { path: ['steps', s.index, 'label'] })];
+  });
+}

@@ -1,0 +1,107 @@
+/**
+ * SBML Level 3 Version 2 core (sbml.org) of a derived mechanism, so the full mass-action model
+ * can be simulated elsewhere: one compartment of 1 L, species in mol/L with the first
+ * observation's starting concentrations, buffered species and solvents as boundary species,
+ * every step a reaction whose kinetic law (in extent per time: the compartment size times the
+ * mass-action rate) is written in MathML.
+ */
+import type { Derivation } from '../../engine/derive.ts';
+import { CONCENTRATION, sameDimension } from '../../engine/units/dimension.ts';
+import type { Step } from '../../engine/mechanism/mechanism.ts';
+import { parseQuantity, toCanonical } from '../../engine/units/quantity.ts';
+import type { MechanismRecord } from '../../model/mechanism-record.ts';
+import { sbmlIds } from './sbml-ids.ts';
+
+/** The SBML document as a string; constants given or from energies, by symbol (k_1, k_-1). */
+export function sbmlDocument(id: string, record: MechanismRecord, derivation: Derivation, constants: ReadonlyMap<string, number>): string {
+  const mechanism = derivation.mechanism;
+  if (!mechanism) return '';
+  const ids = sbmlIds([...mechanism.species.keys()]);
+  const start = startingConcentrations(record, [...mechanism.species.keys()]);
+  const species = [...mechanism.species.values()].map((s) => {
+    const boundary = s.buffered || s.solvent;
+    return `      <species id="${ids.get(s.symbol)}" name="${xml(s.entry?.name ?? s.symbol)}" compartment="c" initialConcentration="${num(start.get(s.symbol) ?? 0)}" substanceUnits="mole" hasOnlySubstanceUnits="false" boundaryCondition="${boundary}" constant="${boundary}"/>`;
+  });
+  const parameters = mechanism.steps.flatMap((step) => {
+    const names = [`k_${step.label}`, ...(step.reversible ? [`k_-${step.label}`] : [])];
+    return names.map((name) => {
+      const value = reverseOrForward(name, step, constants);
+      return `      <parameter id="${parameterId(name)}" name="${xml(name)}"${value === undefined ? '' : ` value="${num(value)}"`} constant="true"/>`;
+    });
+  });
+  const reactions = mechanism.steps.map((step) => reaction(step, ids));
+  return [
+    '<?xml version="1.0" encoding="UTF-8"?>',
+    '<sbml xmlns="http://www.sbml.org/sbml/level3/version2/core" level="3" version="2">',
+    `  <model id="${parameterId(`m_${id.replace(/-/g, '_')}`)}" name="${xml(record.title)}" substanceUnits="mole" timeUnits="second" volumeUnits="litre" extentUnits="mole">`,
+    '    <notes><body xmlns="http://www.w3.org/1999/xhtml"><p>Written by mechatlas from a catalogue record. Rate constants in mol/L and s; the kinetic laws are mass action. A derived model, not a measurement.</p></body></notes>',
+    '    <listOfCompartments>',
+    '      <compartment id="c" name="reaction volume" spatialDimensions="3" size="1" units="litre" constant="true"/>',
+    '    </listOfCompartments>',
+    '    <listOfSpecies>',
+    ...species,
+    '    </listOfSpecies>',
+    '    <listOfParameters>',
+    ...parameters,
+    '    </listOfParameters>',
+    '    <listOfReactions>',
+    ...reactions,
+    '    </listOfReactions>',
+    '  </model>',
+    '</sbml>',
+    '',
+  ].join('\n');
+}
+
+function reaction(step: Step, ids: ReadonlyMap<string, string>): string {
+  const refs = (terms: Step['reactants']) => terms.map((t) => `          <speciesReference species="${ids.get(t.species)}" stoichiometry="${t.coefficient.toNumber()}" constant="true"/>`);
+  const side = (name: string, terms: Step['reactants']) =>
+    [`          <ci> ${parameterId(name)} </ci>`, ...terms.flatMap((t) => Array.from({ length: t.coefficient.toNumber() }, () => `          <ci> ${ids.get(t.species)} </ci>`))].join('\n');
+  const forward = `<apply><times/>\n${side(`k_${step.label}`, step.reactants)}\n        </apply>`;
+  const rate = step.reversible ? `<apply><minus/>\n        ${forward}\n        <apply><times/>\n${side(`k_-${step.label}`, step.products)}\n        </apply></apply>` : forward;
+  return [
+    `      <reaction id="r_${parameterId(step.label)}" name="step ${xml(step.label)}: ${xml(step.text)}" reversible="${step.reversible}">`,
+    '        <listOfReactants>',
+    ...refs(step.reactants),
+    '        </listOfReactants>',
+    '        <listOfProducts>',
+    ...refs(step.products),
+    '        </listOfProducts>',
+    '        <kineticLaw><math xmlns="http://www.w3.org/1998/Math/MathML">',
+    `        <apply><times/><ci> c </ci>${rate}</apply>`,
+    '        </math></kineticLaw>',
+    '      </reaction>',
+  ].join('\n');
+}
+
+function reverseOrForward(name: string, step: Step, constants: ReadonlyMap<string, number>): number | undefined {
+  const direct = constants.get(name);
+  if (direct !== undefined || !name.startsWith('k_-')) return direct;
+  const k = constants.get(`k_${step.label}`);
+  const K = constants.get(`K_${step.label}`);
+  return k !== undefined && K !== undefined ? k / K : undefined;
+}
+
+function startingConcentrations(record: MechanismRecord, symbols: string[]): Map<string, number> {
+  const out = new Map<string, number>();
+  const first = (record.observations ?? []).find((o) => o.concentrations);
+  for (const [sp, text] of Object.entries(first?.concentrations ?? {})) {
+    const q = parseQuantity(text);
+    if (symbols.includes(sp) && !('error' in q) && sameDimension(q.quantity.unit.dimension, CONCENTRATION)) out.set(sp, toCanonical(q.quantity));
+  }
+  return out;
+}
+
+/** An SBML SId: `(_|letter)(_|letter|digit)*`. */
+export function parameterId(text: string): string {
+  const id = text.replace(/-/g, 'm').replace(/[^A-Za-z0-9_]/g, '_');
+  return /^[A-Za-z_]/.test(id) ? id : `_${id}`;
+}
+
+function num(x: number): string {
+  return Number.isFinite(x) ? String(x) : '0';
+}
+
+function xml(text: string): string {
+  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&apos;');
+}
