@@ -1,15 +1,21 @@
 /**
- * Content collections fed by our own loader, which calls src/records and the engine (not
- * Astro's YAML parser: we need source positions, our schema and the derivations). A record
- * with errors still gets its page, showing its diagnostics.
+ * Content collections fed by our own loader, which reads the catalogue through src/site (our
+ * records, schema and derivations; not Astro's YAML parser, which keeps no source positions). A
+ * record with errors still gets its page, showing its diagnostics.
  */
 import { defineCollection } from 'astro:content';
-import { loadCatalogue } from './catalogue/catalogue.ts';
+import { loadCatalogue, type Catalogue } from './site/index.ts';
 
-function catalogueLoader<T>(name: string, pick: (c: Awaited<ReturnType<typeof loadCatalogue>>) => { id: string; data: T }[]) {
+interface LoaderContext {
+  store: { clear(): void; set(e: { id: string; data: Record<string, unknown>; digest?: string }): boolean };
+  logger: { info(m: string): void; warn(m: string): void };
+  generateDigest(d: Record<string, unknown> | string): string;
+}
+
+function catalogueLoader<T>(name: string, pick: (c: Catalogue) => { id: string; data: T }[]) {
   return {
     name,
-    async load({ store, logger, generateDigest }: { store: { clear(): void; set(e: { id: string; data: Record<string, unknown>; digest?: string }): boolean }; logger: { info(m: string): void; warn(m: string): void }; generateDigest(d: Record<string, unknown> | string): string }) {
+    async load({ store, logger, generateDigest }: LoaderContext) {
       const catalogue = await loadCatalogue();
       store.clear();
       for (const { id, data } of pick(catalogue)) {

@@ -2,14 +2,18 @@
  * Loads and derives a set of record files: the shared first half of `check`, `derive` and the
  * site build. Every file is checked even when others fail.
  */
-import { deriveMechanism, type Derivation, type DeriveOptions } from '../engine/derive.ts';
-import type { Diagnostic } from '../model/diagnostic.ts';
+import { deriveMechanism, type Derivation, type DeriveOptions } from '../engine/index.ts';
+import type { Diagnostic, MechanismRecord } from '../model/index.ts';
 import { loadRecordFile, placeDiagnostics, type LoadedRecord } from '../records/index.ts';
-import type { RecordInput } from '../render/report/record-report.ts';
 
-export interface CheckedRecord extends RecordInput {
+/** One record file as checked: what was loaded, the record where it is valid, its derivation and every diagnostic placed. */
+export interface CheckedRecord {
+  id: string;
+  file: string;
   loaded: LoadedRecord;
+  record?: MechanismRecord;
   derivation?: Derivation;
+  /** every diagnostic of the record, with file, line and column */
   diagnostics: Diagnostic[];
 }
 

@@ -1,10 +1,7 @@
-/** The tool's version, read once from package.json. */
-import { readFileSync } from 'node:fs';
-
-let cached: string | undefined;
+/** The tool's version, taken from package.json when the code is bundled or compiled (no file is read at run time). */
+import manifest from '../../package.json' with { type: 'json' };
 
 /** The `version` field of mechatlas's package.json. */
 export function toolVersion(): string {
-  cached ??= (JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string }).version;
-  return cached;
+  return manifest.version;
 }

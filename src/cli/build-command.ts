@@ -10,8 +10,8 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { UsageError, type Output } from './output.ts';
-import type { CatalogueReport } from '../render/report/catalogue-report.ts';
-import { summaryLine } from '../render/report/text.ts';
+import type { CatalogueReport } from '../model/index.ts';
+import { summaryLine } from '../render/index.ts';
 
 const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 

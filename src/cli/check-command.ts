@@ -1,14 +1,14 @@
 /** `mechatlas check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]`. */
 import { execFileSync } from 'node:child_process';
 import { relative, resolve } from 'node:path';
-import { findRecordFiles } from '../records/index.ts';
-import { checkRecordFiles } from '../catalogue/check-records.ts';
-import { catalogueReport } from '../render/report/catalogue-report.ts';
-import { markdownReport } from '../render/report/markdown.ts';
-import { sarifReport } from '../render/report/sarif.ts';
-import { textReport } from '../render/report/text.ts';
+import { findRecordFiles } from '../catalogue/index.ts';
+import { checkRecordFiles } from '../catalogue/index.ts';
+import { catalogueReport } from '../render/index.ts';
+import { markdownReport } from '../render/index.ts';
+import { sarifReport } from '../render/index.ts';
+import { textReport } from '../render/index.ts';
 import { UsageError, type Output } from './output.ts';
-import { toolVersion } from '../catalogue/tool-version.ts';
+import { toolVersion } from '../catalogue/index.ts';
 
 const FORMATS = { text: textReport, json: (r: object) => JSON.stringify(r, null, 2) + '\n', markdown: markdownReport, sarif: sarifReport } as const;
 export const DEFAULT_CATALOGUE = 'content/mechanisms';

@@ -1,11 +1,11 @@
 /** `mechatlas derive FILE`: one record's derivation, step by step, for a person. */
 import { access } from 'node:fs/promises';
-import { checkRecordFile } from '../catalogue/check-records.ts';
+import { checkRecordFile } from '../catalogue/index.ts';
 import { UsageError, type Output } from './output.ts';
-import { catalogueReport } from '../render/report/catalogue-report.ts';
-import { derivationText } from '../render/report/derivation-text.ts';
-import { textReport } from '../render/report/text.ts';
-import { toolVersion } from '../catalogue/tool-version.ts';
+import { catalogueReport } from '../render/index.ts';
+import { derivationText } from '../render/index.ts';
+import { textReport } from '../render/index.ts';
+import { toolVersion } from '../catalogue/index.ts';
 
 /** Prints the derivation and the record's diagnostics; exit 1 when it has errors. */
 export async function deriveCommand(file: string, out: Output): Promise<number> {

@@ -2,8 +2,8 @@
 import { existsSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { sbmlDocument } from '../render/sbml/sbml.ts';
-import { checkRecordFile } from '../catalogue/check-records.ts';
+import { sbmlDocument } from '../render/index.ts';
+import { checkRecordFile } from '../catalogue/index.ts';
 import { DEFAULT_CATALOGUE } from './check-command.ts';
 import { UsageError, type Output } from './output.ts';
 
@@ -18,7 +18,7 @@ export async function exportCommand(target: string, outFile: string | undefined,
     out.stderr(`${file}: the record has errors; run mechatlas check ${file}\n`);
     return 1;
   }
-  const sbml = sbmlDocument(checked.id, record, derivation, derivation.constants ?? new Map());
+  const sbml = sbmlDocument(checked.id, record, derivation.mechanism, derivation.constants ?? new Map());
   if (outFile) {
     await writeFile(outFile, sbml);
     out.stdout(`wrote ${outFile}\n`);

@@ -6,7 +6,7 @@ import { deriveCommand } from './derive-command.ts';
 import { exportCommand } from './export-command.ts';
 import { newCommand } from './new-command.ts';
 import { processOutput, UsageError, type Output } from './output.ts';
-import { toolVersion } from '../catalogue/tool-version.ts';
+import { toolVersion } from '../catalogue/index.ts';
 
 const USAGE = `usage: mechatlas <command> [options]
 

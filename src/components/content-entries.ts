@@ -1,28 +1,37 @@
 /**
  * Typed access to the site's content collections (filled by src/content.config.ts from the
- * catalogue): the collections store plain JSON, so the types are restored here once.
+ * catalogue). The collections store plain JSON; the one place their types are restored is here.
  */
 import { getCollection } from 'astro:content';
-import type { SpeciesPage } from '../catalogue/catalogue.ts';
-import type { RecordView } from '../site/record-view.ts';
-import type { SystemView } from '../site/system-view.ts';
+import type { RecordView, SpeciesPage, SystemView } from '../site/index.ts';
 
-/** A species page, with the charge where the catalogue provides one. */
-export type AtlasSpecies = SpeciesPage & { charge?: number };
+/** What each collection holds. */
+interface Collections {
+  mechanisms: RecordView;
+  species: SpeciesPage;
+  systems: SystemView;
+}
+
+/** Every entry of a collection as its id and its typed data, in the collection's order. */
+export async function entries<K extends keyof Collections>(name: K): Promise<{ id: string; data: Collections[K] }[]> {
+  const stored = await getCollection(name);
+  // The loader stored exactly these shapes (content.config.ts); Astro types them as plain records.
+  return stored.map((e) => ({ id: e.id, data: e.data as unknown as Collections[K] }));
+}
 
 /** Every record, sorted by id. */
 export async function atlasRecords(): Promise<RecordView[]> {
-  return (await getCollection('mechanisms')).map((e) => e.data as unknown as RecordView).sort((a, b) => a.id.localeCompare(b.id));
+  return (await entries('mechanisms')).map((e) => e.data).sort((a, b) => a.id.localeCompare(b.id));
 }
 
-/** Every species, in the catalogue's order. */
-export async function atlasSpecies(): Promise<AtlasSpecies[]> {
-  return (await getCollection('species')).map((e) => e.data as unknown as AtlasSpecies).sort((a, b) => a.symbol.localeCompare(b.symbol));
+/** Every species, sorted by symbol. */
+export async function atlasSpecies(): Promise<SpeciesPage[]> {
+  return (await entries('species')).map((e) => e.data).sort((a, b) => a.symbol.localeCompare(b.symbol));
 }
 
 /** Every reaction system, sorted by name. */
 export async function atlasSystems(): Promise<SystemView[]> {
-  return (await getCollection('systems')).map((e) => e.data as unknown as SystemView).sort((a, b) => a.system.localeCompare(b.system));
+  return (await entries('systems')).map((e) => e.data).sort((a, b) => a.system.localeCompare(b.system));
 }
 
 /** Species symbol → page slug, for links. */

@@ -1,26 +1,33 @@
 /**
- * The derivation of one record: parse, balance, route, overall equation and roles.
- * Pure: a valid record in, a value with diagnostics out. Later stages (rate laws, orders,
- * observations, energies) add to the same value.
+ * The derivation of one record, stage by stage: the mechanism and its checks, the constants, the
+ * route, the rate laws, the observations, the energies and the simulations. This is the only file
+ * that imports every stage; each stage takes the narrow values it needs (the mechanism, the
+ * `Route`, the constants), never the derivation being built. Pure: a valid record in, a value
+ * with diagnostics out.
  */
-import type { MechanismRecord, Role } from '../model/mechanism-record.ts';
-import { checkBalance } from './mechanism/balance.ts';
+import { diagnostic, type Diagnostic, type MechanismRecord, type Observation, type Role, type Status } from '../model/index.ts';
+import { energyAnalysis, energyConditions, eyringStepConstants, type EnergyResult } from './energy/index.ts';
+import { checkBalance, type StepBalance } from './mechanism/balance.ts';
 import { checkDetailedBalance } from './mechanism/detailed-balance.ts';
-import { diagnostic, type Diagnostic } from '../model/diagnostic.ts';
 import { buildMechanism, type Mechanism } from './mechanism/mechanism.ts';
 import { checkMolecularity } from './mechanism/molecularity.ts';
-import { overallEquation, type OverallEquation } from './route/overall-equation.ts';
-import { deriveRoles } from './route/roles.ts';
-import { stoichiometricNumbers } from './route/stoichiometric-numbers.ts';
+import { readStepConstants, type StepConstants } from './mechanism/step-constants.ts';
+import { checkObservations } from './observations/check-observations.ts';
 import type { ObservationCheck } from './observations/judge-order.ts';
 import { deriveRateLaws, type DerivedRateLaw } from './rate-law/derive-rate-laws.ts';
-import { readStepConstants, type StepConstants } from './mechanism/step-constants.ts';
-import { energyAnalysis, energyConditions, eyringStepConstants, type EnergyResult } from './energy/index.ts';
 import { constantValues } from './rate-law/numeric-values.ts';
+import type { RateLawContext } from './rate-law/context.ts';
+import type { OverallEquation } from './route/overall-equation.ts';
+import { deriveRoute, type Route } from './route/route.ts';
 import { checkApproximations, type SimulationCheck } from './simulation/approximation-validity.ts';
+import type { SimulationBasis } from './simulation/simulation-setup.ts';
 
 export interface Derivation {
   mechanism?: Mechanism;
+  /** atom and charge balance of each step, in record order */
+  balance?: StepBalance[];
+  /** the route with the roles as the rate law confirmed them (inhibitors); the fields below repeat its parts */
+  route?: Route;
   /** Horiuti stoichiometric number σ of each step */
   stoichiometricNumbers?: number[];
   routeSource?: 'given' | 'derived';
@@ -33,6 +40,10 @@ export interface Derivation {
   /** species whose free concentration is held constant */
   buffered: string[];
   rateLaws?: DerivedRateLaw[];
+  /** what the rate laws were derived in: the symbols and conservation pools (for judging other observations) */
+  rateLawContext?: RateLawContext;
+  /** each species with an order, and its concentration symbol in the laws */
+  orderSymbols?: { species: string; symbol: string }[];
   observations?: ObservationCheck[];
   /** numeric rate and equilibrium constants by symbol (k_1, k_-1, K_1), given or from energies */
   constants?: Map<string, number>;
@@ -59,53 +70,66 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
   const mechanism = built.mechanism;
   if (!mechanism) return { buffered: [], diagnostics };
   const buffered = [...mechanism.species.values()].filter((s) => s.buffered).map((s) => s.symbol);
-  const constants = readStepConstants(record, mechanism);
-  diagnostics.push(...checkBalance(mechanism), ...checkMolecularity(mechanism), ...constants.diagnostics);
-  const fromEnergies = fillFromEnergies(record, mechanism, constants.constants);
+  const given = readStepConstants(record, mechanism);
+  const balance = checkBalance(mechanism);
+  diagnostics.push(...balance.diagnostics, ...checkMolecularity(mechanism), ...given.diagnostics);
+  const fromEnergies = fillFromEnergies(record, mechanism, given.constants);
   diagnostics.push(...checkDetailedBalance(mechanism, fromEnergies.constants));
+  const constants = constantValues(mechanism, fromEnergies.constants);
 
-  const mustCancel = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate' || s.declaredRole === 'catalyst').map((s) => s.symbol));
-  const carriers = new Set([...mechanism.species.values()].filter((s) => s.declaredRole === 'intermediate').map((s) => s.symbol));
-  const route = stoichiometricNumbers(mechanism.steps, mustCancel, carriers);
-  diagnostics.push(...route.diagnostics);
-  if (!route.numbers) return { mechanism, buffered, diagnostics };
-  const sigma = route.numbers;
+  const routed = deriveRoute(mechanism);
+  diagnostics.push(...routed.diagnostics);
+  if (!routed.route) return { mechanism, balance: balance.balance, buffered, diagnostics };
 
-  const { roles, offRoute, routeOrder, diagnostics: roleDiagnostics } = deriveRoles(mechanism, sigma);
-  diagnostics.push(...roleDiagnostics);
-  // Only catalysts on the route go over the arrow; a binder off the route (an inhibitor) does not.
-  const catalysts = [...roles].filter(([sp, r]) => r === 'catalyst' && !offRoute.has(sp)).map(([sp]) => sp);
-  const rates = deriveRateLaws(record, mechanism, sigma, roles, offRoute, fromEnergies.constants, routeOrder);
-  diagnostics.push(...rates.diagnostics, ...inhibitorMismatches(mechanism, rates.roles, rates.rateLaws.length > 0));
+  const rates = deriveRateLaws(record.approximation ?? 'auto', mechanism, routed.route);
+  const route: Route = { ...routed.route, roles: rates.roles };
+  const judged = checkObservations(record, rates.context, rates.rateLaws, constants, rates.symbols);
+  diagnostics.push(...rates.diagnostics, ...judged.diagnostics, ...inhibitorMismatches(mechanism, rates.roles, rates.rateLaws.length > 0));
+  const rateLaws = rates.rateLaws.map((law, i) => ({ ...law, restingStates: judged.restingStates[i] ?? [] }));
   const derivation: Derivation = {
     mechanism,
-    stoichiometricNumbers: sigma,
-    routeSource: route.source === 'given' ? 'given' : 'derived',
-    overall: overallEquation(mechanism, sigma, catalysts),
+    balance: balance.balance,
+    route,
+    stoichiometricNumbers: [...route.sigma],
+    routeSource: route.source,
+    overall: route.overall,
     roles: rates.roles,
-    offRoute,
-    routeOrder,
+    offRoute: new Set(route.offRoute),
+    routeOrder: [...route.order],
     buffered,
-    rateLaws: rates.rateLaws,
-    observations: rates.observations,
-    constants: constantValues(mechanism, fromEnergies.constants),
+    rateLaws,
+    rateLawContext: rates.context,
+    orderSymbols: rates.symbols,
+    observations: judged.checks,
+    constants,
     constantsFromEnergies: fromEnergies.labels,
     diagnostics,
   };
-  const energy = energyAnalysis(record, derivation);
+  const energy = energyAnalysis(record, mechanism, route);
   if (energy.energy) derivation.energy = energy.energy;
   diagnostics.push(...energy.diagnostics);
   if (options.simulate !== false && (record.observations ?? []).length > 0) {
-    const simulated = checkApproximations(record, derivation, derivation.constants!, options.approximationThreshold);
+    const simulated = checkApproximations(record.observations ?? [], { mechanism, route, rateLaws }, constants, options.approximationThreshold);
     derivation.simulation = simulated.checks;
     diagnostics.push(...simulated.diagnostics);
   }
   return derivation;
 }
 
-/** The numeric constants by symbol (k_1, k_-1, K_1) the simulations use: given, or from the step energies by Eyring. */
-export function simulationConstants(record: MechanismRecord, mechanism: Mechanism): Map<string, number> {
-  return constantValues(mechanism, fillFromEnergies(record, mechanism, readStepConstants(record, mechanism).constants).constants);
+/**
+ * Observations a record does not hold (a rival's, in a system of rival proposals) judged against
+ * the rate laws already derived, without deriving again: no diagnostics, no simulation.
+ */
+export function judgeObservations(derivation: Derivation, observations: readonly Observation[], status: Status): ObservationCheck[] {
+  const { rateLawContext, rateLaws, orderSymbols, constants } = derivation;
+  if (!rateLawContext || !rateLaws || !orderSymbols) return [];
+  return checkObservations({ observations, status }, rateLawContext, rateLaws, constants ?? new Map(), orderSymbols).checks;
+}
+
+/** What the simulations need from a derivation, or undefined where it found no route. */
+export function simulationBasis(derivation: Derivation): SimulationBasis | undefined {
+  const { mechanism, route, rateLaws } = derivation;
+  return mechanism && route ? { mechanism, route, rateLaws: rateLaws ?? [] } : undefined;
 }
 
 /**

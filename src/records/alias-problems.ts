@@ -5,8 +5,8 @@
  */
 import { isAlias, visit } from 'yaml';
 import type { Alias, Document } from 'yaml';
-import { diagnostic } from '../model/diagnostic.ts';
-import type { Diagnostic } from '../model/diagnostic.ts';
+import { diagnostic } from '../model/index.ts';
+import type { Diagnostic } from '../model/index.ts';
 import type { RecordLocator } from './source-positions.ts';
 
 /** Every alias in document order, and a `record/yaml` error for each one that cannot resolve. */

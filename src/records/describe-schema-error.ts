@@ -3,7 +3,7 @@
  * (never ajv's own wording), pointing at the value or at the key that is wrong.
  */
 import type { ErrorObject } from 'ajv';
-import type { RecordPath } from '../model/diagnostic.ts';
+import type { RecordPath } from '../model/index.ts';
 import { closestName } from './closest-name.ts';
 import {
   comparisonWords,

@@ -3,9 +3,9 @@
  * A record is handed on only when all three succeed, so the engine may trust its shape.
  */
 import { readFile } from 'node:fs/promises';
-import { diagnostic } from '../model/diagnostic.ts';
-import type { Diagnostic, RecordPath } from '../model/diagnostic.ts';
-import type { MechanismRecord } from '../model/mechanism-record.ts';
+import { diagnostic } from '../model/index.ts';
+import type { Diagnostic, RecordPath } from '../model/index.ts';
+import type { MechanismRecord } from '../model/index.ts';
 import { parseRecordYaml } from './parse-record-yaml.ts';
 import { describeSchemaErrors } from './schema-messages.ts';
 import { recordValidator } from './schema-validator.ts';

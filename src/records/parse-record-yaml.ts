@@ -5,8 +5,8 @@
 import { LineCounter, isNode, parseDocument, visit } from 'yaml';
 import type { Document, YAMLError } from 'yaml';
 import { findAliasProblems } from './alias-problems.ts';
-import { diagnostic } from '../model/diagnostic.ts';
-import type { Diagnostic } from '../model/diagnostic.ts';
+import { diagnostic } from '../model/index.ts';
+import type { Diagnostic } from '../model/index.ts';
 import { createLocator, keyText } from './source-positions.ts';
 import type { RecordLocator } from './source-positions.ts';
 

@@ -2,7 +2,7 @@
  * The engine knows where a problem is only as a path into the record; this gives each diagnostic
  * its file, line and column. Diagnostics that already have a line keep it.
  */
-import type { Diagnostic } from '../model/diagnostic.ts';
+import type { Diagnostic } from '../model/index.ts';
 import type { LoadedRecord } from './load-record.ts';
 
 /** Sets file, line, column, endLine and endColumn on each diagnostic from its path and offset. */

@@ -3,7 +3,7 @@
  * indices as numbers, the noise of anyOf/oneOf branches folded away and repeats dropped.
  */
 import type { ErrorObject } from 'ajv';
-import type { RecordPath } from '../model/diagnostic.ts';
+import type { RecordPath } from '../model/index.ts';
 import { describeSchemaError } from './describe-schema-error.ts';
 import type { SchemaProblem } from './describe-schema-error.ts';
 

@@ -6,7 +6,7 @@ import { Ajv2020 } from 'ajv/dist/2020.js';
 import type { ErrorObject, ValidateFunction } from 'ajv';
 import addFormats from 'ajv-formats';
 import schema from '../../schemas/mechanism.schema.json' with { type: 'json' };
-import type { MechanismRecord } from '../model/mechanism-record.ts';
+import type { MechanismRecord } from '../model/index.ts';
 
 /** The JSON Schema of a record (schemas/mechanism.schema.json). */
 export const recordSchema: Readonly<Record<string, unknown>> = schema;

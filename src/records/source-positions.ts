@@ -5,7 +5,7 @@
  */
 import { isAlias, isMap, isScalar, isSeq, Scalar } from 'yaml';
 import type { Document, LineCounter } from 'yaml';
-import type { RecordPath } from '../model/diagnostic.ts';
+import type { RecordPath } from '../model/index.ts';
 
 /** A span of the source, 1-based; the end is exclusive (the column after the last character). */
 export interface SourcePosition {

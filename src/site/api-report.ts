@@ -1,28 +1,21 @@
 /**
  * The static JSON API's documents, in the shape of `mechatlas check --format json` (DESIGN.md
- * "Contracts"): the engine's report of each record, with file paths relative to the repository
- * as the CLI prints them, never the build machine's absolute paths.
+ * "Contracts"): each record's report with its file named as the catalogue names it (relative to
+ * the repository), never by the build machine's absolute path.
  */
-import type { CatalogueReport } from '../render/report/catalogue-report.ts';
-import type { RecordReport } from '../render/report/record-report.ts';
-import { toolVersion } from '../catalogue/tool-version.ts';
+import { toolVersion } from '../catalogue/index.ts';
+import type { CatalogueReport, RecordReport } from '../model/index.ts';
+import { reportOf } from '../render/index.ts';
 import type { RecordView } from './record-view.ts';
 
-/** The report of one record with its file given as the catalogue names it. */
+/** The report of one record. */
 export function publicReport(view: RecordView): RecordReport {
-  const { report } = view;
-  return { ...report, file: view.file, diagnostics: report.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: view.file })) };
+  return view.report;
 }
 
 /** The whole catalogue's report: tool, summary and one entry per record. */
 export function catalogueJson(views: readonly RecordView[]): CatalogueReport {
-  const all = views.flatMap((v) => v.report.diagnostics);
-  const count = (severity: string) => all.filter((d) => d.severity === severity).length;
-  return {
-    tool: { name: 'mechatlas', version: toolVersion() },
-    summary: { records: views.length, errors: count('error'), warnings: count('warning'), notes: count('info') },
-    records: views.map(publicReport),
-  };
+  return reportOf(views.map(publicReport), toolVersion());
 }
 
 /** A JSON response body, pretty-printed (the files are meant to be read as well as fetched). */

@@ -29,11 +29,3 @@ export function httpUrl(url: string): string | undefined {
 export function sourceUrl(text: string): string | undefined {
   return doiUrl(text) ?? (/^https?:\/\//i.test(text.trim()) ? httpUrl(text) : undefined);
 }
-
-/** Mentions in tags, title or notes that call for the safety caution near the top of a page. */
-const HAZARD_WORDS = /scale[\s-]?up|exotherm|runaway|toxic|hazard/i;
-
-/** True when the record speaks of scale-up, exotherms, runaway, toxicity or hazards. */
-export function mentionsHazard(view: { title: string; tags: readonly string[]; notes?: string }): boolean {
-  return [view.title, ...view.tags, view.notes ?? ''].some((text) => HAZARD_WORDS.test(text));
-}

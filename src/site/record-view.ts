@@ -1,17 +1,11 @@
 /**
- * What a mechanism page shows, as plain JSON built from the engine's derivation (the site
- * renders it and recomputes no chemistry): the report, the steps with their marks, the overall
- * equation in LaTeX with catalysts over the arrow, and the species with their roles.
+ * What a mechanism page shows, as plain JSON built from a catalogue record (the site renders it
+ * and recomputes no chemistry): the report, the steps with their marks, the overall equation in
+ * LaTeX with catalysts over the arrow, the species with their roles, and the figures.
  */
-import type { CheckedRecord } from '../catalogue/check-records.ts';
-import { recordReport, type RecordReport } from '../render/report/record-report.ts';
-import { overallLatex } from '../render/words/equation-latex.ts';
-import { molecularity } from '../engine/mechanism/molecularity.ts';
-import { concentrationTimeSvg } from '../render/plots/concentration-time-svg.ts';
-import { energyProfileSvg } from '../render/plots/energy-profile-svg.ts';
-import { sbmlDocument } from '../render/sbml/sbml.ts';
-import { firstObservationSeries } from '../engine/simulation/concentration-series.ts';
-import type { Observation, Reference } from '../model/mechanism-record.ts';
+import type { CatalogueRecord } from '../catalogue/index.ts';
+import type { Observation, RecordReport, Reference } from '../model/index.ts';
+import { concentrationTimeSvg, energyProfileSvg, overallLatex, recordReport, sbmlDocument } from '../render/index.ts';
 
 export interface StepView {
   index: number;
@@ -85,11 +79,10 @@ export interface RecordView {
   survives: boolean;
 }
 
-/** Builds the page data of one checked record. */
-export function recordView(checked: CheckedRecord, source: string): RecordView {
+/** Builds the page data of one catalogue record. */
+export function recordView(checked: CatalogueRecord): RecordView {
   const report = recordReport(checked);
-  const record = checked.loaded.record;
-  const derivation = checked.derivation;
+  const { record, derivation, source } = checked;
   const count = (s: string) => report.diagnostics.filter((d) => d.severity === s).length;
   const view: RecordView = {
     id: checked.id,
@@ -112,13 +105,8 @@ export function recordView(checked: CheckedRecord, source: string): RecordView {
   if (mechanism && record) {
     view.steps = mechanism.steps.map((step): StepView => {
       const entry = record.steps[step.index]!;
-      const onStep = checked.diagnostics.filter((d) => d.path?.[0] === 'steps' && d.path[1] === step.index);
-      const balance = onStep.some((d) => d.severity === 'error' && d.rule.startsWith('balance/'))
-        ? 'unbalanced'
-        : onStep.some((d) => d.rule === 'balance/atoms') || mechanism.notation === 'labels'
-          ? 'unchecked'
-          : 'balanced';
-      const out: StepView = { index: step.index, label: step.label, equation: step.text, reversible: step.reversible, rds: step.rds, molecularity: molecularity(step.reactants), balance };
+      const balance = derivation.balance?.[step.index] ?? 'unchecked';
+      const out: StepView = { index: step.index, label: step.label, equation: step.text, reversible: step.reversible, rds: step.rds, molecularity: step.molecularity, balance };
       const sigma = derivation.stoichiometricNumbers?.[step.index];
       if (sigma !== undefined) out.sigma = sigma;
       for (const [key, field] of [['k', 'k'], ['kRev', 'k_rev'], ['K', 'K']] as const) if (entry[field] !== undefined) out[key] = String(entry[field]);
@@ -141,9 +129,9 @@ export function recordView(checked: CheckedRecord, source: string): RecordView {
     });
   }
   if (derivation?.energy) view.energySvg = energyProfileSvg(derivation.energy, { idPrefix: `energy-${checked.id}`, title: `Energy profile of ${view.title}` });
-  const series = record && derivation ? firstObservationSeries(record, derivation) : undefined;
+  const series = checked.series;
   if (series?.status === 'ok') view.concentrationSvg = concentrationTimeSvg(series, { logTime: true, idPrefix: `concentration-${checked.id}`, title: `Simulated concentrations against time for ${view.title} (observation ${series.observation}, log time axis)` });
-  if (record && derivation?.mechanism) view.sbml = sbmlDocument(checked.id, record, derivation, derivation.constants ?? new Map());
+  if (record && derivation?.mechanism) view.sbml = sbmlDocument(checked.id, record, derivation.mechanism, derivation.constants ?? new Map());
   if (derivation?.overall) view.overallLatex = overallLatex(derivation.overall.reactants, derivation.overall.products, derivation.overall.catalysts);
   const failed = (report.observations ?? []).some((o) => o.status === 'fail' && o.method === report.rate_laws?.[0]?.method);
   view.survives = view.errors === 0 && !failed;

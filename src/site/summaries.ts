@@ -2,17 +2,10 @@
  * Presentation helpers for the catalogue, species, system and checks pages: counting, grouping,
  * sorting and wording of what the engine already returned. No chemistry is computed here.
  */
-import type { DiagnosticJson, ObservationJson } from '../render/report/record-report.ts';
-import type { SpeciesOccurrence } from '../catalogue/catalogue.ts';
+import type { DiagnosticJson, ObservationJson } from '../model/index.ts';
+import { roleRank, roleWords, SEVERITIES } from '../render/index.ts';
 import type { RecordView } from './record-view.ts';
-
-/** Roles in the order a reader looks for them; anything else follows alphabetically. */
-const ROLE_ORDER = ['catalyst', 'reactant', 'product', 'intermediate', 'inhibitor', 'third_body', 'solvent'];
-
-/** A role as words (`third_body` → `third body`); a species without a derived role is "no role derived". */
-export function roleLabel(role: string | undefined): string {
-  return role ? role.replace(/_/g, ' ') : 'no role derived';
-}
+import type { SpeciesOccurrence } from './site-catalogue.ts';
 
 export interface RoleCount {
   role: string;
@@ -22,12 +15,8 @@ export interface RoleCount {
 /** How often a species takes each role across the mechanisms it occurs in. */
 export function roleCounts(occurrences: readonly SpeciesOccurrence[]): RoleCount[] {
   const counts = new Map<string, number>();
-  for (const o of occurrences) counts.set(roleLabel(o.role), (counts.get(roleLabel(o.role)) ?? 0) + 1);
-  const rank = (role: string) => {
-    const i = ROLE_ORDER.indexOf(role.replace(/ /g, '_'));
-    return i < 0 ? ROLE_ORDER.length : i;
-  };
-  return [...counts].map(([role, count]) => ({ role, count })).sort((a, b) => rank(a.role) - rank(b.role) || a.role.localeCompare(b.role));
+  for (const o of occurrences) counts.set(roleWords(o.role), (counts.get(roleWords(o.role)) ?? 0) + 1);
+  return [...counts].map(([role, count]) => ({ role, count })).sort((a, b) => roleRank(a.role) - roleRank(b.role) || a.role.localeCompare(b.role));
 }
 
 /** "catalyst in 3, intermediate in 1" (plus "buffered in 1" where the species is held constant). */
@@ -73,9 +62,6 @@ export function openProblems(records: readonly RecordView[]): OpenProblems {
     approximations: records.flatMap((record) => record.report.diagnostics.filter((d) => d.rule.startsWith('approximation/')).map((diagnostic) => ({ record, diagnostic }))),
   };
 }
-
-/** Severities in order of urgency; any other severity follows. */
-export const SEVERITIES = ['error', 'warning', 'info'] as const;
 
 export interface RuleGroup {
   rule: string;
@@ -125,49 +111,4 @@ export function anchorId(text: string): string {
 /** `file:line:column` as a reader expects it, with the record's file as the catalogue names it (relative). */
 export function placeText(record: { file: string }, d: DiagnosticJson): string {
   return [record.file, d.line, d.line !== undefined ? d.column : undefined].filter((x) => x !== undefined).join(':');
-}
-
-/** "1 warning", "3 warnings", "2 info notes": a count of diagnostics of one severity. */
-export function severityCount(count: number, severity: string): string {
-  const word = severity === 'info' ? 'info note' : severity;
-  return `${count} ${word}${count === 1 ? '' : 's'}`;
-}
-
-/** An order for display: at most three decimals, a true minus sign, fractions kept as written. */
-export function formatOrder(value: number | string): string {
-  const text = typeof value === 'number' ? String(Number(value.toFixed(3))) : value;
-  return text.replace(/^-/, '\u2212');
-}
-
-/** An order's limits as [X] → 0 and [X] → ∞: one number where they agree, else `low → high`. */
-export function formatLimits([low, high]: readonly [number | string, number | string]): string {
-  return String(low) === String(high) ? formatOrder(low) : `${formatOrder(low)} \u2192 ${formatOrder(high)}`;
-}
-
-/** The words for a rate-law method. */
-export function methodLabel(method: string | undefined): string {
-  switch (method) {
-    case 'rds':
-      return 'rate-determining step with fast pre-equilibria';
-    case 'steady_state':
-      return 'steady state';
-    case undefined:
-      return 'no rate law';
-    default:
-      return method.replace(/_/g, ' ');
-  }
-}
-
-/** The outcome of a check in words and a symbol, so it never rests on colour alone. */
-export function statusMark(status: string | undefined): { symbol: string; word: string; className: string } {
-  switch (status) {
-    case 'pass':
-      return { symbol: '\u2713', word: 'pass', className: 'pass' };
-    case 'fail':
-      return { symbol: '\u2717', word: 'fail', className: 'fail' };
-    case 'unknown':
-      return { symbol: '?', word: 'unknown', className: 'unknown' };
-    default:
-      return { symbol: '\u2013', word: 'not judged', className: 'unknown' };
-  }
 }

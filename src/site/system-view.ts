@@ -4,7 +4,7 @@
  * each surviving pair the species whose predicted order differs most — the measurement that
  * would best tell them apart.
  */
-import type { ObservationJson } from '../render/report/record-report.ts';
+import type { ObservationJson } from '../model/index.ts';
 import type { RecordView } from './record-view.ts';
 
 export interface RivalColumn {

@@ -10,6 +10,7 @@
 import { describe, expect, it } from 'vitest';
 import { concentrationSeries, firstObservationSeries } from '../../src/engine/simulation/concentration-series.ts';
 import { loadRecordSource } from '../../src/records/index.ts';
+import { simulationBasis } from '../../src/engine/derive.ts';
 import { deriveYaml } from '../helpers/derive-yaml.ts';
 
 const A0 = 0.1;
@@ -31,7 +32,7 @@ describe.each([
 ])('A → B → C, %s (k₁ = %d s⁻¹, k₂ = %d s⁻¹)', (_, k1, k2) => {
   const record = loadRecordSource('consecutive.yaml', yaml(k1, k2)).record!;
   const d = deriveYaml(yaml(k1, k2));
-  const series = firstObservationSeries(record, d)!;
+  const series = firstObservationSeries(record.observations!, simulationBasis(d)!, d.constants!)!;
   const at = (sp: string) => series.values[series.species.indexOf(sp)]!;
   const tMax = Math.log(k2 / k1) / (k2 - k1);
   const bMax = A0 * (k1 / k2) ** (k2 / (k2 - k1));
@@ -83,7 +84,7 @@ describe('a record that cannot be simulated', () => {
     const text = yaml(1, 2).replace(', k: 2 s^-1', '');
     const d = deriveYaml(text);
     const record = loadRecordSource('missing.yaml', text).record!;
-    const series = concentrationSeries(d, new Map([['k_1', 1]]), record.observations![0]!);
+    const series = concentrationSeries(simulationBasis(d)!, new Map([['k_1', 1]]), record.observations![0]!);
     expect(series).toMatchObject({ status: 'skipped', message: 'not simulated: needs the rate constant of step 2', times: [], values: [] });
   });
 });

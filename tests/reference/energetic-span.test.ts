@@ -58,7 +58,7 @@ function analyse(yaml: string) {
   const loaded = loadRecordSource('span.yaml', yaml);
   if (!loaded.record) throw new Error(JSON.stringify(loaded.diagnostics));
   const derivation = deriveMechanism(loaded.record);
-  return { derivation, ...energyAnalysis(loaded.record, derivation) };
+  return { derivation, ...energyAnalysis(loaded.record, derivation.mechanism!, derivation.route!) };
 }
 
 /** rate/[Cat]_T of the exact steady-state law at 1 M of every reactant and product. */

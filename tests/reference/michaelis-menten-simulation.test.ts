@@ -12,7 +12,7 @@
  * [E]_T comparable to [S]₀ and K_M it fails, and the engine must say so.
  */
 import { describe, expect, it } from 'vitest';
-import { simulationConstants } from '../../src/engine/derive.ts';
+import { simulationBasis } from '../../src/engine/derive.ts';
 import { concentrationSeries } from '../../src/engine/simulation/concentration-series.ts';
 import { loadRecordSource } from '../../src/records/index.ts';
 import { deriveYaml } from '../helpers/derive-yaml.ts';
@@ -69,7 +69,7 @@ describe('Michaelis–Menten with a dilute enzyme ([E]_T = 10 nM ≪ [S]₀ = 1 
 
   it('follows the integrated Michaelis–Menten equation over the whole time course', () => {
     const loaded = loadRecordSource('michaelis-menten.yaml', record(enzyme));
-    const series = concentrationSeries(d, simulationConstants(loaded.record!, d.mechanism!), loaded.record!.observations![0]!);
+    const series = concentrationSeries(simulationBasis(d)!, d.constants!, loaded.record!.observations![0]!);
     expect(series.status).toBe('ok');
     expect(series.conversion!).toBeGreaterThan(0.99);
     const S = series.values[series.species.indexOf('S')]!;

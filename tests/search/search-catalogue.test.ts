@@ -1,7 +1,7 @@
 // The catalogue search without a browser: the prebuilt bundle, its JSON round trip, ranking,
 // case-sensitive formulas, filters and the announced summary.
 import { describe, expect, it } from 'vitest';
-import { loadCatalogue } from '../../src/catalogue/catalogue.ts';
+import { loadCatalogue } from '../../src/site/index.ts';
 import { buildSearchIndex, type MechanismInput, type SpeciesInput } from '../../src/search/build-index.ts';
 import { outcomeSummary } from '../../src/search/outcome-summary.ts';
 import { createCatalogueSearch, isLiteralQuery, type SearchOutcome } from '../../src/search/search-catalogue.ts';

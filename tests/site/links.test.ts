@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { doiUrl, httpUrl, mentionsHazard, sourceUrl } from '../../src/site/links.ts';
+import { doiUrl, httpUrl, mentionsHazard, sourceUrl } from '../../src/site/index.ts';
 
 describe('doiUrl', () => {
   it.each([

@@ -6,7 +6,7 @@ import { existsSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
-import { loadCatalogue, type Catalogue } from '../../src/catalogue/catalogue.ts';
+import { loadCatalogue, type Catalogue } from '../../src/site/index.ts';
 
 let out = '';
 let catalogue: Catalogue;
@@ -63,7 +63,7 @@ describe('the demo site pages', () => {
     expect(rowOf(html, 'data-rival', 'kx7-hydroarylation-alkene-first')).toContain('data-survives="true"');
     // The matrix: arene-first fails the saturation observation, in words, not by colour alone.
     const saturation = rowOf(html, 'data-observation', 'kx7-saturation-2026-02');
-    expect(saturation).toMatch(/data-rival="kx7-hydroarylation-arene-first" data-status="fail">\s*<span class="fail"><span aria-hidden="true">✗<\/span> fail/);
+    expect(saturation).toMatch(/data-rival="kx7-hydroarylation-arene-first" data-status="fail">\s*<span class="fail"><span aria-hidden="true">✗<\/span> contradicted/);
     // Rival overall equations are the same change, written in another order: not flagged.
     expect(html).not.toContain('data-overall-differs');
     // The measurement that would tell the survivors apart.

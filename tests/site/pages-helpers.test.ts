@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { anchorId, formatLimits, formatOrder, groupDiagnostics, recentRecords, roleSummary, ruleIndex, severityCount, statusMark } from '../../src/site/summaries.ts';
-import type { RecordView } from '../../src/site/record-view.ts';
-import { shortLabels } from '../../src/site/system-view.ts';
+import { anchorId, groupDiagnostics, recentRecords, roleSummary, ruleIndex, shortLabels, type RecordView } from '../../src/site/index.ts';
 
 /** A record view with only what the helpers read. */
 function view(id: string, extra: Partial<RecordView> = {}, diagnostics: RecordView['report']['diagnostics'] = []): RecordView {
@@ -31,21 +29,8 @@ describe('shortLabels', () => {
   ])('%j', (ids, shorts) => expect(shortLabels(ids)).toEqual(shorts));
 });
 
-describe('formatting', () => {
-  it('orders', () => {
-    expect(formatOrder(0.5252)).toBe('0.525');
-    expect(formatOrder(-1)).toBe('\u22121');
-    expect(formatOrder('1/2')).toBe('1/2');
-    expect(formatLimits([1, 1])).toBe('1');
-    expect(formatLimits([1, 0])).toBe('1 \u2192 0');
-  });
-  it('outcomes carry a word and a symbol', () => {
-    expect(statusMark('fail')).toMatchObject({ word: 'fail', symbol: '\u2717' });
-    expect(statusMark(undefined)).toMatchObject({ word: 'not judged' });
-  });
-  it('counts and anchors', () => {
-    expect(severityCount(1, 'warning')).toBe('1 warning');
-    expect(severityCount(3, 'info')).toBe('3 info notes');
+describe('anchors', () => {
+  it('are made of safe characters', () => {
     expect(anchorId('warning-observation/order')).toBe('warning-observation-order');
   });
 });

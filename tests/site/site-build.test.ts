@@ -7,8 +7,7 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
-import type { CatalogueReport } from '../../src/render/report/catalogue-report.ts';
-import type { RecordReport } from '../../src/render/report/record-report.ts';
+import type { CatalogueReport, RecordReport } from '../../src/model/index.ts';
 import { ROOT, runCli } from '../cli/run-cli.ts';
 import { attr, decodeEntities, elementText, startTags, type Tag } from './html-scan.ts';
 

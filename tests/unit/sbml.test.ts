@@ -40,7 +40,7 @@ function wellFormed(xml: string): boolean {
 describe('SBML export', () => {
   const derivation = deriveYaml(yaml);
   const record = loadRecordSource('peroxide.yaml', yaml).record!;
-  const sbml = sbmlDocument('peroxide-test', record, derivation, derivation.constants!);
+  const sbml = sbmlDocument('peroxide-test', record, derivation.mechanism!, derivation.constants!);
 
   it('is well formed, declares L3V2, escapes text', () => {
     expect(sbml.startsWith('<?xml version="1.0" encoding="UTF-8"?>')).toBe(true);

@@ -3,14 +3,15 @@
  * and the standard concentration. Read in one place so that Eyring constants, the profile and the
  * energetic span all use the same values.
  */
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
+import type { MechanismRecord } from '../../model/index.ts';
 import { GAS_CONSTANT } from '../units/physical-constants.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { parseQuantity, toCanonical } from '../units/quantity.ts';
 import { CONCENTRATION, PRESSURE, TEMPERATURE, sameDimension } from '../units/units.ts';
 
-/** Gibbs energy, enthalpy or electronic energy. */
-export type EnergyBasis = 'G' | 'H' | 'E';
+import type { EnergyBasis } from '../../model/index.ts';
+
+export type { EnergyBasis };
 
 /** What the energies of a record refer to. */
 export interface EnergyConditions {

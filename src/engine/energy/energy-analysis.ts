@@ -3,48 +3,26 @@
  * span where every step of the route records its energies, and the check that the declared
  * rate-determining step is the one the span points at. Shaped for the JSON report's `energy`.
  */
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
-import type { Derivation } from '../derive.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { MechanismRecord } from '../../model/index.ts';
+import type { Route } from '../route/route.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { energyConditions } from './conditions.ts';
 import { energeticSpan, type SpanResult } from './energetic-span.ts';
-import { buildEnergyProfile, type EnergyProfile } from './profile.ts';
+import { buildEnergyProfile } from './profile.ts';
+import type { EnergyProfile, EnergyResult } from '../../model/index.ts';
 import { readStepEnergies } from './step-energies.ts';
 
-/** The record's `energy` in the JSON report: the profile plus the energetic span where it applies. */
-export interface EnergyResult extends EnergyProfile {
-  /** temperature of the TOF / K */
-  T: number;
-  /** energetic span δE / kJ mol^-1 */
-  span?: number;
-  /** label of the step whose transition state determines the TOF */
-  tdts_step?: string;
-  /** index of that transition state among the states (1-based position along the route) */
-  tdts_state?: number;
-  /** index of the determining minimum (0 = the starting state) */
-  tdi_state?: number;
-  /** TOF from the full energetic-span expression (Gibbs basis only) / s^-1 */
-  tof_per_s?: number;
-  /** TOF from the span alone, (k_B T/h) e^{−δE/RT} / s^-1 */
-  tof_span_per_s?: number;
-  /** degree of TOF control of each transition state and each intermediate (they each sum to 1) */
-  control?: {
-    transition_states: { index: number; step: string; x_tof: number }[];
-    intermediates: { index: number; x_tof: number }[];
-  };
-}
+export type { EnergyResult };
 
 const KJ = 1000;
 
-/** Profile and energetic span of a derived mechanism; no result without a route. */
-export function energyAnalysis(record: MechanismRecord, derivation: Derivation): { energy?: EnergyResult; diagnostics: Diagnostic[] } {
-  const { mechanism, stoichiometricNumbers: sigma, overall } = derivation;
-  if (!mechanism || !sigma || !overall) return { diagnostics: [] };
+/** Profile and energetic span of one turnover along the route. */
+export function energyAnalysis(record: MechanismRecord, mechanism: Mechanism, route: Route): { energy?: EnergyResult; diagnostics: Diagnostic[] } {
   const { conditions, diagnostics } = energyConditions(record);
   const read = readStepEnergies(record, mechanism);
   diagnostics.push(...read.diagnostics);
-  const built = buildEnergyProfile({ mechanism, sigma, reactants: overall.reactants, energies: read.energies, basis: conditions.basis });
+  const built = buildEnergyProfile({ mechanism, sigma: route.sigma, sequence: route.sequence, reactants: route.overall.reactants, energies: read.energies, basis: conditions.basis });
   diagnostics.push(...built.diagnostics);
   const profile = built.profile;
   const energy: EnergyResult = { ...profile, T: conditions.T };

@@ -5,9 +5,9 @@
  * thermodynamic constant of a step of molecularity n into one in M^(1−n) s^-1, because ΔG‡ refers
  * to the standard state c° of each of the n reacting particles.
  */
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
+import type { MechanismRecord } from '../../model/index.ts';
 import { BOLTZMANN, GAS_CONSTANT, PLANCK } from '../units/physical-constants.ts';
-import type { Diagnostic } from '../../model/diagnostic.ts';
+import type { Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { molecularity } from '../mechanism/molecularity.ts';
 import { energyConditions, type EnergyConditions } from './conditions.ts';

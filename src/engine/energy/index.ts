@@ -4,5 +4,5 @@ export { energeticSpan, type SpanInput, type SpanResult } from './energetic-span
 export { energyAnalysis, type EnergyResult } from './energy-analysis.ts';
 export { eyringRateConstant, eyringStepConstants, thermalFrequency, type EyringInput, type StepEyringConstants } from './eyring.ts';
 export { buildEnergyProfile, type EnergyProfile, type ProfileInput, type ProfileState } from './profile.ts';
-export { routeSequence, speciesRecord, walkSpecies, type SpeciesWalk } from './route-species.ts';
+export { speciesRecord, walkSpecies, type SpeciesWalk } from './route-species.ts';
 export { readStepEnergies, type StepEnergyValues } from './step-energies.ts';

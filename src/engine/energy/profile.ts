@@ -3,51 +3,21 @@
  * every species present at each state. Energies are added up from the steps' own barriers and
  * changes, so a missing value leaves the rest of the profile schematic rather than wrong.
  */
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import type { Rational } from '../exact/rational.ts';
-import type { EnergyBasis } from './conditions.ts';
-import { routeSequence, speciesRecord, walkSpecies } from './route-species.ts';
+import type { EnergyBasis, EnergyProfile, ProfileState } from '../../model/index.ts';
+export type { EnergyProfile, ProfileState };
+import type { Step } from '../mechanism/mechanism.ts';
+import { speciesRecord, walkSpecies } from './route-species.ts';
 import type { StepEnergyValues } from './step-energies.ts';
-
-/** One state of the profile: a minimum or the transition state of one step. */
-export interface ProfileState {
-  /**
-   * A minimum's index counts the route steps completed (0 = the starting state); a transition
-   * state's is the 1-based position of its step along the route, so TS i lies between minima i−1 and i.
-   */
-  index: number;
-  kind: 'minimum' | 'transition';
-  /** kJ/mol relative to the starting state; absent where the recorded energies do not reach */
-  energy?: number;
-  /** everything present, with amounts; a transition state carries its step's starting species */
-  species: Record<string, number>;
-  /** label of the step (transition states only) */
-  step?: string;
-}
-
-/** The states of one turnover with the overall change; schematic where energies are missing. */
-export interface EnergyProfile {
-  basis: EnergyBasis;
-  unit: 'kJ/mol';
-  /** cycle: something (a catalyst, a chain carrier) is needed at the start and returned at the end */
-  kind: 'cycle' | 'sequence';
-  /** true when a step of the route records no barrier or no change */
-  schematic: boolean;
-  states: ProfileState[];
-  /** energy of the last minimum relative to the first, kJ/mol (ΔG_r of one turnover) */
-  overall_change?: number;
-  direction?: 'exergonic' | 'endergonic' | 'thermoneutral';
-  /** label of the step declared rate-determining, if it is on the route */
-  rds_step?: string;
-  /** species needed at the start and returned at the end */
-  carriers: string[];
-}
 
 /** What the profile is built from: the route, the overall reactants and the step energies in J/mol. */
 export interface ProfileInput {
   mechanism: Mechanism;
   sigma: readonly number[];
+  /** the steps of one turnover in the order they run (Route.sequence) */
+  sequence: readonly Step[];
   reactants: ReadonlyMap<string, Rational>;
   energies: readonly StepEnergyValues[];
   basis: EnergyBasis;
@@ -57,8 +27,7 @@ const KJ = 1000;
 
 /** Builds the states of one turnover and checks that no transition state lies below a neighbouring minimum. */
 export function buildEnergyProfile(input: ProfileInput): { profile: EnergyProfile; diagnostics: Diagnostic[] } {
-  const { mechanism, sigma, reactants, energies, basis } = input;
-  const sequence = routeSequence(mechanism, sigma);
+  const { mechanism, sigma, sequence, reactants, energies, basis } = input;
   const walk = walkSpecies(mechanism, sequence, reactants);
   const states: ProfileState[] = [];
   let level: number | undefined = 0;

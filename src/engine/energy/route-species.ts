@@ -7,11 +7,6 @@
 import type { Mechanism, Step } from '../mechanism/mechanism.ts';
 import { Rational } from '../exact/rational.ts';
 
-/** The steps of one turnover in order: each step σ times in a row, steps with σ = 0 left out. */
-export function routeSequence(mechanism: Mechanism, sigma: readonly number[]): Step[] {
-  return mechanism.steps.flatMap((step) => Array.from({ length: Math.max(0, Math.trunc(sigma[step.index] ?? 0)) }, () => step));
-}
-
 /** Amounts at the start of the turnover and after each step (length = steps + 1), in species order. */
 export interface SpeciesWalk {
   amounts: Map<string, Rational>[];

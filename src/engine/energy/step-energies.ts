@@ -2,8 +2,8 @@
  * Reads each step's `energy: {barrier, change}` into J/mol. Both are measured from the step's own
  * starting state (DESIGN.md item 8), so a profile is built by adding them up along the route.
  */
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { MechanismRecord } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { parseQuantity, toCanonical } from '../units/quantity.ts';
 import { MOLAR_ENERGY, sameDimension } from '../units/units.ts';

@@ -2,23 +2,26 @@
  * Atom and charge balance of each elementary step, from the species' compositions.
  * Steps with a species of unknown composition are skipped with a note.
  */
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
 
+/** Whether a step's atoms and charge balance, or could not be checked (a species without composition). */
+export type StepBalance = 'balanced' | 'unbalanced' | 'unchecked';
+
 /** Checks every step's atoms and charge; skipped steps get an info note in `formulas` records. */
-export function checkBalance(mechanism: Mechanism): Diagnostic[] {
-  return mechanism.steps.flatMap((step) => checkStepBalance(mechanism, step));
+export function checkBalance(mechanism: Mechanism): { balance: StepBalance[]; diagnostics: Diagnostic[] } {
+  const checked = mechanism.steps.map((step) => checkStepBalance(mechanism, step));
+  return { balance: checked.map((c) => c.balance), diagnostics: checked.flatMap((c) => c.diagnostics) };
 }
 
-function checkStepBalance(mechanism: Mechanism, step: Step): Diagnostic[] {
+function checkStepBalance(mechanism: Mechanism, step: Step): { balance: StepBalance; diagnostics: Diagnostic[] } {
   const path = ['steps', step.index, 'equation'];
   // A species without composition that nets to nothing in the step (a third body) does not hide an imbalance.
   const unknown = [...step.change.keys()].filter((s) => !mechanism.species.get(s)?.composition);
   if (unknown.length > 0) {
-    if (mechanism.notation === 'labels') return [];
-    return [
-      diagnostic('balance/atoms', 'info', `atoms and charge not checked: ${unknown.join(', ')} ${unknown.length === 1 ? 'has' : 'have'} no composition`, { path }),
-    ];
+    if (mechanism.notation === 'labels') return { balance: 'unchecked', diagnostics: [] };
+    const message = `atoms and charge not checked: ${unknown.join(', ')} ${unknown.length === 1 ? 'has' : 'have'} no composition`;
+    return { balance: 'unchecked', diagnostics: [diagnostic('balance/atoms', 'info', message, { path })] };
   }
   const atoms = new Map<string, { left: number; right: number }>();
   let leftCharge = 0;
@@ -57,7 +60,7 @@ function checkStepBalance(mechanism: Mechanism, step: Step): Diagnostic[] {
       }),
     );
   }
-  return out;
+  return { balance: out.length > 0 ? 'unbalanced' : 'balanced', diagnostics: out };
 }
 
 function signed(x: number): string {

@@ -4,7 +4,7 @@
  * product around the cycle is 1. Constants that break it describe no possible equilibrium; the
  * derivations would still run, so it is said plainly.
  */
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { nullSpace } from '../exact/linear-algebra.ts';
 import type { Mechanism } from './mechanism.ts';
 import { Rational } from '../exact/rational.ts';

@@ -2,8 +2,8 @@
  * The mechanism as the engine sees it: parsed steps with their net changes, and every species
  * with its declared properties and composition. Built once from a valid record.
  */
-import type { MechanismRecord, Role, SpeciesEntry } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { MechanismRecord, Role, SpeciesEntry } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { parseEquation, type Term } from '../notation/equation.ts';
 import { parseFormula, type Composition } from '../notation/formula.ts';
 import { Rational } from '../exact/rational.ts';
@@ -17,6 +17,8 @@ export interface Step {
   products: Term[];
   reversible: boolean;
   rds: boolean;
+  /** reactant molecules that meet in the forward step (the sum of its reactant coefficients) */
+  molecularity: number;
   times?: number;
   /** net change per species, products minus reactants; zero entries kept out */
   change: Map<string, Rational>;
@@ -59,6 +61,7 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
       products,
       reversible,
       rds: entry.rds === true,
+      molecularity: reactants.reduce((n, t) => n + t.coefficient.toNumber(), 0),
       ...(entry.times !== undefined && { times: entry.times }),
       change: netChange(reactants, products),
     });

@@ -2,7 +2,7 @@
  * Molecularity of elementary steps: the number of particles that meet in the step
  * (IUPAC Gold Book, "molecularity"). 1–2 is ordinary, 3 is rare (common practice), more is not elementary.
  */
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
 import type { Term } from '../notation/equation.ts';
 

@@ -3,8 +3,8 @@
  * concentration^(1−n) time^−1; k_rev the same for the reverse molecularity; K, concentration
  * to the power (particles formed − particles consumed).
  */
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { MechanismRecord } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
 import { molecularity } from './molecularity.ts';
 import { parseQuantity, toCanonical, type Quantity } from '../units/quantity.ts';

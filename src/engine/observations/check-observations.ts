@@ -1,17 +1,18 @@
-/** Judges every observed order of a record against each derived rate law, at its conditions or by its limits. */
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+/**
+ * Judges every observed order of a record against each derived rate law, at its conditions or by
+ * its limits, and reads the resting state of each conserved catalyst at each observation.
+ */
+import type { Observation, Status } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { contradiction, judgeOrder, readObservedOrder, type ObservationCheck, type Prediction } from './judge-order.ts';
-import type { StepConstants } from '../mechanism/step-constants.ts';
 import type { RateLawContext } from '../rate-law/context.ts';
 import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
-import { constantValues, observationValues } from '../rate-law/numeric-values.ts';
+import { observationValues } from '../rate-law/numeric-values.ts';
 import { numericOrderAt } from '../rate-law/numeric-order.ts';
 import { apparentOrder, orderLimitsOf, withAbsent } from '../rate-law/orders.ts';
 import type { OrderRange } from '../rate-law/rate-law.ts';
-import { restingStates } from '../rate-law/resting-state.ts';
+import { restingStates, type RestingState } from '../rate-law/resting-state.ts';
 
-/** Checks each observation; contradictions of the first (primary) rate law become diagnostics. */
 /** Order limits with the species this observation lacks (zero concentration) taken as absent. */
 function limitsAt(derived: DerivedRateLaw, species: string, symbol: string | undefined, values: ReadonlyMap<string, number>): OrderRange | undefined {
   const expression = derived.presented?.expression;
@@ -20,24 +21,39 @@ function limitsAt(derived: DerivedRateLaw, species: string, symbol: string | und
   return orderLimitsOf(withAbsent(expression, absent), [{ species, symbol }]).get(species) ?? derived.orders.get(species);
 }
 
-/** Judges every observed order of a record against each derived rate law. */
+/** What the observations say about each rate law. */
+export interface ObservationJudgement {
+  checks: ObservationCheck[];
+  /** per rate law (same order), the dominant catalyst form at each observation */
+  restingStates: (RestingState & { observation: string })[][];
+  /** contradictions of the first (primary) rate law, and unreadable observations */
+  diagnostics: Diagnostic[];
+}
+
+/** The record fields the judgement reads: its observations, and its status (a favoured record's contradiction is an error). */
+export interface ObservedRecord {
+  observations?: readonly Observation[];
+  status: Status;
+}
+
+/** Judges every observed order of a record against each derived rate law; `given` holds the numeric constants by symbol. */
 export function checkObservations(
-  record: MechanismRecord,
+  record: ObservedRecord,
   context: RateLawContext,
   rateLaws: readonly DerivedRateLaw[],
-  constants: readonly StepConstants[],
+  given: ReadonlyMap<string, number>,
   symbols: readonly { species: string; symbol: string }[],
-): { checks: ObservationCheck[]; diagnostics: Diagnostic[] } {
+): ObservationJudgement {
   const checks: ObservationCheck[] = [];
   const diagnostics: Diagnostic[] = [];
-  const given = constantValues(context.mechanism, constants);
+  const resting = rateLaws.map((): (RestingState & { observation: string })[] => []);
   (record.observations ?? []).forEach((observation, index) => {
     const conditions = observationValues(observation, index, context);
     diagnostics.push(...conditions.diagnostics);
     const values = new Map([...given, ...conditions.values]);
-    for (const derived of rateLaws) {
-      for (const state of restingStates(derived.law.catalystBalances, values)) derived.restingStates.push({ observation: observation.id, ...state });
-    }
+    rateLaws.forEach((derived, lawIndex) => {
+      for (const state of restingStates(derived.law.catalystBalances, values)) resting[lawIndex]!.push({ observation: observation.id, ...state });
+    });
     for (const [species, text] of Object.entries(observation.orders ?? {})) {
       const path = ['observations', index, 'orders', species];
       const observed = readObservedOrder(text);
@@ -65,5 +81,5 @@ export function checkObservations(
       });
     }
   });
-  return { checks, diagnostics };
+  return { checks, restingStates: resting, diagnostics };
 }

@@ -4,8 +4,8 @@
  * observation's conditions, or, where constants are missing, against the range between the
  * limiting orders ("consistent for some constants").
  */
-import type { MechanismRecord, Status } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { MechanismRecord, Status } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { DIMENSIONLESS, sameDimension } from '../units/dimension.ts';
 import { parseQuantity } from '../units/quantity.ts';
 import type { OrderRange, RateLawMethod } from '../rate-law/rate-law.ts';

@@ -5,7 +5,7 @@
  * after the rate-determining step are negligible and left out.
  */
 import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Step } from '../mechanism/mechanism.ts';
 import { Rational } from '../exact/rational.ts';
 import type { Conservation, RateLawContext } from './context.ts';

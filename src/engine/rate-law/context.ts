@@ -4,7 +4,7 @@
  * third bodies, solvents), with the conservation relations among the internal ones: the left null
  * space of their stoichiometric matrix (e.g. [E]_T = [E] + [ES] + [EI]).
  */
-import type { Role } from '../../model/mechanism-record.ts';
+import type { Role } from '../../model/index.ts';
 import { nullSpace, primitiveIntegerVector, rank } from '../exact/linear-algebra.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { extremeRays } from '../exact/positive-kernel.ts';

@@ -2,14 +2,12 @@
  * The rate-law stage of a derivation (DESIGN.md items 4–6): choose the methods, derive each law,
  * read off the orders, judge the observations, and confirm inhibitors by their negative order.
  */
-import type { MechanismRecord, Role } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Approximation, Role } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
-import type { ObservationCheck } from '../observations/judge-order.ts';
-import type { StepConstants } from '../mechanism/step-constants.ts';
+import type { Route } from '../route/route.ts';
 import { rateLawContext, type RateLawContext } from './context.ts';
 import { formatterFor } from './formatter.ts';
-import { checkObservations } from '../observations/check-observations.ts';
 import { orderLimitsOf, orderSymbols, withAbsent } from './orders.ts';
 import type { RationalFunction } from '../exact/index.ts';
 import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
@@ -31,23 +29,18 @@ export interface DerivedRateLaw {
 export interface RateLawStage {
   context: RateLawContext;
   rateLaws: DerivedRateLaw[];
-  observations: ObservationCheck[];
+  /** each species with an order and the concentration symbol it has in the laws */
+  symbols: { species: string; symbol: string }[];
+  /** the route's roles, with binders off the route that slow the rate confirmed as inhibitors */
   roles: Map<string, Role>;
   diagnostics: Diagnostic[];
 }
 
-/** Derives the rate laws the record asks for and checks them against its observations. */
-export function deriveRateLaws(
-  record: MechanismRecord,
-  mechanism: Mechanism,
-  sigma: readonly number[],
-  roles: ReadonlyMap<string, Role>,
-  offRoute: ReadonlySet<string>,
-  constants: readonly StepConstants[],
-  routeOrder: readonly number[] = mechanism.steps.map((s) => s.index),
-): RateLawStage {
+/** Derives the rate laws the record's `approximation` asks for along the route, with their limiting orders. */
+export function deriveRateLaws(approximation: Approximation, mechanism: Mechanism, route: Route): RateLawStage {
+  const { sigma, roles, offRoute } = route;
   const diagnostics: Diagnostic[] = [];
-  const context = rateLawContext(mechanism, sigma, roles, offRoute, routeOrder);
+  const context = rateLawContext(mechanism, sigma, roles, offRoute, route.order);
   const fmt = formatterFor(mechanism);
   const rdsSteps = mechanism.steps.filter((s) => s.rds);
   for (const extra of rdsSteps.slice(1)) {
@@ -57,7 +50,7 @@ export function deriveRateLaws(
   if (rds && (sigma[rds.index] ?? 0) === 0) {
     diagnostics.push(diagnostic('step/rds', 'error', `the rate-determining step ${rds.label} is off the route (σ = 0), so it cannot set the overall rate`, { path: ['steps', rds.index, 'rds'] }));
   }
-  const methods = chooseMethods(record.approximation ?? 'auto', rds !== undefined);
+  const methods = chooseMethods(approximation, rds !== undefined);
   if (methods.includes('rds') && !rds) {
     diagnostics.push(diagnostic('step/rds', 'error', 'approximation: rds needs one step marked rds: true', { path: ['approximation'] }));
   }
@@ -78,9 +71,7 @@ export function deriveRateLaws(
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(concentration(s)));
     rateLaws.push({ law, presented, orders: reportedOrders(presented.expression, symbols, roles), restingStates: [] });
   }
-  const checked = checkObservations(record, context, rateLaws, constants, symbols);
-  diagnostics.push(...checked.diagnostics);
-  return { context, rateLaws, observations: checked.checks, roles: confirmInhibitors(roles, offRoute, rateLaws[0]), diagnostics };
+  return { context, rateLaws, symbols, roles: confirmInhibitors(roles, offRoute, rateLaws[0]), diagnostics };
 }
 
 /**

@@ -4,8 +4,8 @@
  * the observation does not list is taken as 0 (initial rates); a catalyst's listed
  * concentration is its total.
  */
-import type { Observation } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Observation } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { CONCENTRATION, sameDimension } from '../units/dimension.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { parseQuantity, toCanonical } from '../units/quantity.ts';

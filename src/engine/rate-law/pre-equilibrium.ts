@@ -6,7 +6,7 @@
  * catalyst's total is the sum of its pre-equilibrium forms, which gives the saturation denominator.
  */
 import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Step } from '../mechanism/mechanism.ts';
 import { Rational } from '../exact/rational.ts';
 import type { RateLawContext } from './context.ts';

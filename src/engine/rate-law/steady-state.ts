@@ -6,7 +6,7 @@
  * this is the King–Altman result). Otherwise the equations are kept for a numeric solution.
  */
 import { Monomial, Polynomial, RationalFunction, solveLinear } from '../exact/index.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { Rational } from '../exact/rational.ts';
 import type { RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';

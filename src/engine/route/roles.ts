@@ -5,8 +5,8 @@
  * A solvent keeps its stoichiometry but is named as such; a species on both sides of every
  * step it takes part in is a third body. Declared roles are checked against the derived ones.
  */
-import type { Role } from '../../model/mechanism-record.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Role } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { walkRoute } from './walk-route.ts';
 import { netOverRoute } from './overall-equation.ts';

@@ -3,7 +3,7 @@
  * reaction. Given `times` wins; otherwise the route is chosen by the preference order of
  * DESIGN.md item 2, searching supports (sets of steps) and the species each route cancels.
  */
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { Rational } from '../exact/rational.ts';
 import { routeColumns, searchSupports, type Candidate, type Family } from './route-search.ts';
 

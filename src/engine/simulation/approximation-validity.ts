@@ -5,15 +5,14 @@
  * evaluated at the simulated state at 1 % conversion. Errors above the threshold become
  * `approximation/invalid` warnings that say which assumption fails.
  */
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
-import type { Derivation } from '../derive.ts';
-import { diagnostic, type Diagnostic } from '../../model/diagnostic.ts';
+import type { Observation } from '../../model/index.ts';
+import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
 import { solveSteadyStateNumeric } from '../rate-law/steady-state-numeric.ts';
 import { concentration } from '../rate-law/symbols.ts';
 import { explainFailure } from './explain-failure.ts';
 import { simulatedInitialRate } from './initial-rate.ts';
-import { rateProbe, simulationSetup, type SimulationSetup } from './simulation-setup.ts';
+import { rateProbe, simulationSetup, type SimulationBasis, type SimulationSetup } from './simulation-setup.ts';
 
 /** Relative error above which an approximation is reported invalid (10 %, configurable). */
 export const DEFAULT_APPROXIMATION_THRESHOLD = 0.1;
@@ -31,12 +30,17 @@ export interface SimulationCheck {
 }
 
 /** Simulates every observation that has constants and concentrations. */
-export function checkApproximations(record: MechanismRecord, derivation: Derivation, constants: ReadonlyMap<string, number>, threshold = DEFAULT_APPROXIMATION_THRESHOLD): { checks: SimulationCheck[]; diagnostics: Diagnostic[] } {
+export function checkApproximations(
+  observations: readonly Observation[],
+  basis: SimulationBasis,
+  constants: ReadonlyMap<string, number>,
+  threshold = DEFAULT_APPROXIMATION_THRESHOLD,
+): { checks: SimulationCheck[]; diagnostics: Diagnostic[] } {
   const checks: SimulationCheck[] = [];
   const diagnostics: Diagnostic[] = [];
-  (record.observations ?? []).forEach((observation, index) => {
+  observations.forEach((observation, index) => {
     const base = { observation: observation.id, orders: {}, approximationError: {} };
-    const setup = simulationSetup(derivation, constants, observation);
+    const setup = simulationSetup(basis, constants, observation);
     if ('missing' in setup) {
       checks.push({ ...base, status: 'skipped', message: `not simulated: needs ${setup.missing}` });
       return;
@@ -53,15 +57,15 @@ export function checkApproximations(record: MechanismRecord, derivation: Derivat
       );
       return;
     }
-    const check: SimulationCheck = { ...base, status: 'ok', initialRate: result.rate, time: result.time, orders: simulatedOrders(derivation, setup, Object.keys(observation.orders ?? {})) };
-    for (const derived of derivation.rateLaws ?? []) {
+    const check: SimulationCheck = { ...base, status: 'ok', initialRate: result.rate, time: result.time, orders: simulatedOrders(basis, setup, Object.keys(observation.orders ?? {})) };
+    for (const derived of basis.rateLaws) {
       const approx = lawRateAt(derived, setup, result.state, constants);
       if (approx === undefined) continue;
       const error = Math.abs(approx - result.rate) / result.rate;
       check.approximationError[derived.law.method] = Math.round(error * 1e4) / 1e4;
       if (error > threshold) {
         diagnostics.push(
-          diagnostic('approximation/invalid', 'warning', `${describe(derived)} is off by ${(error * 100).toFixed(0)} % at observation ${observation.id}: ${explainFailure(derived, derivation, setup, result.state)}`, {
+          diagnostic('approximation/invalid', 'warning', `${describe(derived)} is off by ${(error * 100).toFixed(0)} % at observation ${observation.id}: ${explainFailure(derived, basis, setup, result.state)}`, {
             path: ['observations', index],
             actual: error,
             expected: `≤ ${threshold}`,
@@ -79,7 +83,7 @@ function describe(derived: DerivedRateLaw): string {
 }
 
 /** Apparent orders by simulation: central log–log slope over starting concentrations × 1.05^±1. */
-function simulatedOrders(derivation: Derivation, setup: SimulationSetup, species: string[]): Record<string, number> {
+function simulatedOrders(basis: SimulationBasis, setup: SimulationSetup, species: string[]): Record<string, number> {
   const out: Record<string, number> = {};
   for (const sp of species) {
     const i = setup.model.species.indexOf(sp);
@@ -88,7 +92,7 @@ function simulatedOrders(derivation: Derivation, setup: SimulationSetup, species
       const y0 = Float64Array.from(setup.y0);
       y0[i] = y0[i]! * f;
       // Each run is read at the same fraction of its own largest extent, as the base run is.
-      const probe = rateProbe(derivation, setup.model.species, y0, setup.held);
+      const probe = rateProbe(basis, setup.model.species, y0, setup.held);
       const r = 'missing' in probe ? undefined : simulatedInitialRate(setup.model, y0, probe);
       return r?.status === 'ok' ? r.rate : Number.NaN;
     });

@@ -7,12 +7,11 @@
  * reaction needs 99 of them). Output times are log-spaced, so fast transients show on a log axis,
  * merged with evenly spaced ones, so a linear axis is smooth too, and start at t = 0.
  */
-import type { MechanismRecord, Observation, Role } from '../../model/mechanism-record.ts';
-import { simulationConstants, type Derivation } from '../derive.ts';
+import type { Observation, Role } from '../../model/index.ts';
 import { integrateStiff } from '../numeric/stiff-integrator.ts';
 import { simulatedInitialRate } from './initial-rate.ts';
 import type { MassActionModel } from './mass-action-system.ts';
-import { simulationSetup } from './simulation-setup.ts';
+import { simulationSetup, type SimulationBasis } from './simulation-setup.ts';
 
 /** Simulated concentrations of every species of one observation over time. */
 export interface ConcentrationSeries {
@@ -50,9 +49,9 @@ const LAST_TIME = 1e12;
 const MAX_DECADES = 9;
 
 /** Simulates one observation from t = 0 until the reaction is ~99 % complete. */
-export function concentrationSeries(derivation: Derivation, constants: ReadonlyMap<string, number>, observation: Observation, options: SeriesOptions = {}): ConcentrationSeries {
+export function concentrationSeries(basis: SimulationBasis, constants: ReadonlyMap<string, number>, observation: Observation, options: SeriesOptions = {}): ConcentrationSeries {
   const base = { observation: observation.id, unit: 'M' as const, times: [], species: [], roles: [], held: [], values: [] };
-  const setup = simulationSetup(derivation, constants, observation);
+  const setup = simulationSetup(basis, constants, observation);
   if ('missing' in setup) return { ...base, status: 'skipped', message: `not simulated: needs ${setup.missing}` };
   const { model, y0, probe } = setup;
   const initial = simulatedInitialRate(model, y0, probe);
@@ -73,13 +72,13 @@ export function concentrationSeries(derivation: Derivation, constants: ReadonlyM
   const times = mergeTimes(logTimes(start, tEnd, options.outputsPerDecade ?? 20), options.linearOutputs ?? 100, tEnd);
   const fine = integrateStiff(model.system, y0, { tEnd, outputTimes: times, ...tolerances });
   if (fine.status !== 'ok') return { ...base, status: 'failed', message: fine.message ?? fine.status };
-  const roles = derivation.roles;
+  const roles = basis.route.roles;
   return {
     ...base,
     status: 'ok',
     times: fine.t,
     species: [...model.species],
-    roles: model.species.map((sp) => roles?.get(sp)),
+    roles: model.species.map((sp) => roles.get(sp)),
     held: model.species.map((sp) => setup.held.has(sp)),
     values: model.species.map((_, i) => fine.y.map((y) => y[i]!)),
     conversion: extent(fine.y[fine.y.length - 1]!) / probe.maxExtent,
@@ -88,13 +87,15 @@ export function concentrationSeries(derivation: Derivation, constants: ReadonlyM
 }
 
 /** The series of the record's first observation that can be simulated (constants and concentrations complete). */
-export function firstObservationSeries(record: MechanismRecord, derivation: Derivation, options: SeriesOptions = {}): ConcentrationSeries | undefined {
-  const mechanism = derivation.mechanism;
-  const observations = record.observations ?? [];
-  if (!mechanism || observations.length === 0) return undefined;
-  const constants = simulationConstants(record, mechanism);
-  const usable = observations.find((o) => !('missing' in simulationSetup(derivation, constants, o))) ?? observations[0]!;
-  return concentrationSeries(derivation, constants, usable, options);
+export function firstObservationSeries(
+  observations: readonly Observation[],
+  basis: SimulationBasis,
+  constants: ReadonlyMap<string, number>,
+  options: SeriesOptions = {},
+): ConcentrationSeries | undefined {
+  if (observations.length === 0) return undefined;
+  const usable = observations.find((o) => !('missing' in simulationSetup(basis, constants, o))) ?? observations[0]!;
+  return concentrationSeries(basis, constants, usable, options);
 }
 
 /** The largest first-order loss rate (|∂f_i/∂y_i|) at any of the states: 1/it is the fastest transient. */

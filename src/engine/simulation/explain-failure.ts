@@ -4,20 +4,18 @@
  * catalyst piling up after the slow step; for the steady state, internal species that are not
  * dilute next to the reactants, or that are still changing.
  */
-import type { Derivation } from '../derive.ts';
 import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
-import type { SimulationSetup } from './simulation-setup.ts';
+import type { SimulationBasis, SimulationSetup } from './simulation-setup.ts';
 
 /** One sentence naming the failing assumption. */
-export function explainFailure(derived: DerivedRateLaw, derivation: Derivation, setup: SimulationSetup, state: Float64Array): string {
-  return derived.law.method === 'rds' ? explainRds(derivation, setup, state) : explainSteadyState(derivation, setup, state);
+export function explainFailure(derived: DerivedRateLaw, basis: SimulationBasis, setup: SimulationSetup, state: Float64Array): string {
+  return derived.law.method === 'rds' ? explainRds(basis, setup, state) : explainSteadyState(basis, setup, state);
 }
 
-function explainRds(derivation: Derivation, setup: SimulationSetup, state: Float64Array): string {
-  const mechanism = derivation.mechanism!;
-  const sigma = derivation.stoichiometricNumbers ?? [];
+function explainRds({ mechanism, route }: SimulationBasis, setup: SimulationSetup, state: Float64Array): string {
+  const sigma = route.sigma;
   const rds = mechanism.steps.find((s) => s.rds)!;
-  const rank = (index: number) => derivation.routeOrder?.[index] ?? index;
+  const rank = (index: number) => route.order[index] ?? index;
   const at = (sp: string) => state[setup.model.species.indexOf(sp)]!;
   const fluxes = setup.model.stepFluxes(state);
   for (const step of mechanism.steps) {
@@ -31,17 +29,17 @@ function explainRds(derivation: Derivation, setup: SimulationSetup, state: Float
     }
   }
   const after = mechanism.steps.filter((s) => rank(s.index) > rank(rds.index)).flatMap((s) => [...s.change.keys()]);
-  const internal = [...(derivation.roles ?? [])].filter(([sp, role]) => role === 'intermediate' && after.includes(sp) && !rds.reactants.some((t) => t.species === sp));
+  const internal = [...route.roles].filter(([sp, role]) => role === 'intermediate' && after.includes(sp) && !rds.reactants.some((t) => t.species === sp));
   const piled = internal.filter(([sp]) => at(sp) > 0).sort(([a], [b]) => at(b) - at(a))[0];
   if (piled) return `species formed after the rate-determining step are not negligible (${piled[0]} builds up to ${at(piled[0]).toExponential(2)} M): step ${rds.label} is not the slowest`;
   return `step ${rds.label} does not control the rate at these constants`;
 }
 
-function explainSteadyState(derivation: Derivation, setup: SimulationSetup, state: Float64Array): string {
-  const roles = derivation.roles ?? new Map();
+function explainSteadyState({ route }: SimulationBasis, setup: SimulationSetup, state: Float64Array): string {
+  const roles = route.roles;
   const species = setup.model.species;
   const internal = species.filter((sp) => roles.get(sp) === 'intermediate' || (roles.get(sp) === 'catalyst' && !setup.held.has(sp)));
-  const reactants = [...(derivation.overall?.reactants.keys() ?? [])].filter((sp) => !setup.held.has(sp));
+  const reactants = [...route.overall.reactants.keys()].filter((sp) => !setup.held.has(sp));
   const bound = internal.filter((sp) => roles.get(sp) === 'intermediate').reduce((s, sp) => s + state[species.indexOf(sp)]!, 0);
   const smallest = Math.min(...reactants.map((sp) => setup.y0[species.indexOf(sp)]!));
   if (smallest > 0 && bound / smallest > 0.05) {

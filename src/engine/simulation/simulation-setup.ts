@@ -3,13 +3,23 @@
  * starting concentrations, which species are held constant, and which product measures the
  * overall rate. Returns a reason instead when something is missing.
  */
-import type { Observation } from '../../model/mechanism-record.ts';
-import type { Derivation } from '../derive.ts';
+import type { Observation } from '../../model/index.ts';
+import type { Mechanism } from '../mechanism/mechanism.ts';
+import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
+import type { Route } from '../route/route.ts';
 import { CONCENTRATION, sameDimension } from '../units/dimension.ts';
 import { parseQuantity, toCanonical } from '../units/quantity.ts';
 import { equilibriumConstant, forwardConstant, reverseConstant } from '../rate-law/symbols.ts';
 import { massActionModel, type MassActionModel } from './mass-action-system.ts';
 import type { RateProbe } from './initial-rate.ts';
+
+/** What a simulation needs from a derivation: the mechanism, its route and the rate laws it tests. */
+export interface SimulationBasis {
+  mechanism: Mechanism;
+  /** the route, with the roles as the rate law confirmed them */
+  route: Route;
+  rateLaws: readonly DerivedRateLaw[];
+}
 
 export interface SimulationSetup {
   model: MassActionModel;
@@ -19,11 +29,9 @@ export interface SimulationSetup {
   held: Set<string>;
 }
 
-/** Builds the simulation of one observation from the derivation and the numeric constants by symbol. */
-export function simulationSetup(derivation: Derivation, constants: ReadonlyMap<string, number>, observation: Observation): SimulationSetup | { missing: string } {
-  const mechanism = derivation.mechanism;
-  const overall = derivation.overall;
-  if (!mechanism || !overall) return { missing: 'the overall equation' };
+/** Builds the simulation of one observation from the mechanism, its route and the numeric constants by symbol. */
+export function simulationSetup(basis: SimulationBasis, constants: ReadonlyMap<string, number>, observation: Observation): SimulationSetup | { missing: string } {
+  const { mechanism } = basis;
   const forward: number[] = [];
   const reverse: number[] = [];
   for (const step of mechanism.steps) {
@@ -49,14 +57,14 @@ export function simulationSetup(derivation: Derivation, constants: ReadonlyMap<s
     y0[i] = toCanonical(q.quantity);
   }
   for (const sp of held) if (y0[model.species.indexOf(sp)] === 0) return { missing: `the concentration of ${sp}, which is held constant` };
-  const probe = rateProbe(derivation, model.species, y0, held);
+  const probe = rateProbe(basis, model.species, y0, held);
   return 'missing' in probe ? probe : { model, y0, probe, held };
 }
 
 /** The product that measures the overall rate, and the largest extent the starting mixture `y0` allows. */
-export function rateProbe(derivation: Derivation, species: string[], y0: Float64Array, held: ReadonlySet<string>): RateProbe | { missing: string } {
-  const overall = derivation.overall!;
-  const steps = derivation.mechanism!.steps;
+export function rateProbe(basis: SimulationBasis, species: string[], y0: Float64Array, held: ReadonlySet<string>): RateProbe | { missing: string } {
+  const overall = basis.route.overall;
+  const steps = basis.mechanism.steps;
   const products = [...overall.products].filter(([sp]) => !held.has(sp));
   products.sort(([a], [b]) => steps.filter((s) => s.change.has(a)).length - steps.filter((s) => s.change.has(b)).length);
   const chosen = products[0];

@@ -1,11 +1,8 @@
 // /api/mechanisms.json: every record's derivation and checks, as `mechatlas check --format json` prints them.
-import { getCollection } from 'astro:content';
-import { catalogueJson, jsonResponse } from '../../site/api-report.ts';
-import type { RecordView } from '../../site/record-view.ts';
+import { atlasRecords } from '../../components/content-entries.ts';
+import { catalogueJson, jsonResponse, type RecordView } from '../../site/index.ts';
 
 /** The catalogue report. */
 export async function GET(): Promise<Response> {
-  const entries = await getCollection('mechanisms');
-  const views = entries.map((e) => e.data as unknown as RecordView).sort((a, b) => a.id.localeCompare(b.id));
-  return jsonResponse(catalogueJson(views));
+  return jsonResponse(catalogueJson(await atlasRecords()));
 }

@@ -3,7 +3,7 @@
  * magnification and role), a label at the end of every curve, moved apart where curves end close
  * together, and a caption under the time axis saying what was simulated and what is not drawn.
  */
-import type { ConcentrationSeries } from '../../engine/simulation/concentration-series.ts';
+import type { ConcentrationSeries } from '../../engine/index.ts';
 import type { PlottedCurve, TimePlotLayout } from './concentration-time-layout.ts';
 import { markerSvg, strokeAttributes } from './curve-style.ts';
 import { coordinate as c, escapeXml } from './svg-text.ts';

@@ -4,12 +4,12 @@
  * frame, and the two axes with their ticks. Species held constant, or constant anyway (a third
  * body), and species absent throughout get no curve; the caption names them.
  */
-import type { Role } from '../../model/mechanism-record.ts';
-import type { ConcentrationSeries } from '../../engine/simulation/concentration-series.ts';
+import type { Role } from '../../model/index.ts';
+import type { ConcentrationSeries } from '../../engine/index.ts';
 import { niceTicks } from './axis-ticks.ts';
 import { concentrationUnit, magnificationExponent, type ConcentrationUnit } from './concentration-scale.ts';
 import { curveStyle, type CurveStyle } from './curve-style.ts';
-import { linearTicks, logTicks, plainNumber, timeUnit, type AxisTicks, type Tick } from './time-axis.ts';
+import { linearTicks, logTicks, tickLabel, timeUnit, type AxisTicks, type Tick } from './time-axis.ts';
 
 /** One species drawn as a curve. */
 export interface PlottedCurve {
@@ -81,7 +81,7 @@ export function layoutTimePlot(series: ConcentrationSeries, chosen: ReturnType<t
   const step = shown.length > 1 ? shown[1]! - shown[0]! : tallest * unit.perMolar || 1;
   // A little headroom, so that no curve runs along the top of the frame.
   const topValue = Math.max(step, Math.ceil((1.04 * tallest * unit.perMolar) / step - 1e-9) * step);
-  const ticks = niceTicks(0, topValue, 5).map((v) => ({ value: v / unit.perMolar, label: plainNumber(v, step) }));
+  const ticks = niceTicks(0, topValue, 5).map((v) => ({ value: v / unit.perMolar, label: tickLabel(v, step) }));
   const y = (molar: number) => frame.bottom - ((molar * unit.perMolar) / topValue) * (frame.bottom - frame.top);
   return {
     frame,

@@ -3,7 +3,7 @@
  * time axis. Black only, each curve with its own dash pattern and markers and named both in the
  * legend and at its end, so it reads in black-and-white print; pure and deterministic.
  */
-import type { ConcentrationSeries } from '../../engine/simulation/concentration-series.ts';
+import type { ConcentrationSeries } from '../../engine/index.ts';
 import { captionLines, curveName, endLabels, legend } from './concentration-time-labels.ts';
 import { layoutTimePlot, selectCurves, type PlottedCurve, type TimePlotLayout } from './concentration-time-layout.ts';
 import { markerSvg, strokeAttributes } from './curve-style.ts';

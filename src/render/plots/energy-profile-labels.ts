@@ -3,8 +3,8 @@
  * measured from the minimum before it, and the overall change of one turnover. Labels carry a white
  * halo so they stay legible where they cross a line, in print as on screen.
  */
-import type { EnergyBasis } from '../../engine/energy/conditions.ts';
-import type { EnergyProfile } from '../../engine/energy/profile.ts';
+import type { EnergyBasis } from '../../engine/index.ts';
+import type { EnergyProfile } from '../../engine/index.ts';
 import type { ProfileLayout } from './energy-profile-layout.ts';
 import { coordinate as c, escapeXml, signedValue, speciesTerms, wrapTerms } from './svg-text.ts';
 

@@ -3,7 +3,7 @@
  * reaction coordinate with a transition state halfway between; heights come from the energies,
  * or, for a schematic profile, from a fixed pattern in which the declared rds hump is the tallest.
  */
-import type { EnergyProfile, ProfileState } from '../../engine/energy/profile.ts';
+import type { EnergyProfile, ProfileState } from '../../engine/index.ts';
 import { niceTicks } from './axis-ticks.ts';
 
 /** A state with its position on the page. */

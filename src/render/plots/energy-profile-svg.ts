@@ -4,8 +4,8 @@
  * Black and grey only, told apart by line style, so it prints in black and white; pure and
  * deterministic, so pages and tests can compare it byte for byte.
  */
-import type { EnergyBasis } from '../../engine/energy/conditions.ts';
-import type { EnergyProfile } from '../../engine/energy/profile.ts';
+import type { EnergyBasis } from '../../engine/index.ts';
+import type { EnergyProfile } from '../../engine/index.ts';
 import { layoutProfile, type ProfileLayout } from './energy-profile-layout.ts';
 import { barrierArrows, overallChange, stateLabels, stepName, type SpanMarks } from './energy-profile-labels.ts';
 import { coordinate as c, escapeXml, signedValue } from './svg-text.ts';

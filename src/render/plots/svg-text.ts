@@ -2,6 +2,7 @@
  * Small text helpers shared by the SVG plots: escaping user text, printing numbers the same way
  * every time (so output is byte-for-byte deterministic), and wrapping species lists.
  */
+export { signedValue, speciesTerms } from '../words/index.ts';
 
 /** Escapes text for an SVG text node or attribute value: & < > " '. */
 export function escapeXml(text: string): string {
@@ -12,18 +13,6 @@ export function escapeXml(text: string): string {
 export function coordinate(x: number): string {
   const r = Math.round(x * 10) / 10;
   return String(r === 0 ? 0 : r);
-}
-
-/** A value with fixed decimals and a true minus sign (U+2212), as typeset; −0.0 prints as 0.0. */
-export function signedValue(x: number, decimals = 1): string {
-  const text = x.toFixed(decimals);
-  if (Number(text) === 0) return (0).toFixed(decimals);
-  return text.startsWith('-') ? `\u2212${text.slice(1)}` : text;
-}
-
-/** Terms of a species list, `2 H2O2`, `I-`, in the order given. */
-export function speciesTerms(species: Readonly<Record<string, number>>): string[] {
-  return Object.entries(species).map(([sp, n]) => (n === 1 ? sp : `${+n.toPrecision(6)} ${sp}`));
 }
 
 /**

@@ -57,11 +57,11 @@ export function timeUnit(end: number): { unit: 's' | 'min' | 'h' | 'd'; seconds:
 export function linearTicks(end: number, target = 6): AxisTicks {
   const values = niceTicks(0, end, target);
   const step = values.length > 1 ? values[1]! - values[0]! : 1;
-  return { major: values.map((value) => ({ value, label: plainNumber(value, step) })), minor: [] };
+  return { major: values.map((value) => ({ value, label: tickLabel(value, step) })), minor: [] };
 }
 
 /** A tick value with as many decimals as the tick spacing needs, never in exponent form. */
-export function plainNumber(value: number, step: number): string {
+export function tickLabel(value: number, step: number): string {
   const decimals = step >= 1 ? 0 : Math.min(6, Math.ceil(-Math.log10(step) - 1e-9));
   return value.toFixed(decimals);
 }

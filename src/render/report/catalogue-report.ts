@@ -1,20 +1,18 @@
 /** The whole JSON report: tool, summary and one entry per record. */
-import { countBySeverity, type Diagnostic } from '../../model/diagnostic.ts';
-import { recordReport, type RecordInput, type RecordReport } from './record-report.ts';
-
-export interface CatalogueReport {
-  tool: { name: 'mechatlas'; version: string };
-  summary: { records: number; errors: number; warnings: number; notes: number };
-  records: RecordReport[];
-}
+import { countBySeverity, type CatalogueReport, type RecordReport } from '../../model/index.ts';
+import { recordReport, type RecordInput } from './record-report.ts';
 
 /** Builds the report of a set of checked records. */
 export function catalogueReport(inputs: readonly RecordInput[], version: string): CatalogueReport {
-  const all: Diagnostic[] = inputs.flatMap((r) => [...r.diagnostics]);
-  const counts = countBySeverity(all);
+  return reportOf(inputs.map(recordReport), version);
+}
+
+/** The report around record entries already built (the site's, whose files are named as the catalogue names them). */
+export function reportOf(records: readonly RecordReport[], version: string): CatalogueReport {
+  const counts = countBySeverity(records.flatMap((r) => r.diagnostics));
   return {
     tool: { name: 'mechatlas', version },
-    summary: { records: inputs.length, errors: counts.error, warnings: counts.warning, notes: counts.info },
-    records: inputs.map(recordReport),
+    summary: { records: records.length, errors: counts.error, warnings: counts.warning, notes: counts.info },
+    records: [...records],
   };
 }

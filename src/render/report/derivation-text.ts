@@ -1,13 +1,21 @@
 /** A person's view of one derivation: steps with σ, the overall equation, roles, rate laws, energies and simulations. */
-import type { CheckedRecord } from '../../catalogue/check-records.ts';
+import type { Derivation } from '../../engine/index.ts';
+import type { MechanismRecord } from '../../model/index.ts';
+import { roleWords } from '../words/index.ts';
 import { energyLines } from './energy-text.ts';
 import { rateLawLines } from './rate-law-text.ts';
 import { simulationLines } from './simulation-text.ts';
 
-/** Renders the derivation of one checked record as plain text. */
-export function derivationText(checked: CheckedRecord): string {
-  const { loaded, derivation } = checked;
-  const record = loaded.record;
+/** What the text is written from: the record file, and the record and its derivation where it could be read. */
+export interface DerivedRecord {
+  file: string;
+  record?: MechanismRecord;
+  derivation?: Derivation;
+}
+
+/** Renders the derivation of one record as plain text. */
+export function derivationText(checked: DerivedRecord): string {
+  const { record, derivation } = checked;
   if (!record) return `${checked.file}: the record could not be read; see the problems below.\n`;
   const lines = [`${record.title}`, `${checked.file} · system ${record.system} · ${record.status}`, ''];
   const mechanism = derivation?.mechanism;
@@ -29,10 +37,10 @@ export function derivationText(checked: CheckedRecord): string {
     lines.push('', 'Roles:');
     for (const [sp, role] of derivation.roles) {
       const extra = derivation.buffered.includes(sp) ? ', buffered' : '';
-      lines.push(`  ${sp.padEnd(12)} ${role.replace('_', ' ')}${extra}`);
+      lines.push(`  ${sp.padEnd(12)} ${roleWords(role)}${extra}`);
     }
   }
-  lines.push(...rateLawLines(derivation), ...energyLines(derivation), ...simulationLines(record, derivation));
+  lines.push(...rateLawLines(derivation), ...energyLines(derivation), ...simulationLines(derivation));
   lines.push('', 'Derived rate laws are models; decisions on scale-up, thermal hazards or exposure rest with', 'calorimetry, local codes and licensed practice.');
   return lines.join('\n') + '\n';
 }

@@ -3,10 +3,8 @@
  * and the energetic span result — TOF-determining transition state and intermediate, δE, the
  * turnover frequency both ways, the degrees of TOF control, and whether the declared rds agrees.
  */
-import type { Derivation } from '../../engine/derive.ts';
-import type { EnergyResult } from '../../engine/energy/index.ts';
-import { speciesTerms } from '../plots/svg-text.ts';
-import { formatNumber } from './simulation-text.ts';
+import type { Derivation, EnergyResult } from '../../engine/index.ts';
+import { plainNumber, speciesTerms } from '../words/index.ts';
 
 const BASIS_NAME = { G: 'Gibbs energy', H: 'enthalpy', E: 'electronic energy' } as const;
 
@@ -43,7 +41,7 @@ function spanLines(energy: EnergyResult, derivation: Derivation): string[] {
     `  δE = ${kj(energy.span)} kJ/mol${(energy.tdts_state ?? 0) <= (energy.tdi_state ?? 0) ? ' (the TDTS comes before the TDI, so Δr' + energy.basis + ' is added)' : ''}`,
   ];
   if (energy.tof_per_s !== undefined && energy.tof_span_per_s !== undefined) {
-    lines.push(`  TOF = ${formatNumber(energy.tof_per_s)} s⁻¹ from the full expression; ${formatNumber(energy.tof_span_per_s)} s⁻¹ from δE alone`);
+    lines.push(`  TOF = ${plainNumber(energy.tof_per_s)} s⁻¹ from the full expression; ${plainNumber(energy.tof_span_per_s)} s⁻¹ from δE alone`);
   } else {
     lines.push('  TOF: needs Gibbs energies');
   }

@@ -1,5 +1,5 @@
 /** The markdown reporter, for a pull-request comment: a summary, then each record's findings. */
-import type { CatalogueReport } from './catalogue-report.ts';
+import type { CatalogueReport } from '../../model/index.ts';
 import { byPosition, summaryLine } from './text.ts';
 
 const MARK: Record<string, string> = { error: '✗ error', warning: '⚠ warning', info: 'ℹ note' };

@@ -1,14 +1,12 @@
 /** A person's view of the derived rate laws: each derivation step, the orders, the observations. */
-import type { Derivation } from '../../engine/derive.ts';
-import type { DerivedRateLaw } from '../../engine/rate-law/derive-rate-laws.ts';
-
-const METHOD_NAME = { rds: 'rate-determining step with fast pre-equilibria', steady_state: 'steady-state approximation' } as const;
+import type { Derivation, DerivedRateLaw } from '../../engine/index.ts';
+import { methodName } from '../words/index.ts';
 
 /** Renders every rate law of a derivation as plain text lines. */
 export function rateLawLines(derivation: Derivation): string[] {
   const lines: string[] = [];
   for (const derived of derivation.rateLaws ?? []) {
-    lines.push('', `Rate law — ${METHOD_NAME[derived.law.method]}:`);
+    lines.push('', `Rate law — ${methodName(derived.law.method)}:`);
     for (const step of derived.law.trace) lines.push(`  · ${step.say}:`, `      ${step.text}`);
     for (const step of derived.presented?.trace ?? []) lines.push(`  · ${step.say}:`, `      ${step.text}`);
     if (derived.presented) {

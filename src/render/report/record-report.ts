@@ -2,96 +2,8 @@
  * The JSON report of one record (DESIGN.md "Contracts"): snake_case keys, additive only.
  * Pure: built from a loaded record and its derivation; the CLI and the site both use it.
  */
-import type { Diagnostic } from '../../model/diagnostic.ts';
-import type { Derivation } from '../../engine/derive.ts';
-import { formatText, type Polynomial } from '../../engine/exact/index.ts';
-import type { ObservationCheck } from '../../engine/observations/judge-order.ts';
-import type { DerivedRateLaw } from '../../engine/rate-law/derive-rate-laws.ts';
-import type { Rational } from '../../engine/exact/rational.ts';
-import type { SimulationCheck } from '../../engine/simulation/approximation-validity.ts';
-import type { EnergyResult } from '../../engine/energy/index.ts';
-
-export interface DiagnosticJson {
-  rule: string;
-  severity: string;
-  message: string;
-  file?: string;
-  line?: number;
-  column?: number;
-  end_line?: number;
-  end_column?: number;
-  note?: string;
-}
-
-export interface RecordReport {
-  id: string;
-  file: string;
-  title?: string;
-  system?: string;
-  status?: string;
-  overall?: { reactants: Record<string, number | string>; products: Record<string, number | string>; catalysts: string[]; text: string };
-  stoichiometric_numbers?: number[];
-  stoichiometric_numbers_source?: 'given' | 'derived';
-  roles?: Record<string, string>;
-  buffered?: string[];
-  rate_laws?: RateLawJson[];
-  observations?: ObservationJson[];
-  simulation?: SimulationJson[];
-  /** the energy profile and energetic span, where every route step records its energies */
-  energy?: EnergyResult;
-  /** labels of steps whose rate constants come from their energies (Eyring) */
-  constants_from_energies?: string[];
-  diagnostics: DiagnosticJson[];
-}
-
-export interface SimulationJson {
-  observation: string;
-  status: string;
-  message?: string;
-  /** rate of the overall reaction at 1 % conversion, M s^-1 */
-  initial_rate?: number;
-  time_s?: number;
-  orders: Record<string, number>;
-  approximation_error: Record<string, number>;
-}
-
-export interface RateLawJson {
-  method: string;
-  /** plain text and LaTeX of the rate of the overall reaction; absent when solved only numerically */
-  text?: string;
-  latex?: string;
-  grouped?: { name: string; value_text: string; value_latex: string; text: string; latex: string };
-  /** the rate law as data: terms of numerator and denominator, each a coefficient and symbol exponents */
-  structure?: { numerator: TermJson[]; denominator: TermJson[] };
-  /** limits of the apparent order as [X] → 0 (low) and [X] → ∞ (high) */
-  orders: Record<string, { low: number | string; high: number | string }>;
-  /** solvents whose constant concentration is absorbed into the constants */
-  absorbed?: string[];
-  /** the conserved catalysts' forms, for the resting state */
-  catalyst_balances?: { catalyst: string; total: string; forms: { species: string; fraction: string; fraction_latex: string }[] }[];
-  /** the dominant catalyst form at each observation's conditions */
-  resting_states?: { observation: string; catalyst: string; species: string; fraction: number }[];
-  numeric_only?: boolean;
-  derivation: { say: string; text: string; latex: string }[];
-}
-
-export interface TermJson {
-  coefficient: number | string;
-  /** symbol → exponent, e.g. {"k_2": 1, "[O3]": 2, "[O2]": "1/2"} */
-  factors: Record<string, number | string>;
-}
-
-export interface ObservationJson {
-  id: string;
-  species: string;
-  method: string;
-  observed: number;
-  tolerance: number;
-  predicted?: number;
-  range?: [number, number];
-  basis: string;
-  status: string;
-}
+import type { Derivation, DerivedRateLaw, ObservationCheck, Polynomial, Rational, SimulationCheck } from '../../engine/index.ts';
+import type { Diagnostic, DiagnosticJson, ObservationJson, RateLawJson, RecordReport, SimulationJson, TermJson } from '../../model/index.ts';
 
 export interface RecordInput {
   id: string;
@@ -168,7 +80,8 @@ function termsJson(p: Polynomial): TermJson[] {
   return p.terms.map((t) => ({ coefficient: t.coefficient.toJSON(), factors: Object.fromEntries(t.monomial.factors.map(([symbol, e]) => [symbol, e.toJSON()])) }));
 }
 
-function observationJson(check: ObservationCheck): ObservationJson {
+/** An observation check in the report's shape. */
+export function observationJson(check: ObservationCheck): ObservationJson {
   const out: ObservationJson = { id: check.observation, species: check.species, method: check.method, observed: check.observed, tolerance: check.tolerance, basis: check.basis, status: check.status };
   if (check.predicted !== undefined) out.predicted = check.predicted;
   if (check.range) out.range = check.range;

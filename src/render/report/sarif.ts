@@ -1,6 +1,6 @@
 /** The SARIF 2.1.0 reporter (OASIS), for code-scanning views in pull requests. */
-import { RULE_IDS } from '../../model/diagnostic.ts';
-import type { CatalogueReport } from './catalogue-report.ts';
+import { RULE_IDS } from '../../model/index.ts';
+import type { CatalogueReport } from '../../model/index.ts';
 
 const LEVEL: Record<string, string> = { error: 'error', warning: 'warning', info: 'note' };
 

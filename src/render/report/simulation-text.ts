@@ -3,24 +3,18 @@
  * for each observation the simulated initial rate and when it was read, the apparent orders by
  * simulation, each rate law's relative error, and why an approximation fails where it does.
  */
-import { simulationConstants, type Derivation } from '../../engine/derive.ts';
-import type { Mechanism } from '../../engine/mechanism/mechanism.ts';
-import { forwardConstant, reverseConstant } from '../../engine/rate-law/symbols.ts';
-import { DEFAULT_APPROXIMATION_THRESHOLD } from '../../engine/simulation/approximation-validity.ts';
-import { CONVERSION_FOR_INITIAL_RATE } from '../../engine/simulation/initial-rate.ts';
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
+import { CONVERSION_FOR_INITIAL_RATE, DEFAULT_APPROXIMATION_THRESHOLD, forwardConstant, reverseConstant, type Derivation, type Mechanism } from '../../engine/index.ts';
+import { methodLaw, percentText, plainNumber, rateConstantUnit } from '../words/index.ts';
 
 const WIDTH = 100;
-const LAW_NAME = { rds: 'rate-determining-step law', steady_state: 'steady-state law' } as const;
-const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '1': '¹', '2': '²', '3': '³', '4': '⁴' };
 
 /** Renders the simulation checks of a derivation as plain text lines. */
-export function simulationLines(record: MechanismRecord, derivation: Derivation): string[] {
+export function simulationLines(derivation: Derivation): string[] {
   const checks = derivation.simulation ?? [];
   const mechanism = derivation.mechanism;
   if (checks.length === 0 || !mechanism) return [];
   const lines = ['', `Simulation (full mass-action kinetics; the initial rate is read at ${CONVERSION_FOR_INITIAL_RATE * 100} % conversion):`];
-  lines.push(...wrap(['rate constants:', ...constantList(record, mechanism)], '  ', '    '));
+  lines.push(...wrap(['rate constants:', ...constantList(mechanism, derivation.constants ?? new Map())], '  ', '    '));
   const fromEnergies = derivation.constantsFromEnergies ?? [];
   if (fromEnergies.length > 0) lines.push(...wrap(words(`from the step energies by the Eyring equation: step${fromEnergies.length > 1 ? 's' : ''} ${fromEnergies.join(', ')}`), '  ', '    '));
   checks.forEach((check, index) => {
@@ -29,12 +23,12 @@ export function simulationLines(record: MechanismRecord, derivation: Derivation)
       lines.push(...wrap(words(check.message ?? check.status), '    ', '      '));
       return;
     }
-    lines.push(`    initial rate ${formatNumber(check.initialRate!)} M s⁻¹, read at t = ${formatNumber(check.time!)} s`);
+    lines.push(`    initial rate ${plainNumber(check.initialRate!)} M s⁻¹, read at t = ${plainNumber(check.time!)} s`);
     const orders = Object.entries(check.orders).map(([sp, o]) => `${sp} ${o.toFixed(3)}`);
     if (orders.length > 0) lines.push(`    orders by simulation: ${orders.join(', ')}`);
     for (const [method, error] of Object.entries(check.approximationError)) {
       const verdict = error > DEFAULT_APPROXIMATION_THRESHOLD ? 'beyond' : 'within';
-      lines.push(`    ${LAW_NAME[method as keyof typeof LAW_NAME]}: off by ${percent(error)} (${verdict} ${percent(DEFAULT_APPROXIMATION_THRESHOLD)})`);
+      lines.push(`    ${methodLaw(method)}: off by ${percentText(error)} (${verdict} ${percentText(DEFAULT_APPROXIMATION_THRESHOLD)})`);
     }
     const invalid = derivation.diagnostics.filter((d) => d.rule === 'approximation/invalid' && d.path?.[0] === 'observations' && d.path[1] === index);
     for (const d of invalid) lines.push(...wrap(words(`approximation/invalid: ${d.message}`), '    ', '      '));
@@ -43,39 +37,16 @@ export function simulationLines(record: MechanismRecord, derivation: Derivation)
 }
 
 /** k and k_rev of every step, with units: M^(1−n) s⁻¹ for a step of molecularity n. */
-function constantList(record: MechanismRecord, mechanism: Mechanism): string[] {
-  const values = simulationConstants(record, mechanism);
+function constantList(mechanism: Mechanism, values: ReadonlyMap<string, number>): string[] {
   const parts: string[] = [];
   for (const step of mechanism.steps) {
     const order = (side: typeof step.reactants) => side.reduce((n, t) => n + t.coefficient.toNumber(), 0);
     const k = values.get(forwardConstant(step.label));
     const kRev = values.get(reverseConstant(step.label));
-    parts.push(`${forwardConstant(step.label)} = ${k === undefined ? '?' : `${formatNumber(k)} ${rateUnit(order(step.reactants))}`}`);
-    if (step.reversible) parts.push(`${reverseConstant(step.label)} = ${kRev === undefined ? '?' : `${formatNumber(kRev)} ${rateUnit(order(step.products))}`}`);
+    parts.push(`${forwardConstant(step.label)} = ${k === undefined ? '?' : `${plainNumber(k)} ${rateConstantUnit(order(step.reactants))}`}`);
+    if (step.reversible) parts.push(`${reverseConstant(step.label)} = ${kRev === undefined ? '?' : `${plainNumber(kRev)} ${rateConstantUnit(order(step.products))}`}`);
   }
   return parts.map((p, i) => (i < parts.length - 1 ? `${p};` : p));
-}
-
-/** M^(1−n) s⁻¹ written with superscripts: s⁻¹, M⁻¹ s⁻¹, M s⁻¹. */
-export function rateUnit(molecularity: number): string {
-  const power = 1 - molecularity;
-  if (power === 0) return 's⁻¹';
-  const exponent = power === 1 ? '' : String(power).replace(/[-0-9]/g, (d) => SUPERSCRIPT[d] ?? d);
-  return `M${exponent} s⁻¹`;
-}
-
-/** Three significant figures; exponent form outside 0.001–10 000 (`1.23e-5`). */
-export function formatNumber(x: number): string {
-  if (x === 0 || !Number.isFinite(x)) return String(x);
-  if (Math.abs(x) >= 1e-3 && Math.abs(x) < 1e4) return String(Number(x.toPrecision(3)));
-  const [mantissa, exponent] = x.toExponential(2).split('e');
-  return `${Number(mantissa)}e${Number(exponent)}`;
-}
-
-function percent(x: number): string {
-  const p = x * 100;
-  if (p < 0.01) return '< 0.01 %';
-  return `${p < 1 ? p.toFixed(2) : p < 10 ? p.toFixed(1) : p.toFixed(0)} %`;
 }
 
 function words(text: string): string[] {

@@ -1,6 +1,6 @@
 /** The text reporter: one row per diagnostic, sorted by file, line and column, then a summary line. */
-import type { CatalogueReport } from './catalogue-report.ts';
-import type { DiagnosticJson } from './record-report.ts';
+import type { CatalogueReport } from '../../model/index.ts';
+import type { DiagnosticJson } from '../../model/index.ts';
 
 /** Renders the report for a terminal. */
 export function textReport(report: CatalogueReport): string {

@@ -5,17 +5,12 @@
  * every step a reaction whose kinetic law (in extent per time: the compartment size times the
  * mass-action rate) is written in MathML.
  */
-import type { Derivation } from '../../engine/derive.ts';
-import { CONCENTRATION, sameDimension } from '../../engine/units/dimension.ts';
-import type { Step } from '../../engine/mechanism/mechanism.ts';
-import { parseQuantity, toCanonical } from '../../engine/units/quantity.ts';
-import type { MechanismRecord } from '../../model/mechanism-record.ts';
+import { CONCENTRATION, parseQuantity, sameDimension, toCanonical, type Mechanism, type Step } from '../../engine/index.ts';
+import type { MechanismRecord } from '../../model/index.ts';
 import { sbmlIds } from './sbml-ids.ts';
 
 /** The SBML document as a string; constants given or from energies, by symbol (k_1, k_-1). */
-export function sbmlDocument(id: string, record: MechanismRecord, derivation: Derivation, constants: ReadonlyMap<string, number>): string {
-  const mechanism = derivation.mechanism;
-  if (!mechanism) return '';
+export function sbmlDocument(id: string, record: MechanismRecord, mechanism: Mechanism, constants: ReadonlyMap<string, number>): string {
   const ids = sbmlIds([...mechanism.species.keys()]);
   const start = startingConcentrations(record, [...mechanism.species.keys()]);
   const species = [...mechanism.species.values()].map((s) => {

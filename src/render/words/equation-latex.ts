@@ -4,9 +4,9 @@
  * arrow (the text is read by the engine's own parser, so the page shows exactly what was
  * derived); the overall equation gets its catalysts over the arrow.
  */
-import { parseEquation, type Term } from '../../engine/notation/equation.ts';
-import { Rational } from '../../engine/exact/rational.ts';
-import { speciesLatex } from '../../engine/notation/species-latex.ts';
+import { parseEquation, type Term } from '../../engine/index.ts';
+import { Rational } from '../../engine/index.ts';
+import { speciesLatex } from '../../engine/index.ts';
 
 /** `2 NO + O2 -> 2 NO2` → `2\,\mathrm{NO} + \mathrm{O_{2}} \rightarrow 2\,\mathrm{NO_{2}}`; undefined when it does not parse. */
 export function equationLatex(equation: string): string | undefined {
@@ -26,4 +26,10 @@ export function overallLatex(reactants: ReadonlyMap<string, Rational>, products:
 function sideLatex(terms: readonly Pick<Term, 'species' | 'coefficient'>[]): string {
   if (terms.length === 0) return '\\varnothing';
   return terms.map((t) => `${t.coefficient.equals(Rational.ONE) ? '' : `${t.coefficient.toString()}\\,`}${speciesLatex(t.species)}`).join(' + ');
+}
+
+/** The LaTeX of a grouped constant's name (`k_obs` → `k_\mathrm{obs}`). */
+export function constantNameLatex(name: string): string {
+  const m = /^([A-Za-z])_([A-Za-z0-9]+)$/.exec(name);
+  return m ? `${m[1]}_\\mathrm{${m[2]}}` : `\\mathrm{${name.replace(/[^A-Za-z0-9]/g, '')}}`;
 }

@@ -12,7 +12,8 @@ import { loadRecordSource } from '../../../src/records/index.ts';
 function energyOf(yaml: string, id = 'svg-case') {
   const loaded = loadRecordSource(`${id}.yaml`, yaml);
   if (!loaded.record) throw new Error(JSON.stringify(loaded.diagnostics));
-  const { energy } = energyAnalysis(loaded.record, deriveMechanism(loaded.record));
+  const derivation = deriveMechanism(loaded.record);
+  const { energy } = energyAnalysis(loaded.record, derivation.mechanism!, derivation.route!);
   if (!energy) throw new Error('no energy result');
   return energy;
 }

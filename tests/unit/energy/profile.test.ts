@@ -10,7 +10,7 @@ function analyse(body: string, notation = 'labels') {
   const loaded = loadRecordSource('profile.yaml', yaml);
   if (!loaded.record) throw new Error(JSON.stringify(loaded.diagnostics));
   const derivation = deriveMechanism(loaded.record);
-  return { derivation, ...energyAnalysis(loaded.record, derivation) };
+  return { derivation, ...energyAnalysis(loaded.record, derivation.mechanism!, derivation.route!) };
 }
 
 const summary = (states: { kind: string; energy?: number; species: Record<string, number>; step?: string }[]) =>
@@ -55,6 +55,29 @@ steps:
       ['min', -56, { Cat: 1, P: 1 }],
     ]);
     expect(energy).toMatchObject({ kind: 'cycle', carriers: ['Cat'], overall_change: -56, rds_step: 'ar' });
+  });
+
+  it('follows the route from the starting materials when the cycle is written with its steps swapped', () => {
+    // The same cycle as above with the regeneration step written first. The turnover still starts
+    // where the catalyst takes up A (route order), not at the first line of the record.
+    const { energy, derivation } = analyse(`species:
+  Cat: { role: catalyst }
+steps:
+  - { equation: CatA + B -> Cat + P, label: ar, rds: true, energy: { barrier: 80 kJ/mol, change: -50 kJ/mol } }
+  - { equation: Cat + A <=> CatA, label: bind, energy: { barrier: 45 kJ/mol, change: -6 kJ/mol } }
+`);
+    expect(derivation.routeOrder).toEqual([1, 0]);
+    // By hand, as above: 0; +45; −6; −6+80 = 74; −56.
+    expect(summary(energy!.states)).toEqual([
+      ['min', 0, { Cat: 1, A: 1, B: 1 }],
+      ['ts bind', 45, { Cat: 1, A: 1, B: 1 }],
+      ['min', -6, { B: 1, CatA: 1 }],
+      ['ts ar', 74, { B: 1, CatA: 1 }],
+      ['min', -56, { Cat: 1, P: 1 }],
+    ]);
+    // Energetic span by hand: TDTS ‡ar at 74, TDI the adduct at −6 before it, δE = 80 kJ/mol.
+    expect(energy).toMatchObject({ kind: 'cycle', carriers: ['Cat'], overall_change: -56, tdts_step: 'ar', tdi_state: 1, span: 80 });
+    expect(derivation.diagnostics.filter((d) => d.rule.startsWith('energy/'))).toEqual([]);
   });
 
   it('needs two NO2 at the start of NO2 + CO, though only one is consumed overall', () => {
@@ -127,8 +150,10 @@ species:
   });
 
   it('returns nothing without a route', () => {
-    const { energy, diagnostics } = analyse(`steps:\n  - equation: A <=> B\n  - equation: B <=> A\n`);
-    expect(energy).toBeUndefined();
-    expect(diagnostics).toEqual([]);
+    const loaded = loadRecordSource('profile.yaml', `title: t\nsystem: s\nstatus: proposed\nnotation: labels\nsteps:\n  - equation: A <=> B\n  - equation: B <=> A\n`);
+    const derivation = deriveMechanism(loaded.record!);
+    expect(derivation.route).toBeUndefined();
+    expect(derivation.energy).toBeUndefined();
+    expect(derivation.diagnostics.filter((d) => d.rule.startsWith('energy/'))).toEqual([]);
   });
 });

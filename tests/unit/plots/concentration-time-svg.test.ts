@@ -5,7 +5,7 @@
  */
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { deriveMechanism } from '../../../src/engine/derive.ts';
+import { deriveMechanism, simulationBasis } from '../../../src/engine/derive.ts';
 import { concentrationTimeSvg } from '../../../src/render/plots/concentration-time-svg.ts';
 import { firstObservationSeries, type ConcentrationSeries } from '../../../src/engine/simulation/concentration-series.ts';
 import type { Role } from '../../../src/model/mechanism-record.ts';
@@ -108,7 +108,8 @@ describe('concentration–time SVG', () => {
   it('draws the demo KX-7 ternary-adduct simulation, intermediates magnified', () => {
     const id = 'kx7-hydroarylation-ternary-adduct';
     const loaded = loadRecordSource(`${id}.yaml`, readFileSync(`content/mechanisms/${id}.yaml`, 'utf8'));
-    const series = firstObservationSeries(loaded.record!, deriveMechanism(loaded.record!))!;
+    const derivation = deriveMechanism(loaded.record!);
+    const series = firstObservationSeries(loaded.record!.observations!, simulationBasis(derivation)!, derivation.constants!)!;
     const svg = concentrationTimeSvg(series, { logTime: true, idPrefix: id });
     save('concentration-time-kx7-ternary-log.svg', svg);
     save('concentration-time-kx7-ternary-linear.svg', concentrationTimeSvg(series, { idPrefix: id }));

@@ -1,11 +1,10 @@
 // /m/<id>/<id>.yaml: the record's source text exactly as it is in the repository.
 import type { GetStaticPaths } from 'astro';
-import { getCollection } from 'astro:content';
-import type { RecordView } from '../../../site/record-view.ts';
+import { atlasRecords } from '../../../components/content-entries.ts';
+import { type RecordView } from '../../../site/index.ts';
 
 export const getStaticPaths = (async () => {
-  const entries = await getCollection('mechanisms');
-  return entries.map((e) => ({ params: { id: e.id, file: e.id }, props: { source: (e.data as unknown as RecordView).source } }));
+  return (await atlasRecords()).map((view) => ({ params: { id: view.id, file: view.id }, props: { source: view.source } }));
 }) satisfies GetStaticPaths;
 
 /** The YAML source. */

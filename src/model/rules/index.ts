@@ -1,0 +1,63 @@
+/**
+ * Every rule of the catalogue, in the order they were introduced. Each file holds one rule's id,
+ * its summary and, in its doc comment, what it checks and why.
+ */
+import { approximationInvalid } from './approximation-invalid.ts';
+import { balanceAtoms } from './balance-atoms.ts';
+import { balanceCharge } from './balance-charge.ts';
+import { constantsDetailedBalance } from './constants-detailed-balance.ts';
+import { energyProfile } from './energy-profile.ts';
+import { energyRdsSpan } from './energy-rds-span.ts';
+import { equationSyntax } from './equation-syntax.ts';
+import { formulaSyntax } from './formula-syntax.ts';
+import { observationOrder } from './observation-order.ts';
+import { observationSpecies } from './observation-species.ts';
+import { observationUnits } from './observation-units.ts';
+import { rateNonlinear } from './rate-nonlinear.ts';
+import { rateNotEliminable } from './rate-not-eliminable.ts';
+import { recordSchema } from './record-schema.ts';
+import { recordYaml } from './record-yaml.ts';
+import { rolesDeclaredMismatch } from './roles-declared-mismatch.ts';
+import { routeAmbiguous } from './route-ambiguous.ts';
+import { simulationFailed } from './simulation-failed.ts';
+import { speciesUnused } from './species-unused.ts';
+import { stepMolecularity } from './step-molecularity.ts';
+import { stepRds } from './step-rds.ts';
+import { stepUnits } from './step-units.ts';
+
+/** Every rule definition; the order is the order of RULE_IDS. */
+export const RULES = [
+  recordYaml,
+  recordSchema,
+  equationSyntax,
+  formulaSyntax,
+  balanceAtoms,
+  balanceCharge,
+  stepMolecularity,
+  stepUnits,
+  routeAmbiguous,
+  rolesDeclaredMismatch,
+  rateNotEliminable,
+  rateNonlinear,
+  observationOrder,
+  approximationInvalid,
+  energyProfile,
+  energyRdsSpan,
+  speciesUnused,
+  stepRds,
+  observationUnits,
+  observationSpecies,
+  simulationFailed,
+  constantsDetailedBalance,
+] as const;
+
+/** A rule's stable id. */
+export type RuleId = (typeof RULES)[number]['id'];
+
+/** The stable rule ids (DESIGN.md, "Contracts"): add new ones, never rename. */
+export const RULE_IDS: readonly RuleId[] = RULES.map((r) => r.id);
+
+/** The one-line summary of a rule. */
+export function ruleSummary(id: RuleId): string {
+  return RULES.find((r) => r.id === id)!.summary;
+}

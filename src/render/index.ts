@@ -1,0 +1,15 @@
+/**
+ * src/render: pure writers of what the engine derived — the reports (JSON model, text,
+ * markdown, SARIF, a derivation for a person), the SVG figures, SBML, and the display words and
+ * number formats every writer shares. No file system, no console.
+ */
+export { catalogueReport, reportOf } from './report/catalogue-report.ts';
+export { derivationText, type DerivedRecord } from './report/derivation-text.ts';
+export { markdownReport } from './report/markdown.ts';
+export { diagnosticJson, observationJson, rateLawJson, recordReport, type RecordInput } from './report/record-report.ts';
+export { sarifReport } from './report/sarif.ts';
+export { byPosition, summaryLine, textReport } from './report/text.ts';
+export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
+export { energyProfileSvg } from './plots/energy-profile-svg.ts';
+export { sbmlDocument } from './sbml/sbml.ts';
+export * from './words/index.ts';
