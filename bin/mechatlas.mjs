@@ -1,7 +1,11 @@
 #!/usr/bin/env node
-// Runs the TypeScript CLI through tsx's loader, so `npx mechatlas` works right after `npm ci`.
-import { register } from 'tsx/esm/api';
-
-register();
-const { main } = await import('../src/cli/main.ts');
-process.exitCode = await main(process.argv.slice(2));
+// The `mechatlas` command: runs the compiled CLI in lib/ (built by `npm ci`, or `npm run compile`).
+let cli;
+try {
+  cli = await import('../lib/mechatlas.mjs');
+} catch (error) {
+  if (error?.code !== 'ERR_MODULE_NOT_FOUND' || !String(error.message).includes('lib/mechatlas.mjs')) throw error;
+  process.stderr.write('mechatlas: the compiled command is missing; run `npm run compile` (npm ci does it)\n');
+  process.exit(3);
+}
+process.exitCode = await cli.main(process.argv.slice(2));

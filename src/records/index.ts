@@ -23,7 +23,7 @@ export type {
   StepEnergy,
   StepEntry,
   StepLabel,
-} from '../model/mechanism-record.ts';
+} from '../model/index.ts';
 export { MAX_ALIAS_COUNT, parseRecordYaml } from './parse-record-yaml.ts';
 export type { ParsedYaml } from './parse-record-yaml.ts';
 export { placeDiagnostics } from './place-diagnostics.ts';

@@ -1,7 +1,7 @@
 /**
  * src/render: pure writers of what the engine derived — the reports (JSON model, text,
  * markdown, SARIF, a derivation for a person), the SVG figures, SBML, and the display words and
- * number formats every writer shares. No file system, no console.
+ * number formats every writer shares. Pure: no input or output of its own.
  */
 export { catalogueReport, reportOf } from './report/catalogue-report.ts';
 export { derivationText, type DerivedRecord } from './report/derivation-text.ts';

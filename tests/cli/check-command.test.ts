@@ -1,12 +1,12 @@
-/** End to end: spawn `mechatlas check`, read its output and exit code. */
+/** `mechatlas check` and `new`: in-process through main(), and once end to end through the compiled binary. */
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from './run-cli.ts';
+import { runCli, runMain } from './run-cli.ts';
 
 describe('mechatlas check', () => {
-  it('checks the demo catalogue and writes the JSON report', () => {
+  it('checks the demo catalogue and writes the JSON report (the compiled binary, end to end)', () => {
     const { code, stdout } = runCli(['check', '--format', 'json']);
     const report = JSON.parse(stdout);
     expect(report.tool.name).toBe('mechatlas');
@@ -19,17 +19,17 @@ describe('mechatlas check', () => {
     }
   });
 
-  it('reports an unbalanced step with file, line, column and rule, and exits 1', () => {
+  it('reports an unbalanced step with file, line, column and rule, and exits 1', async () => {
     const file = 'tests/fixtures/not-ok/balance-atoms.yaml';
-    const { code, stdout } = runCli(['check', file]);
+    const { code, stdout } = (await runMain(['check', file]));
     expect(code).toBe(1);
     const rows = stdout.trim().split('\n');
     expect(rows[0]).toMatch(/^tests\/fixtures\/not-ok\/balance-atoms\.yaml:7:\d+ {2}error {2}.+ {2}balance\/atoms$/);
     expect(rows.at(-1)).toBe('1 record checked: 1 error, 0 warnings, 0 notes');
   });
 
-  it('checks every record even when some fail', () => {
-    const { code, stdout } = runCli(['check', '--format', 'json', 'tests/fixtures/not-ok/balance-atoms.yaml', 'tests/fixtures/ok/termolecular-note.yaml']);
+  it('checks every record even when some fail', async () => {
+    const { code, stdout } = (await runMain(['check', '--format', 'json', 'tests/fixtures/not-ok/balance-atoms.yaml', 'tests/fixtures/ok/termolecular-note.yaml']));
     const report = JSON.parse(stdout);
     expect(code).toBe(1);
     expect(report.records.map((r: { id: string }) => r.id)).toEqual(['balance-atoms', 'termolecular-note']);
@@ -37,26 +37,26 @@ describe('mechatlas check', () => {
     expect(report.records[1].roles.M).toBe('third_body');
   });
 
-  it('writes SARIF 2.1.0 and markdown', () => {
-    const sarif = JSON.parse(runCli(['check', '--format', 'sarif', 'tests/fixtures/not-ok/balance-charge.yaml']).stdout);
+  it('writes SARIF 2.1.0 and markdown', async () => {
+    const sarif = JSON.parse((await runMain(['check', '--format', 'sarif', 'tests/fixtures/not-ok/balance-charge.yaml'])).stdout);
     expect(sarif.version).toBe('2.1.0');
     expect(sarif.runs[0].results[0]).toMatchObject({ ruleId: 'balance/charge', level: 'error' });
     expect(sarif.runs[0].results[0].locations[0].physicalLocation.region.startLine).toBe(6);
-    const md = runCli(['check', '--format', 'markdown', 'tests/fixtures/not-ok/balance-charge.yaml']).stdout;
+    const md = (await runMain(['check', '--format', 'markdown', 'tests/fixtures/not-ok/balance-charge.yaml'])).stdout;
     expect(md).toContain('`balance/charge`');
   });
 
-  it('exits 2 on bad usage', () => {
-    expect(runCli(['check', '--format', 'xml']).code).toBe(2);
-    expect(runCli(['check', '--no-such-option']).code).toBe(2);
-    expect(runCli(['check', 'no/such/folder']).code).toBe(2);
-    expect(runCli(['frobnicate']).code).toBe(2);
+  it('exits 2 on bad usage', async () => {
+    expect((await runMain(['check', '--format', 'xml'])).code).toBe(2);
+    expect((await runMain(['check', '--no-such-option'])).code).toBe(2);
+    expect((await runMain(['check', 'no/such/folder'])).code).toBe(2);
+    expect((await runMain(['frobnicate'])).code).toBe(2);
   });
 
-  it('never crashes on a file that is not YAML at all', () => {
+  it('never crashes on a file that is not YAML at all', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'mechatlas-'));
     writeFileSync(join(dir, 'garbage.yaml'), '\u0000\u0001 ::: [unclosed\n\t- {');
-    const { code, stdout, stderr } = runCli(['check', '--format', 'json', dir]);
+    const { code, stdout, stderr } = (await runMain(['check', '--format', 'json', dir]));
     expect(stderr).toBe('');
     expect(code).toBe(1);
     expect(JSON.parse(stdout).records[0].diagnostics[0].rule).toBe('record/yaml');
@@ -64,14 +64,22 @@ describe('mechatlas check', () => {
 });
 
 describe('mechatlas new', () => {
-  it('scaffolds a record that checks clean, and never overwrites', () => {
+  it('scaffolds a record that checks clean, and never overwrites', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'mechatlas-'));
-    expect(runCli(['new', 'my-proposal', '--dir', dir]).code).toBe(0);
+    expect((await runMain(['new', 'my-proposal', '--dir', dir])).code).toBe(0);
     const file = join(dir, 'my-proposal.yaml');
     expect(readFileSync(file, 'utf8')).toContain('title:');
-    const check = runCli(['check', file]);
+    const check = (await runMain(['check', file]));
     expect(check.stdout).toContain('0 errors');
-    expect(runCli(['new', 'my-proposal', '--dir', dir]).code).toBe(2);
-    expect(runCli(['new', 'Bad Id', '--dir', dir]).code).toBe(2);
+    expect((await runMain(['new', 'my-proposal', '--dir', dir])).code).toBe(2);
+    expect((await runMain(['new', 'Bad Id', '--dir', dir])).code).toBe(2);
+  });
+});
+
+describe('the compiled binary', () => {
+  it('prints its version without a TypeScript loader', () => {
+    const { code, stdout } = runCli(['--version']);
+    expect(code).toBe(0);
+    expect(stdout.trim()).toMatch(/^\d+\.\d+\.\d+/);
   });
 });

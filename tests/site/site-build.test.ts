@@ -8,7 +8,7 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { beforeAll, describe, expect, inject, it } from 'vitest';
 import type { CatalogueReport, RecordReport } from '../../src/model/index.ts';
-import { ROOT, runCli } from '../cli/run-cli.ts';
+import { ROOT, runMain } from '../cli/run-cli.ts';
 import { attr, decodeEntities, elementText, startTags, type Tag } from './html-scan.ts';
 
 const DEMO = join(ROOT, 'content', 'mechanisms');
@@ -91,22 +91,22 @@ describe('the demo catalogue builds', () => {
     for (const id of demoIds) expect(readFileSync(join(out, 'm', id, `${id}.yaml`)), id).toEqual(readFileSync(join(DEMO, `${id}.yaml`)));
   });
 
-  it('offers each derivable record as SBML, the same document as `mechatlas export --sbml`', () => {
+  it('offers each derivable record as SBML, the same document as `mechatlas export --sbml`', async () => {
     for (const id of demoIds) {
       const sbml = readFileSync(join(out, 'm', id, `${id}.sbml.xml`), 'utf8');
       expect(sbml, id).toContain('level="3" version="2"');
       expect(page(id), id).toContain(`${id}.sbml.xml`);
     }
     const id = demoIds[0]!;
-    expect(readFileSync(join(out, 'm', id, `${id}.sbml.xml`), 'utf8')).toBe(runCli(['export', '--sbml', join(DEMO, `${id}.yaml`)]).stdout);
+    expect(readFileSync(join(out, 'm', id, `${id}.sbml.xml`), 'utf8')).toBe((await runMain(['export', '--sbml', join(DEMO, `${id}.yaml`)])).stdout);
     expect(existsSync(join(out, 'm', BROKEN, `${BROKEN}.sbml.xml`))).toBe(false);
   });
 
-  it('publishes the JSON API: the same report as `mechatlas check --format json`', () => {
+  it('publishes the JSON API: the same report as `mechatlas check --format json`', async () => {
     const all = JSON.parse(read('api/mechanisms.json')) as CatalogueReport;
     expect(all.tool.name).toBe('mechatlas');
     expect(all.records.map((r) => r.id).sort()).toEqual([...demoIds, BROKEN, HOSTILE].sort());
-    const cli = runCli(['check', content, '--format', 'json']);
+    const cli = await runMain(['check', content, '--format', 'json']);
     const fromCli = JSON.parse(cli.stdout) as CatalogueReport;
     expect(all.summary).toEqual(fromCli.summary);
     const withoutFiles = (r: RecordReport) => JSON.parse(JSON.stringify(r, (k, v: unknown) => (k === 'file' ? undefined : v))) as unknown;

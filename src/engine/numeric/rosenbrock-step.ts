@@ -9,7 +9,7 @@
  */
 import { createExtendedLuWorkspace, extendedLuFactor, extendedLuSolve, setShiftedNegative, type ExtendedLuWorkspace } from './extended-lu.ts';
 import { ROSENBROCK_METHOD, type TransformedMethod } from './rosenbrock-method.ts';
-import type { OdeSystem } from './stiff-integrator.ts';
+import type { OdeSystem } from './ode-system.ts';
 
 /** Scratch arrays of one integration, allocated once so that steps allocate nothing. */
 export interface StepWorkspace {

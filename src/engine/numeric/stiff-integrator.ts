@@ -4,19 +4,12 @@
  * (rosenbrock-method.ts) with an analytic Jacobian takes steps as large as accuracy allows, since
  * stability never limits them; failures come back as a status and a message, never as a throw.
  */
+import type { OdeSystem } from './ode-system.ts';
 import { ROSENBROCK_TABLEAU } from './rosenbrock-method.ts';
 import { createWorkspace, rosenbrockStep } from './rosenbrock-step.ts';
 import { errorNorm, initialStep, stepFactor, type Tolerances } from './step-control.ts';
 
-/**
- * y' = f(t, y) with its analytic Jacobian ∂f/∂y (row-major, size × size). f may read t, but the
- * method's order assumes ∂f/∂t = 0, as in mass-action kinetics with constant rate constants.
- */
-export interface OdeSystem {
-  size: number;
-  rhs(t: number, y: Float64Array, dydt: Float64Array): void;
-  jacobian(t: number, y: Float64Array, J: Float64Array): void;
-}
+export type { OdeSystem };
 
 /** Span, tolerances (defaults rtol 1e-6, atol 1e-12), step budget (100 000) and output times. */
 export interface IntegrateOptions {

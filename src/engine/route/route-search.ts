@@ -5,7 +5,13 @@
  */
 import { hasNonNegativeKernel, positiveKernel } from '../exact/positive-kernel.ts';
 import { Rational } from '../exact/rational.ts';
-import type { RouteStep } from './stoichiometric-numbers.ts';
+
+/** A step as the route search sees it. */
+export interface RouteStep {
+  /** Net change per species (products minus reactants); third bodies net to zero. */
+  change: ReadonlyMap<string, Rational>;
+  times?: number;
+}
 
 export interface Candidate {
   sigma: bigint[];

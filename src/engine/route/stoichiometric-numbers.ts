@@ -5,13 +5,9 @@
  */
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { Rational } from '../exact/rational.ts';
-import { routeColumns, searchSupports, type Candidate, type Family } from './route-search.ts';
+import { routeColumns, searchSupports, type Candidate, type Family, type RouteStep } from './route-search.ts';
 
-export interface RouteStep {
-  /** Net change per species (products minus reactants); third bodies net to zero. */
-  change: ReadonlyMap<string, Rational>;
-  times?: number;
-}
+export type { RouteStep };
 
 export interface RouteResult {
   /** σ per step, or undefined when no single route could be chosen. */

@@ -5,7 +5,7 @@
  * (buffered, solvent) have no derivative. The Jacobian is analytic.
  */
 import type { Mechanism } from '../mechanism/mechanism.ts';
-import type { OdeSystem } from '../numeric/stiff-integrator.ts';
+import type { OdeSystem } from '../numeric/ode-system.ts';
 
 export interface RateConstants {
   /** forward constant of each step, in M^(1−n) s^-1 */

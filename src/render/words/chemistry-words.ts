@@ -19,8 +19,9 @@ const METHODS: Readonly<Record<string, { name: string; short: string; law: strin
   },
 };
 
-/** A rate-law method in words, lower case: "steady-state approximation". */
-export function methodName(method: string): string {
+/** A rate-law method in words, lower case: "steady-state approximation"; "no rate law" for none. */
+export function methodName(method: string | undefined): string {
+  if (method === undefined) return 'no rate law';
   return METHODS[method]?.name ?? method.replace(/_/g, ' ');
 }
 

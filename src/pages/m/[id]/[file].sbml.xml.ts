@@ -1,7 +1,6 @@
 // /m/<id>/<id>.sbml.xml: the record's mass-action model as SBML Level 3 Version 2, from the engine.
 import type { GetStaticPaths } from 'astro';
 import { atlasRecords } from '../../../components/content-entries.ts';
-import { type RecordView } from '../../../site/index.ts';
 
 export const getStaticPaths = (async () => {
   return (await atlasRecords())

@@ -1,7 +1,6 @@
 // /m/<id>/<id>.yaml: the record's source text exactly as it is in the repository.
 import type { GetStaticPaths } from 'astro';
 import { atlasRecords } from '../../../components/content-entries.ts';
-import { type RecordView } from '../../../site/index.ts';
 
 export const getStaticPaths = (async () => {
   return (await atlasRecords()).map((view) => ({ params: { id: view.id, file: view.id }, props: { source: view.source } }));
