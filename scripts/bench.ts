@@ -58,10 +58,18 @@ if (process.argv.includes('--site') && siteCopies > 0) {
   const content = join(work, 'content');
   mkdirSync(content);
   for (let copy = 0; copy < siteCopies; copy++) {
-    for (const { name, source } of demo) writeFileSync(join(content, name.replace('.yaml', `-copy${copy}.yaml`)), source.replace(/^system: (.+)$/m, `system: $1-copy${copy}`));
+    for (const { name, source } of demo)
+      writeFileSync(
+        join(content, name.replace('.yaml', `-copy${copy}.yaml`)),
+        source.replace(/^system: (.+)$/m, `system: $1-copy${copy}`),
+      );
   }
   const start = performance.now();
-  execFileSync(process.execPath, ['bin/mechatlas.mjs', 'build', '--content', content, '--out', join(work, 'site')], { stdio: 'ignore' });
-  console.log(`\nsite build of ${demo.length * siteCopies} records: ${((performance.now() - start) / 1000).toFixed(1)} s (derivations + Astro build)`);
+  execFileSync(process.execPath, ['bin/mechatlas.mjs', 'build', '--content', content, '--out', join(work, 'site')], {
+    stdio: 'ignore',
+  });
+  console.log(
+    `\nsite build of ${demo.length * siteCopies} records: ${((performance.now() - start) / 1000).toFixed(1)} s (derivations + Astro build)`,
+  );
   rmSync(work, { recursive: true, force: true });
 }

@@ -17,9 +17,7 @@ const BANNER = `/**
 
 /** Rewrites the schema into the shape that gives the clearest TypeScript (validation is unaffected). */
 function prepareForTypes(schema) {
-  const titles = new Map(
-    Object.entries(schema.$defs ?? {}).map(([name, def]) => [`#/$defs/${name}`, def.title]),
-  );
+  const titles = new Map(Object.entries(schema.$defs ?? {}).map(([name, def]) => [`#/$defs/${name}`, def.title]));
   return transform(schema, titles);
 }
 

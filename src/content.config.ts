@@ -33,7 +33,13 @@ function catalogueLoader<T>(name: string, pick: (c: Catalogue) => { id: string; 
 }
 
 export const collections = {
-  mechanisms: defineCollection({ loader: catalogueLoader('mechatlas-mechanisms', (c) => c.records.map((r) => ({ id: r.id, data: r }))) }),
-  species: defineCollection({ loader: catalogueLoader('mechatlas-species', (c) => c.species.map((s) => ({ id: s.slug, data: s }))) }),
-  systems: defineCollection({ loader: catalogueLoader('mechatlas-systems', (c) => c.systems.map((s) => ({ id: s.system, data: s }))) }),
+  mechanisms: defineCollection({
+    loader: catalogueLoader('mechatlas-mechanisms', (c) => c.records.map((r) => ({ id: r.id, data: r }))),
+  }),
+  species: defineCollection({
+    loader: catalogueLoader('mechatlas-species', (c) => c.species.map((s) => ({ id: s.slug, data: s }))),
+  }),
+  systems: defineCollection({
+    loader: catalogueLoader('mechatlas-systems', (c) => c.systems.map((s) => ({ id: s.system, data: s }))),
+  }),
 };

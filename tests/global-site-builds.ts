@@ -26,7 +26,11 @@ const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const run = promisify(execFile);
 
 async function build(content: string, out: string): Promise<void> {
-  await run(process.execPath, [join(ROOT, 'bin', 'mechatlas.mjs'), 'build', '--content', content, '--out', out], { cwd: ROOT, timeout: 400_000, maxBuffer: 32 * 1024 * 1024 });
+  await run(process.execPath, [join(ROOT, 'bin', 'mechatlas.mjs'), 'build', '--content', content, '--out', out], {
+    cwd: ROOT,
+    timeout: 400_000,
+    maxBuffer: 32 * 1024 * 1024,
+  });
 }
 
 /** Builds both sites unless the run's file filters leave out every site and browser test. */
@@ -40,7 +44,8 @@ export default async function setup(project: TestProject): Promise<() => void> {
   if (needed) {
     await build(join(ROOT, 'content', 'mechanisms'), demoSite);
     cpSync(join(ROOT, 'content', 'mechanisms'), fixtureContent, { recursive: true });
-    for (const id of ['hostile-record', 'broken-record']) cpSync(join(ROOT, 'tests', 'site', 'fixtures', `${id}.yaml`), join(fixtureContent, `${id}.yaml`));
+    for (const id of ['hostile-record', 'broken-record'])
+      cpSync(join(ROOT, 'tests', 'site', 'fixtures', `${id}.yaml`), join(fixtureContent, `${id}.yaml`));
     await build(fixtureContent, fixtureSite);
   }
   project.provide('demoSite', demoSite);

@@ -27,7 +27,8 @@ const ALLOWED: Record<string, readonly string[]> = {
 /** The layer a file of src/ belongs to. */
 function layerOf(file: string): string {
   const [top] = relative(SRC, file).split('/');
-  if (top === 'pages' || top === 'components' || top === 'layouts' || top === 'styles' || top === 'content.config.ts') return 'astro';
+  if (top === 'pages' || top === 'components' || top === 'layouts' || top === 'styles' || top === 'content.config.ts')
+    return 'astro';
   return top!;
 }
 
@@ -42,7 +43,11 @@ function sourceFiles(dir: string): string[] {
 /** Relative imports of a file, resolved to absolute paths (JSON, CSS and packages left out). */
 function importsOf(file: string): string[] {
   const text = readFileSync(file, 'utf8');
-  const specifiers = [...text.matchAll(/(?:^|\n)\s*(?:import|export)\b[^'"]*?from\s*['"](\.[^'"]+)['"]|import\(\s*['"](\.[^'"]+)['"]\s*\)/g)].map((m) => m[1] ?? m[2]!);
+  const specifiers = [
+    ...text.matchAll(
+      /(?:^|\n)\s*(?:import|export)\b[^'"]*?from\s*['"](\.[^'"]+)['"]|import\(\s*['"](\.[^'"]+)['"]\s*\)/g,
+    ),
+  ].map((m) => m[1] ?? m[2]!);
   return specifiers.filter((s) => /\.(ts|astro|mjs)$/.test(s)).map((s) => resolve(dirname(file), s));
 }
 
@@ -71,7 +76,9 @@ describe('the layers of src/', () => {
     for (const [file, targets] of graph) {
       for (const target of targets) {
         if (layerOf(target) === layerOf(file) || layerOf(target) === 'astro') continue;
-        const entry = /^src\/[a-z]+\/index\.ts$|^src\/render\/words\/index\.ts$|^src\/search\/[a-z-]+\.ts$/.test(name(target));
+        const entry = /^src\/[a-z]+\/index\.ts$|^src\/render\/words\/index\.ts$|^src\/search\/[a-z-]+\.ts$/.test(
+          name(target),
+        );
         if (!entry) deep.push(`${name(file)} → ${name(target)}`);
       }
     }

@@ -6,7 +6,13 @@
  */
 import { readFile } from 'node:fs/promises';
 import { relative } from 'node:path';
-import { firstObservationSeries, judgeObservations, simulationBasis, type ConcentrationSeries, type ObservationCheck } from '../engine/index.ts';
+import {
+  firstObservationSeries,
+  judgeObservations,
+  simulationBasis,
+  type ConcentrationSeries,
+  type ObservationCheck,
+} from '../engine/index.ts';
 import type { Observation } from '../model/index.ts';
 import { findRecordFiles } from '../records/index.ts';
 import { checkRecordFile, type CheckedRecord } from './check-records.ts';
@@ -47,7 +53,10 @@ export async function loadCatalogue(folder: string): Promise<Catalogue> {
     const diagnostics = checked.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: named }));
     const record: CatalogueRecord = { ...checked, file: named, diagnostics, source: await readFile(file, 'utf8') };
     const basis = checked.derivation && simulationBasis(checked.derivation);
-    const series = checked.record && basis ? firstObservationSeries(checked.record.observations ?? [], basis, checked.derivation!.constants ?? new Map()) : undefined;
+    const series =
+      checked.record && basis
+        ? firstObservationSeries(checked.record.observations ?? [], basis, checked.derivation!.constants ?? new Map())
+        : undefined;
     if (series) record.series = series;
     records.push(record);
   }

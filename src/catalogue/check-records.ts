@@ -28,7 +28,10 @@ export async function checkRecordFile(path: string, options: DeriveOptions = {})
 }
 
 /** Checks files one after another (the engine is CPU-bound; order stays stable). */
-export async function checkRecordFiles(paths: readonly string[], options: DeriveOptions = {}): Promise<CheckedRecord[]> {
+export async function checkRecordFiles(
+  paths: readonly string[],
+  options: DeriveOptions = {},
+): Promise<CheckedRecord[]> {
   const out: CheckedRecord[] = [];
   for (const p of paths) out.push(await checkRecordFile(p, options));
   return out;

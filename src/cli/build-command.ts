@@ -42,11 +42,16 @@ export async function buildCommand(options: BuildOptions, out: Output): Promise<
   const { build } = await import('astro');
   // Astro keeps the content data store in its cache folder and reads it back during the build, so
   // builds into different folders (parallel test files) each get their own cache, outside the tree.
-  const cacheDir = join(tmpdir(), 'mechatlas-astro-cache', createHash('sha256').update(outDir).digest('hex').slice(0, 12));
+  const cacheDir = join(
+    tmpdir(),
+    'mechatlas-astro-cache',
+    createHash('sha256').update(outDir).digest('hex').slice(0, 12),
+  );
   await build({ root: packageRoot(), outDir, cacheDir, logLevel: 'warn' });
   // The site's own API holds the report the build derived; the records are not derived twice.
   const report = JSON.parse(await readFile(join(outDir, 'api', 'mechanisms.json'), 'utf8')) as CatalogueReport;
   out.stdout(`built the catalogue of ${options.content} into ${options.out}/ — ${summaryLine(report)}\n`);
-  if (report.summary.errors > 0) out.stderr(`${report.summary.errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
+  if (report.summary.errors > 0)
+    out.stderr(`${report.summary.errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
   return options.strict && report.summary.errors > 0 ? 1 : 0;
 }

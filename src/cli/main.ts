@@ -57,7 +57,11 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
       const { values, positionals } = parseArgs({
         args: rest,
         allowPositionals: true,
-        options: { format: { type: 'string', default: 'text' }, base: { type: 'string' }, 'approximation-threshold': { type: 'string' } },
+        options: {
+          format: { type: 'string', default: 'text' },
+          base: { type: 'string' },
+          'approximation-threshold': { type: 'string' },
+        },
       });
       const threshold = values['approximation-threshold'];
       return checkCommand(
@@ -76,12 +80,20 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
       return deriveCommand(positionals[0]!, out);
     }
     case 'new': {
-      const { values, positionals } = parseArgs({ args: rest, allowPositionals: true, options: { dir: { type: 'string', default: 'content/mechanisms' } } });
+      const { values, positionals } = parseArgs({
+        args: rest,
+        allowPositionals: true,
+        options: { dir: { type: 'string', default: 'content/mechanisms' } },
+      });
       if (positionals.length !== 1) throw new UsageError('new takes exactly one record id');
       return newCommand(positionals[0]!, values.dir, out);
     }
     case 'export': {
-      const { values, positionals } = parseArgs({ args: rest, allowPositionals: true, options: { sbml: { type: 'boolean', default: false }, out: { type: 'string' } } });
+      const { values, positionals } = parseArgs({
+        args: rest,
+        allowPositionals: true,
+        options: { sbml: { type: 'boolean', default: false }, out: { type: 'string' } },
+      });
       if (!values.sbml) throw new UsageError('export needs a format: --sbml');
       if (positionals.length !== 1) throw new UsageError('export takes exactly one record id or file');
       return exportCommand(positionals[0]!, values.out, out);
@@ -90,7 +102,11 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
       const { values } = parseArgs({
         args: rest,
         allowPositionals: false,
-        options: { content: { type: 'string', default: 'content/mechanisms' }, out: { type: 'string', default: 'dist' }, strict: { type: 'boolean', default: false } },
+        options: {
+          content: { type: 'string', default: 'content/mechanisms' },
+          out: { type: 'string', default: 'dist' },
+          strict: { type: 'boolean', default: false },
+        },
       });
       return buildCommand({ content: values.content, out: values.out, strict: values.strict }, out);
     }

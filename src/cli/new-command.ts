@@ -13,7 +13,8 @@ export async function newCommand(id: string, dir: string, out: Output): Promise<
   try {
     await writeFile(file, template(), { flag: 'wx' });
   } catch (error) {
-    if ((error as NodeJS.ErrnoException).code === 'EEXIST') throw new UsageError(`${file} exists already; nothing was written`);
+    if ((error as NodeJS.ErrnoException).code === 'EEXIST')
+      throw new UsageError(`${file} exists already; nothing was written`);
     throw error;
   }
   out.stdout(`wrote ${file}; fill it in, then run: npx mechatlas check ${file}\n`);

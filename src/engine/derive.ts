@@ -5,7 +5,14 @@
  * `Route`, the constants), never the derivation being built. Pure: a valid record in, a value
  * with diagnostics out.
  */
-import { diagnostic, type Diagnostic, type MechanismRecord, type Observation, type Role, type Status } from '../model/index.ts';
+import {
+  diagnostic,
+  type Diagnostic,
+  type MechanismRecord,
+  type Observation,
+  type Role,
+  type Status,
+} from '../model/index.ts';
 import { energyAnalysis, energyConditions, eyringStepConstants, type EnergyResult } from './energy/index.ts';
 import { checkBalance, type StepBalance } from './mechanism/balance.ts';
 import { checkDetailedBalance } from './mechanism/detailed-balance.ts';
@@ -84,7 +91,11 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
   const rates = deriveRateLaws(record.approximation ?? 'auto', mechanism, routed.route);
   const route: Route = { ...routed.route, roles: rates.roles };
   const judged = checkObservations(record, rates.context, rates.rateLaws, constants, rates.symbols);
-  diagnostics.push(...rates.diagnostics, ...judged.diagnostics, ...inhibitorMismatches(mechanism, rates.roles, rates.rateLaws.length > 0));
+  diagnostics.push(
+    ...rates.diagnostics,
+    ...judged.diagnostics,
+    ...inhibitorMismatches(mechanism, rates.roles, rates.rateLaws.length > 0),
+  );
   const rateLaws = rates.rateLaws.map((law, i) => ({ ...law, restingStates: judged.restingStates[i] ?? [] }));
   const derivation: Derivation = {
     mechanism,
@@ -109,7 +120,12 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
   if (energy.energy) derivation.energy = energy.energy;
   diagnostics.push(...energy.diagnostics);
   if (options.simulate !== false && (record.observations ?? []).length > 0) {
-    const simulated = checkApproximations(record.observations ?? [], { mechanism, route, rateLaws }, constants, options.approximationThreshold);
+    const simulated = checkApproximations(
+      record.observations ?? [],
+      { mechanism, route, rateLaws },
+      constants,
+      options.approximationThreshold,
+    );
     derivation.simulation = simulated.checks;
     diagnostics.push(...simulated.diagnostics);
   }
@@ -120,10 +136,15 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
  * Observations a record does not hold (a rival's, in a system of rival proposals) judged against
  * the rate laws already derived, without deriving again: no diagnostics, no simulation.
  */
-export function judgeObservations(derivation: Derivation, observations: readonly Observation[], status: Status): ObservationCheck[] {
+export function judgeObservations(
+  derivation: Derivation,
+  observations: readonly Observation[],
+  status: Status,
+): ObservationCheck[] {
   const { rateLawContext, rateLaws, orderSymbols, constants } = derivation;
   if (!rateLawContext || !rateLaws || !orderSymbols) return [];
-  return checkObservations({ observations, status }, rateLawContext, rateLaws, constants ?? new Map(), orderSymbols).checks;
+  return checkObservations({ observations, status }, rateLawContext, rateLaws, constants ?? new Map(), orderSymbols)
+    .checks;
 }
 
 /** What the simulations need from a derivation, or undefined where it found no route. */
@@ -136,7 +157,11 @@ export function simulationBasis(derivation: Derivation): SimulationBasis | undef
  * Where a step gives Gibbs energies but no rate constants, the Eyring equation supplies them
  * (given constants always win).
  */
-function fillFromEnergies(record: MechanismRecord, mechanism: Mechanism, given: readonly StepConstants[]): { constants: StepConstants[]; labels: string[] } {
+function fillFromEnergies(
+  record: MechanismRecord,
+  mechanism: Mechanism,
+  given: readonly StepConstants[],
+): { constants: StepConstants[]; labels: string[] } {
   if (energyConditions(record).conditions.basis !== 'G') return { constants: [...given], labels: [] };
   const eyring = eyringStepConstants(record, mechanism).constants;
   const labels: string[] = [];
@@ -145,7 +170,8 @@ function fillFromEnergies(record: MechanismRecord, mechanism: Mechanism, given: 
     if (c.k !== undefined || e?.k === undefined) return c;
     labels.push(mechanism.steps[i]!.label);
     const out: StepConstants = { k: e.k };
-    if (mechanism.steps[i]!.reversible && c.kRev === undefined && c.K === undefined && e.kRev !== undefined) out.kRev = e.kRev;
+    if (mechanism.steps[i]!.reversible && c.kRev === undefined && c.K === undefined && e.kRev !== undefined)
+      out.kRev = e.kRev;
     else Object.assign(out, c.kRev !== undefined && { kRev: c.kRev }, c.K !== undefined && { K: c.K });
     return out;
   });
@@ -153,15 +179,24 @@ function fillFromEnergies(record: MechanismRecord, mechanism: Mechanism, given: 
 }
 
 /** A declared inhibitor must show a negative order once a rate law exists. */
-function inhibitorMismatches(mechanism: Mechanism, roles: ReadonlyMap<string, Role>, haveRateLaw: boolean): Diagnostic[] {
+function inhibitorMismatches(
+  mechanism: Mechanism,
+  roles: ReadonlyMap<string, Role>,
+  haveRateLaw: boolean,
+): Diagnostic[] {
   if (!haveRateLaw) return [];
   return [...mechanism.species.values()]
     .filter((s) => s.declaredRole === 'inhibitor' && roles.get(s.symbol) !== 'inhibitor')
     .map((s) =>
-      diagnostic('roles/declared-mismatch', 'error', `${s.symbol} is declared an inhibitor but has no negative order in the rate law`, {
-        path: ['species', s.symbol, 'role'],
-        actual: roles.get(s.symbol),
-        expected: 'inhibitor',
-      }),
+      diagnostic(
+        'roles/declared-mismatch',
+        'error',
+        `${s.symbol} is declared an inhibitor but has no negative order in the rate law`,
+        {
+          path: ['species', s.symbol, 'role'],
+          actual: roles.get(s.symbol),
+          expected: 'inhibitor',
+        },
+      ),
     );
 }

@@ -27,7 +27,13 @@ export { CONCENTRATION, sameDimension, type Dimension } from './units/dimension.
 // Rate laws and their symbols.
 export type { DerivedRateLaw } from './rate-law/derive-rate-laws.ts';
 export type { RateLawMethod, OrderRange } from './rate-law/rate-law.ts';
-export { concentration, equilibriumConstant, forwardConstant, reverseConstant, symbolLatex } from './rate-law/symbols.ts';
+export {
+  concentration,
+  equilibriumConstant,
+  forwardConstant,
+  reverseConstant,
+  symbolLatex,
+} from './rate-law/symbols.ts';
 
 // Observations judged against the laws.
 export type { ObservationCheck } from './observations/judge-order.ts';
@@ -38,5 +44,10 @@ export type { EnergyBasis, EnergyProfile, EnergyResult, ProfileState } from './e
 // Simulations.
 export { DEFAULT_APPROXIMATION_THRESHOLD, type SimulationCheck } from './simulation/approximation-validity.ts';
 export { CONVERSION_FOR_INITIAL_RATE } from './simulation/initial-rate.ts';
-export { concentrationSeries, firstObservationSeries, type ConcentrationSeries, type SeriesOptions } from './simulation/concentration-series.ts';
+export {
+  concentrationSeries,
+  firstObservationSeries,
+  type ConcentrationSeries,
+  type SeriesOptions,
+} from './simulation/concentration-series.ts';
 export type { SimulationBasis } from './simulation/simulation-setup.ts';

@@ -63,6 +63,5 @@ export interface EnergyResult extends EnergyProfile {
   };
 }
 
-
 /** The record's `energy` in the JSON report. */
 export type EnergyJson = EnergyResult;

@@ -22,7 +22,12 @@ export interface RecordReport {
   title?: string;
   system?: string;
   status?: string;
-  overall?: { reactants: Record<string, number | string>; products: Record<string, number | string>; catalysts: string[]; text: string };
+  overall?: {
+    reactants: Record<string, number | string>;
+    products: Record<string, number | string>;
+    catalysts: string[];
+    text: string;
+  };
   stoichiometric_numbers?: number[];
   stoichiometric_numbers_source?: 'given' | 'derived';
   roles?: Record<string, string>;
@@ -61,7 +66,11 @@ export interface RateLawJson {
   /** solvents whose constant concentration is absorbed into the constants */
   absorbed?: string[];
   /** the conserved catalysts' forms, for the resting state */
-  catalyst_balances?: { catalyst: string; total: string; forms: { species: string; fraction: string; fraction_latex: string }[] }[];
+  catalyst_balances?: {
+    catalyst: string;
+    total: string;
+    forms: { species: string; fraction: string; fraction_latex: string }[];
+  }[];
   /** the dominant catalyst form at each observation's conditions */
   resting_states?: { observation: string; catalyst: string; species: string; fraction: number }[];
   numeric_only?: boolean;

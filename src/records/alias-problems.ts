@@ -20,9 +20,7 @@ export function findAliasProblems(
   const report = (node: Alias, message: string): void => {
     const range = node.range ?? [0, 0];
     const position = locator.span(range[0], range[1]);
-    diagnostics.push(
-      diagnostic('record/yaml', 'error', message, { ...position, actual: `*${node.source}` }),
-    );
+    diagnostics.push(diagnostic('record/yaml', 'error', message, { ...position, actual: `*${node.source}` }));
   };
   const names = (outer: unknown, name: string): boolean =>
     typeof outer === 'object' && outer !== null && 'anchor' in outer && outer.anchor === name;

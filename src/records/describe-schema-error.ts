@@ -5,14 +5,7 @@
 import type { ErrorObject } from 'ajv';
 import type { RecordPath } from '../model/index.ts';
 import { closestName } from './closest-name.ts';
-import {
-  comparisonWords,
-  describeValue,
-  fieldWords,
-  formatWords,
-  patternWords,
-  typeWords,
-} from './schema-phrases.ts';
+import { comparisonWords, describeValue, fieldWords, formatWords, patternWords, typeWords } from './schema-phrases.ts';
 
 /** One schema problem, located by a path into the record; `at: 'key'` points at a field name. */
 export interface SchemaProblem {
@@ -46,11 +39,7 @@ function alternatives(error: ErrorObject): string {
  * Describes one error at `path`, which `where` names at the start of the sentence; undefined for
  * summary errors (propertyNames, if) whose nested errors say what is wrong.
  */
-export function describeSchemaError(
-  error: ErrorObject,
-  path: RecordPath,
-  where: string,
-): DescribedError | undefined {
+export function describeSchemaError(error: ErrorObject, path: RecordPath, where: string): DescribedError | undefined {
   const { keyword, params, parentSchema: parent = {}, data } = error;
   const wholeNumber = parent.type === 'integer' && typeof parent.minimum === 'number';
   const suggest = (name: string | undefined): string => (name ? ` (did you mean '${name}'?)` : '');
@@ -96,10 +85,7 @@ export function describeSchemaError(
     case 'minLength':
     case 'minItems': {
       const unit = keyword === 'minLength' ? 'characters' : 'items';
-      const rule =
-        params.limit === 1
-          ? 'must not be empty'
-          : `must have at least ${String(params.limit)} ${unit}`;
+      const rule = params.limit === 1 ? 'must not be empty' : `must have at least ${String(params.limit)} ${unit}`;
       return { at: 'value', message: `${where} ${rule}`, actual: data };
     }
     case 'uniqueItems': {

@@ -17,9 +17,7 @@ async function kindOf(target: string): Promise<'file' | 'directory' | 'missing'>
 }
 
 /** Expands directories to their *.yaml and *.yml files (sorted, not recursive); files as given. */
-export async function findRecordFiles(
-  targets: readonly string[],
-): Promise<{ files: string[]; missing: string[] }> {
+export async function findRecordFiles(targets: readonly string[]): Promise<{ files: string[]; missing: string[] }> {
   const files: string[] = [];
   const missing: string[] = [];
   for (const target of targets) {

@@ -29,12 +29,10 @@ function schemaDiagnostics(data: unknown, locator: RecordLocator, file: string):
   if (validate(data)) return [];
   const problems = describeSchemaErrors(validate.errors ?? [], data);
   const placed = problems.map((problem) => {
-    const position =
-      problem.at === 'key' ? locator.locateKey(problem.path) : locator.locate(problem.path);
+    const position = problem.at === 'key' ? locator.locateKey(problem.path) : locator.locate(problem.path);
     const extra = { path: problem.path, file, ...position };
     const withActual = problem.actual === undefined ? extra : { ...extra, actual: problem.actual };
-    const full =
-      problem.expected === undefined ? withActual : { ...withActual, expected: problem.expected };
+    const full = problem.expected === undefined ? withActual : { ...withActual, expected: problem.expected };
     return diagnostic('record/schema', 'error', problem.message, full);
   });
   // ajv reports in schema order; a reader fixes a file from the top down.
@@ -45,9 +43,7 @@ function idDiagnostics(id: string, file: string): Diagnostic[] {
   if (isRecordId(id)) return [];
   const message = `the file name '${id}' cannot be a record id: use lower-case letters, digits and single hyphens`;
   const note = `rename the file to ${suggestRecordId(id)}.yaml`;
-  return [
-    diagnostic('record/schema', 'error', message, { file, line: 1, column: 1, note, actual: id }),
-  ];
+  return [diagnostic('record/schema', 'error', message, { file, line: 1, column: 1, note, actual: id })];
 }
 
 /** Loads a record from its text; pure (no file access), the id comes from `file`'s base name. */
@@ -57,8 +53,7 @@ export function loadRecordSource(file: string, source: string): LoadedRecord {
   const diagnostics: Diagnostic[] = parsed.diagnostics.map((d) => ({ ...d, file }));
   if ('data' in parsed) diagnostics.push(...schemaDiagnostics(parsed.data, parsed.locator, file));
   diagnostics.push(...idDiagnostics(id, file));
-  const locate = (path: RecordPath, offset?: number): SourcePosition =>
-    parsed.locator.locate(path, offset);
+  const locate = (path: RecordPath, offset?: number): SourcePosition => parsed.locator.locate(path, offset);
   const loaded: LoadedRecord = { id, file, source, diagnostics, locate };
   if (diagnostics.some((d) => d.severity === 'error')) return loaded;
   return { ...loaded, record: parsed.data as MechanismRecord };

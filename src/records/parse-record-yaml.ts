@@ -25,15 +25,12 @@ export interface ParsedYaml {
 const FRIENDLY: Partial<Record<YAMLError['code'], (text: string) => string>> = {
   DUPLICATE_KEY: (key) => `the field '${key}' appears twice in the same mapping`,
   TAB_AS_INDENT: () => 'tabs cannot indent YAML; indent with spaces',
-  MULTIPLE_DOCS: () =>
-    'the file holds more than one YAML document (a --- line); a record is one document',
+  MULTIPLE_DOCS: () => 'the file holds more than one YAML document (a --- line); a record is one document',
   BAD_INDENT: () => 'the indentation is inconsistent here (or a bracket or quote is not closed)',
   BLOCK_AS_IMPLICIT_KEY: () =>
     'a value here contains ": " (colon and space), which YAML reads as a new field; put the value in quotes, or fix the indentation',
-  MULTILINE_IMPLICIT_KEY: () =>
-    'a field name must fit on one line (is a colon or indentation missing?)',
-  TAG_RESOLVE_FAILED: (tag) =>
-    `the YAML tag ${tag} is not understood; the value is read as plain text`,
+  MULTILINE_IMPLICIT_KEY: () => 'a field name must fit on one line (is a colon or indentation missing?)',
+  TAG_RESOLVE_FAILED: (tag) => `the YAML tag ${tag} is not understood; the value is read as plain text`,
 };
 
 function lowerFirst(text: string): string {
@@ -61,11 +58,7 @@ function pointedAt(doc: Document.Parsed, problem: YAMLError, source: string): Po
   return pointed;
 }
 
-function yamlDiagnostics(
-  doc: Document.Parsed,
-  source: string,
-  locator: RecordLocator,
-): Diagnostic[] {
+function yamlDiagnostics(doc: Document.Parsed, source: string, locator: RecordLocator): Diagnostic[] {
   const diagnostics: Diagnostic[] = [];
   const linesWithErrors = new Set<number>();
   for (const problem of [...doc.errors, ...doc.warnings]) {
@@ -77,9 +70,7 @@ function yamlDiagnostics(
     // One syntax error tends to set off a second on the same line; the first is the one to fix.
     if (severity === 'error' && linesWithErrors.has(position.line)) continue;
     if (severity === 'error') linesWithErrors.add(position.line);
-    diagnostics.push(
-      diagnostic('record/yaml', severity, message, { ...position, actual: problem.code }),
-    );
+    diagnostics.push(diagnostic('record/yaml', severity, message, { ...position, actual: problem.code }));
   }
   return diagnostics;
 }

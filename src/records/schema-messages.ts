@@ -35,8 +35,7 @@ function isAlternativeNoise(error: ErrorObject, all: readonly ErrorObject[]): bo
     (group) =>
       group !== error &&
       (group.keyword === 'anyOf' || group.keyword === 'oneOf') &&
-      (error.instancePath === group.instancePath ||
-        error.instancePath.startsWith(`${group.instancePath}/`)) &&
+      (error.instancePath === group.instancePath || error.instancePath.startsWith(`${group.instancePath}/`)) &&
       error.schemaPath.startsWith(`${group.schemaPath}/`),
   );
 }
@@ -45,10 +44,7 @@ function isAlternativeNoise(error: ErrorObject, all: readonly ErrorObject[]): bo
  * Describes ajv's errors once each: the failed branches of an anyOf/oneOf fold into one sentence,
  * and a value that breaks two keywords with the same meaning (type integer, minimum 0) gets one.
  */
-export function describeSchemaErrors(
-  errors: readonly ErrorObject[],
-  data: unknown,
-): SchemaProblem[] {
+export function describeSchemaErrors(errors: readonly ErrorObject[], data: unknown): SchemaProblem[] {
   const problems: SchemaProblem[] = [];
   const seen = new Set<string>();
   for (const error of errors) {

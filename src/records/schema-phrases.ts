@@ -42,11 +42,7 @@ const PATTERNS: Readonly<Record<string, string>> = {
 
 /** The rule a `pattern` stands for, named by the schema definition's title or the pattern itself. */
 export function patternWords(pattern: unknown, title: unknown): string {
-  return (
-    PATTERNS_BY_TITLE[String(title)] ??
-    PATTERNS[String(pattern)] ??
-    `must match the pattern ${String(pattern)}`
-  );
+  return PATTERNS_BY_TITLE[String(title)] ?? PATTERNS[String(pattern)] ?? `must match the pattern ${String(pattern)}`;
 }
 
 const FORMATS: Readonly<Record<string, string>> = {

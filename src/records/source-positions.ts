@@ -47,8 +47,7 @@ function find(doc: Document.Parsed, path: RecordPath): Found {
       key = pair.key;
       node = pair.value ?? pair.key;
     } else if (isSeq(node)) {
-      const index =
-        typeof segment === 'number' ? segment : /^\d+$/.test(segment) ? Number(segment) : -1;
+      const index = typeof segment === 'number' ? segment : /^\d+$/.test(segment) ? Number(segment) : -1;
       const item: unknown = node.items[index];
       if (item === undefined) return { node, key, complete: false };
       key = item;
@@ -124,8 +123,7 @@ export function createLocator(
     const { node, complete } = find(doc, path);
     const position = spanOfNode(node);
     const range = rangeOf(node);
-    if (offset === undefined || !complete || !isScalar(node) || range === undefined)
-      return position;
+    if (offset === undefined || !complete || !isScalar(node) || range === undefined) return position;
     if (position.line !== position.endLine) return position;
     const shift = sourceShift(source.slice(range[0], range[1]), node.type, offset);
     if (shift === undefined) return position;

@@ -6,7 +6,13 @@
 export { catalogueReport, reportOf } from './report/catalogue-report.ts';
 export { derivationText, type DerivedRecord } from './report/derivation-text.ts';
 export { markdownReport } from './report/markdown.ts';
-export { diagnosticJson, observationJson, rateLawJson, recordReport, type RecordInput } from './report/record-report.ts';
+export {
+  diagnosticJson,
+  observationJson,
+  rateLawJson,
+  recordReport,
+  type RecordInput,
+} from './report/record-report.ts';
 export { sarifReport } from './report/sarif.ts';
 export { byPosition, summaryLine, textReport } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';

@@ -22,7 +22,13 @@ export interface MechanismInput {
   system?: string | undefined;
   status?: string | undefined;
   tags: readonly string[];
-  species: readonly { symbol: string; role?: string | undefined; name?: string | undefined; formula?: string | undefined; aliases: readonly string[] }[];
+  species: readonly {
+    symbol: string;
+    role?: string | undefined;
+    name?: string | undefined;
+    formula?: string | undefined;
+    aliases: readonly string[];
+  }[];
 }
 
 /** What the search needs of a species entry (a SpeciesPage fits). */
@@ -36,7 +42,10 @@ export interface SpeciesInput {
 }
 
 /** Builds the documents and their prebuilt indexes; docs keep the input order, mechanisms first. */
-export function buildSearchIndex(mechanisms: readonly MechanismInput[], species: readonly SpeciesInput[]): SearchBundle {
+export function buildSearchIndex(
+  mechanisms: readonly MechanismInput[],
+  species: readonly SpeciesInput[],
+): SearchBundle {
   const slugs = new Map(species.map((s) => [s.symbol, s.slug]));
   const statuses = new Map(mechanisms.map((m) => [m.id, m.status]));
   const docs = [...mechanisms.map((m) => mechanismDoc(m, slugs)), ...species.map((s) => speciesDoc(s, statuses))];
@@ -103,10 +112,15 @@ function speciesDoc(s: SpeciesInput, statuses: ReadonlyMap<string, string | unde
 }
 
 /** Names and aliases flattened into one indexed list, remembering whose each one is. */
-function nameTerms(owners: readonly { names: readonly string[]; aliases: readonly string[] }[]): Pick<MechanismDoc, 'names' | 'nameOwner' | 'nameKind'> {
+function nameTerms(
+  owners: readonly { names: readonly string[]; aliases: readonly string[] }[],
+): Pick<MechanismDoc, 'names' | 'nameOwner' | 'nameKind'> {
   const out: Pick<MechanismDoc, 'names' | 'nameOwner' | 'nameKind'> = { names: [], nameOwner: [], nameKind: [] };
   owners.forEach((o, index) => {
-    for (const [kind, list] of [['name', o.names], ['alias', o.aliases]] as const) {
+    for (const [kind, list] of [
+      ['name', o.names],
+      ['alias', o.aliases],
+    ] as const) {
       for (const term of list) {
         out.names.push(term);
         out.nameOwner.push(index);

@@ -6,7 +6,14 @@
  * ever set with textContent: names and titles come from records and are never parsed as HTML.
  */
 import { outcomeSummary } from './outcome-summary.ts';
-import { createCatalogueSearch, type MechanismResult, type SearchFilters, type SearchOutcome, type SpeciesHit, type SpeciesResult } from './search-catalogue.ts';
+import {
+  createCatalogueSearch,
+  type MechanismResult,
+  type SearchFilters,
+  type SearchOutcome,
+  type SpeciesHit,
+  type SpeciesResult,
+} from './search-catalogue.ts';
 import { roleWords, type SearchBundle } from './search-doc.ts';
 
 const root = document.getElementById('catalogue-search');
@@ -89,8 +96,22 @@ function syncAddress(outcome: SearchOutcome): void {
 
 function render(outcome: SearchOutcome, into: HTMLElement, base: string): void {
   into.replaceChildren();
-  if (outcome.mechanisms.length > 0) into.append(section('Mechanisms', 'results-mechanisms', outcome.mechanisms.map((r) => mechanismItem(r, base))));
-  if (outcome.species.length > 0) into.append(section('Species', 'results-species', outcome.species.map((r) => speciesItem(r, base))));
+  if (outcome.mechanisms.length > 0)
+    into.append(
+      section(
+        'Mechanisms',
+        'results-mechanisms',
+        outcome.mechanisms.map((r) => mechanismItem(r, base)),
+      ),
+    );
+  if (outcome.species.length > 0)
+    into.append(
+      section(
+        'Species',
+        'results-species',
+        outcome.species.map((r) => speciesItem(r, base)),
+      ),
+    );
 }
 
 function section(title: string, id: string, items: HTMLLIElement[]): HTMLElement {
@@ -119,7 +140,8 @@ function mechanismItem(r: MechanismResult, base: string): HTMLLIElement {
     const hits = el('ul', { class: 'hits' });
     const shown = r.hits.slice(0, 4);
     hits.append(...shown.map((h) => hitItem(doc, h, base)));
-    if (r.hits.length > shown.length) hits.append(el('li', { class: 'muted' }, `and ${r.hits.length - shown.length} more matching species`));
+    if (r.hits.length > shown.length)
+      hits.append(el('li', { class: 'muted' }, `and ${r.hits.length - shown.length} more matching species`));
     li.append(hits);
   }
   if (r.fields.length > 0) li.append(el('p', { class: 'result-meta' }, `matched in the ${r.fields.join(', ')}`));
@@ -134,8 +156,13 @@ function hitItem(doc: MechanismResult['doc'], hit: SpeciesHit, base: string): HT
   link.append(el('code', { class: 'symbol' }, s.symbol));
   li.append(link);
   if (s.name) li.append(` ${s.name}`);
-  li.append(' — ', el('strong', { class: 'role' }, s.role ? roleWords(s.role) : 'role not derived'), ' in this mechanism');
-  if (hit.how === 'alias' || hit.how === 'formula') li.append(' ', el('span', { class: 'muted' }, `(matched ${hit.how} ${hit.term})`));
+  li.append(
+    ' — ',
+    el('strong', { class: 'role' }, s.role ? roleWords(s.role) : 'role not derived'),
+    ' in this mechanism',
+  );
+  if (hit.how === 'alias' || hit.how === 'formula')
+    li.append(' ', el('span', { class: 'muted' }, `(matched ${hit.how} ${hit.term})`));
   return li;
 }
 
@@ -156,7 +183,11 @@ function speciesItem(r: SpeciesResult, base: string): HTMLLIElement {
   const list = el('ul', { class: 'occurrences' });
   for (const o of r.occurrences) {
     const item = el('li', { 'data-mechanism': o.mechanism, 'data-role': o.role ?? '' });
-    item.append(el('strong', { class: 'role' }, o.role ? roleWords(o.role) : 'occurs'), ' in ', el('a', { href: `${base}${o.path}` }, o.title));
+    item.append(
+      el('strong', { class: 'role' }, o.role ? roleWords(o.role) : 'occurs'),
+      ' in ',
+      el('a', { href: `${base}${o.path}` }, o.title),
+    );
     if (o.status) item.append(' ', el('span', { class: `status status-${o.status}` }, o.status));
     list.append(item);
   }
@@ -164,7 +195,11 @@ function speciesItem(r: SpeciesResult, base: string): HTMLLIElement {
   return li;
 }
 
-function el<K extends keyof HTMLElementTagNameMap>(tag: K, attributes: Record<string, string> = {}, text?: string): HTMLElementTagNameMap[K] {
+function el<K extends keyof HTMLElementTagNameMap>(
+  tag: K,
+  attributes: Record<string, string> = {},
+  text?: string,
+): HTMLElementTagNameMap[K] {
   const node = document.createElement(tag);
   for (const [name, value] of Object.entries(attributes)) node.setAttribute(name, value);
   if (text !== undefined) node.textContent = text;

@@ -6,13 +6,19 @@ import { roleWords } from './search-doc.ts';
 export function outcomeSummary(outcome: SearchOutcome): string {
   const m = outcome.mechanisms.length;
   const s = outcome.species.length;
-  const filters = [outcome.filters.role && `role ${roleWords(outcome.filters.role)}`, outcome.filters.status && `status ${outcome.filters.status}`].filter(Boolean).join(', ');
+  const filters = [
+    outcome.filters.role && `role ${roleWords(outcome.filters.role)}`,
+    outcome.filters.status && `status ${outcome.filters.status}`,
+  ]
+    .filter(Boolean)
+    .join(', ');
   const within = filters ? ` (${filters})` : '';
   if (outcome.query === '' && !outcome.browsing) return 'Type a species name, formula, symbol, title or tag.';
   const counted = `${m} ${m === 1 ? 'mechanism' : 'mechanisms'} and ${s} species`;
   if (outcome.browsing) return `${counted}${within}.`;
   if (m + s === 0) {
-    const hint = outcome.didYouMean.length > 0 ? ` Formulas match with case: try ${outcome.didYouMean.join(' or ')}.` : '';
+    const hint =
+      outcome.didYouMean.length > 0 ? ` Formulas match with case: try ${outcome.didYouMean.join(' or ')}.` : '';
     return `Nothing matches “${outcome.query}”${within}.${hint}`;
   }
   return `${counted} match “${outcome.query}”${within}.`;

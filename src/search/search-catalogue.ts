@@ -6,7 +6,15 @@
  * everywhere. Results are ranked in tiers, so an exact formula always beats a near name.
  */
 import Fuse, { type FuseResult, type IFuseOptions } from 'fuse.js';
-import { FORMULA_KEYS, TEXT_KEYS, type MechanismDoc, type SearchBundle, type SearchDoc, type SearchOccurrence, type SpeciesDoc } from './search-doc.ts';
+import {
+  FORMULA_KEYS,
+  TEXT_KEYS,
+  type MechanismDoc,
+  type SearchBundle,
+  type SearchDoc,
+  type SearchOccurrence,
+  type SpeciesDoc,
+} from './search-doc.ts';
 
 export interface SearchFilters {
   role?: string;
@@ -71,16 +79,37 @@ export function isLiteralQuery(query: string): boolean {
 /** Creates the search over a bundle; the indexes are parsed once. */
 export function createCatalogueSearch(bundle: SearchBundle): (query: string, filters?: SearchFilters) => SearchOutcome {
   const docs = bundle.docs;
-  const base: IFuseOptions<SearchDoc> = { includeMatches: true, includeScore: true, ignoreLocation: true, shouldSort: false };
+  const base: IFuseOptions<SearchDoc> = {
+    includeMatches: true,
+    includeScore: true,
+    ignoreLocation: true,
+    shouldSort: false,
+  };
   const textIndex = () => Fuse.parseIndex<SearchDoc>(bundle.textIndex as never);
-  const loose = new Fuse(docs, { ...base, keys: [...TEXT_KEYS], threshold: TEXT_THRESHOLD, ignoreDiacritics: true }, textIndex());
+  const loose = new Fuse(
+    docs,
+    { ...base, keys: [...TEXT_KEYS], threshold: TEXT_THRESHOLD, ignoreDiacritics: true },
+    textIndex(),
+  );
   const literal = new Fuse(docs, { ...base, keys: [...TEXT_KEYS], threshold: 0, isCaseSensitive: true }, textIndex());
-  const formulas = new Fuse(docs, { ...base, keys: [...FORMULA_KEYS], threshold: 0, isCaseSensitive: true }, Fuse.parseIndex<SearchDoc>(bundle.formulaIndex as never));
+  const formulas = new Fuse(
+    docs,
+    { ...base, keys: [...FORMULA_KEYS], threshold: 0, isCaseSensitive: true },
+    Fuse.parseIndex<SearchDoc>(bundle.formulaIndex as never),
+  );
 
   return (rawQuery, filters = {}) => {
     const query = rawQuery.trim();
     const isLiteral = isLiteralQuery(query);
-    const outcome: SearchOutcome = { query, filters, literal: isLiteral, browsing: false, mechanisms: [], species: [], didYouMean: [] };
+    const outcome: SearchOutcome = {
+      query,
+      filters,
+      literal: isLiteral,
+      browsing: false,
+      mechanisms: [],
+      species: [],
+      didYouMean: [],
+    };
     const matched = new Map<number, Matched>();
     if (query === '') {
       if (!filters.role && !filters.status) return outcome;
@@ -101,10 +130,12 @@ export function createCatalogueSearch(bundle: SearchBundle): (query: string, fil
         if (result) outcome.species.push(result);
       }
     }
-    const order = (a: { score: number; doc: SearchDoc }, b: { score: number; doc: SearchDoc }) => a.score - b.score || a.doc.title.localeCompare(b.doc.title);
+    const order = (a: { score: number; doc: SearchDoc }, b: { score: number; doc: SearchDoc }) =>
+      a.score - b.score || a.doc.title.localeCompare(b.doc.title);
     outcome.mechanisms.sort(order);
     outcome.species.sort(order);
-    if (outcome.mechanisms.length + outcome.species.length === 0 && query !== '') outcome.didYouMean = sameButCase(docs, query);
+    if (outcome.mechanisms.length + outcome.species.length === 0 && query !== '')
+      outcome.didYouMean = sameButCase(docs, query);
     return outcome;
   };
 }
@@ -127,8 +158,10 @@ function collect(into: Map<number, Matched>, results: FuseResult<SearchDoc>[], q
       const score = rank(key, value, query, withCase, result.score ?? 1);
       if (score === undefined) continue;
       const index = match.refIndex ?? 0;
-      if (key === 'symbols' || key === 'formulas') addHit(entry, { index, how: key === 'symbols' ? 'symbol' : 'formula', term: value, score });
-      else if (key === 'names') addHit(entry, { index: doc.nameOwner[index] ?? 0, how: doc.nameKind[index] ?? 'name', term: value, score });
+      if (key === 'symbols' || key === 'formulas')
+        addHit(entry, { index, how: key === 'symbols' ? 'symbol' : 'formula', term: value, score });
+      else if (key === 'names')
+        addHit(entry, { index: doc.nameOwner[index] ?? 0, how: doc.nameKind[index] ?? 'name', term: value, score });
       else if (key === 'roles' && doc.kind === 'mechanism') addHit(entry, { index, how: 'role', term: value, score });
       else if (!entry.fields.includes(key)) entry.fields.push(key);
       entry.score = Math.min(entry.score, score);
@@ -175,7 +208,9 @@ function mechanismResult(doc: MechanismDoc, m: Matched, filters: SearchFilters):
     hits = hits.filter((h) => doc.species[h.index]?.role === filters.role);
     // Matched by title, tags or system (or browsing): show the species that play the role.
     if (hits.length === 0 && m.fields.length > 0) {
-      hits = doc.species.flatMap((s, index) => (s.role === filters.role ? [{ index, how: 'role' as const, term: s.symbol, score: m.score }] : []));
+      hits = doc.species.flatMap((s, index) =>
+        s.role === filters.role ? [{ index, how: 'role' as const, term: s.symbol, score: m.score }] : [],
+      );
     }
     if (hits.length === 0) return undefined;
   }
@@ -184,7 +219,9 @@ function mechanismResult(doc: MechanismDoc, m: Matched, filters: SearchFilters):
 }
 
 function speciesResult(doc: SpeciesDoc, m: Matched, filters: SearchFilters): SpeciesResult | undefined {
-  const occurrences = doc.occurrences.filter((o) => (!filters.role || o.role === filters.role) && (!filters.status || o.status === filters.status));
+  const occurrences = doc.occurrences.filter(
+    (o) => (!filters.role || o.role === filters.role) && (!filters.status || o.status === filters.status),
+  );
   if ((filters.role || filters.status) && occurrences.length === 0) return undefined;
   const best = [...m.hits].sort((a, b) => a.score - b.score)[0];
   const out: SpeciesResult = { kind: 'species', doc, score: m.score, occurrences };
@@ -197,6 +234,7 @@ function speciesResult(doc: SpeciesDoc, m: Matched, filters: SearchFilters): Spe
 function sameButCase(docs: readonly SearchDoc[], query: string): string[] {
   const lower = query.toLowerCase();
   const out = new Set<string>();
-  for (const doc of docs) for (const v of [...doc.symbols, ...doc.formulas]) if (v !== query && v.toLowerCase() === lower) out.add(v);
+  for (const doc of docs)
+    for (const v of [...doc.symbols, ...doc.formulas]) if (v !== query && v.toLowerCase() === lower) out.add(v);
   return [...out].sort();
 }

@@ -20,5 +20,7 @@ export function catalogueJson(views: readonly RecordView[]): CatalogueReport {
 
 /** A JSON response body, pretty-printed (the files are meant to be read as well as fetched). */
 export function jsonResponse(value: unknown): Response {
-  return new Response(`${JSON.stringify(value, null, 2)}\n`, { headers: { 'Content-Type': 'application/json; charset=utf-8' } });
+  return new Response(`${JSON.stringify(value, null, 2)}\n`, {
+    headers: { 'Content-Type': 'application/json; charset=utf-8' },
+  });
 }

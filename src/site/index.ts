@@ -10,7 +10,13 @@ export { escapeHtml, renderMath } from './math.ts';
 export { renderNotes } from './notes.ts';
 export { observationRows, type ObservationRow } from './observation-rows.ts';
 export { recordView, type ObservationView, type RecordView, type SpeciesView, type StepView } from './record-view.ts';
-export { loadCatalogue, siteCatalogue, type Catalogue, type SpeciesOccurrence, type SpeciesPage } from './site-catalogue.ts';
+export {
+  loadCatalogue,
+  siteCatalogue,
+  type Catalogue,
+  type SpeciesOccurrence,
+  type SpeciesPage,
+} from './site-catalogue.ts';
 export { readableSlug, speciesSlugs } from './species-slug.ts';
 export {
   anchorId,
@@ -28,7 +34,14 @@ export {
   type RuleGroup,
   type SeverityGroup,
 } from './summaries.ts';
-export { shortLabels, systemView, type Discriminator, type MatrixRow, type RivalColumn, type SystemView } from './system-view.ts';
+export {
+  shortLabels,
+  systemView,
+  type Discriminator,
+  type MatrixRow,
+  type RivalColumn,
+  type SystemView,
+} from './system-view.ts';
 export type { DiagnosticJson, ObservationJson, RateLawJson, RecordReport, Reference } from '../model/index.ts';
 export { toolVersion } from '../catalogue/index.ts';
 export { buildSearchIndex, type MechanismInput, type SpeciesInput } from '../search/build-index.ts';

@@ -30,7 +30,12 @@ interface MdNode {
 
 /** A flow math node shaped as remark-math shapes one (its hast is `pre > code.math-display`). */
 function displayMath(value: string): MdNode {
-  const code = { type: 'element', tagName: 'code', properties: { className: ['language-math', 'math-display'] }, children: [{ type: 'text', value }] };
+  const code = {
+    type: 'element',
+    tagName: 'code',
+    properties: { className: ['language-math', 'math-display'] },
+    children: [{ type: 'text', value }],
+  };
   return { type: 'math', value, data: { hName: 'pre', hChildren: [code] } };
 }
 
@@ -46,7 +51,8 @@ function remarkLoneDisplayMath() {
       node.children = node.children.map((child) => {
         const only = child.type === 'paragraph' && child.children?.length === 1 ? child.children[0] : undefined;
         const at = only?.position?.start.offset;
-        if (only?.type === 'inlineMath' && at !== undefined && source.startsWith('$$', at)) return displayMath(only.value ?? '');
+        if (only?.type === 'inlineMath' && at !== undefined && source.startsWith('$$', at))
+          return displayMath(only.value ?? '');
         walk(child);
         return child;
       });
@@ -61,7 +67,15 @@ const processor = unified()
   .use(remarkLoneDisplayMath)
   .use(remarkRehype)
   .use(rehypeSanitize, schema)
-  .use(rehypeKatex, { trust: false, strict: 'ignore', maxSize: 10, maxExpand: 200, output: 'htmlAndMathml', throwOnError: false, errorColor: '#8a1c1c' } as KatexOptions)
+  .use(rehypeKatex, {
+    trust: false,
+    strict: 'ignore',
+    maxSize: 10,
+    maxExpand: 200,
+    output: 'htmlAndMathml',
+    throwOnError: false,
+    errorColor: '#8a1c1c',
+  } as KatexOptions)
   .use(rehypeStringify);
 
 /** HTML of a record's notes. */

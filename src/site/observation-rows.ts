@@ -15,7 +15,13 @@ export function observationRows(checks: readonly ObservationJson[]): Observation
   const rows = new Map<string, ObservationRow>();
   for (const c of checks) {
     const key = JSON.stringify([c.id, c.species]);
-    const row = rows.get(key) ?? { observation: c.id, species: c.species, observed: c.observed, tolerance: c.tolerance, checks: {} };
+    const row = rows.get(key) ?? {
+      observation: c.id,
+      species: c.species,
+      observed: c.observed,
+      tolerance: c.tolerance,
+      checks: {},
+    };
     row.checks[c.method] = c;
     rows.set(key, row);
   }

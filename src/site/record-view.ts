@@ -100,16 +100,35 @@ export function recordView(checked: CatalogueRecord): RecordView {
     warnings: count('warning'),
     survives: false,
   };
-  if (record) Object.assign(view, { system: record.system, status: record.status }, record.added && { added: record.added }, record.notes && { notes: record.notes });
+  if (record)
+    Object.assign(
+      view,
+      { system: record.system, status: record.status },
+      record.added && { added: record.added },
+      record.notes && { notes: record.notes },
+    );
   const mechanism = derivation?.mechanism;
   if (mechanism && record) {
     view.steps = mechanism.steps.map((step): StepView => {
       const entry = record.steps[step.index]!;
       const balance = derivation.balance?.[step.index] ?? 'unchecked';
-      const out: StepView = { index: step.index, label: step.label, equation: step.text, reversible: step.reversible, rds: step.rds, molecularity: step.molecularity, balance };
+      const out: StepView = {
+        index: step.index,
+        label: step.label,
+        equation: step.text,
+        reversible: step.reversible,
+        rds: step.rds,
+        molecularity: step.molecularity,
+        balance,
+      };
       const sigma = derivation.stoichiometricNumbers?.[step.index];
       if (sigma !== undefined) out.sigma = sigma;
-      for (const [key, field] of [['k', 'k'], ['kRev', 'k_rev'], ['K', 'K']] as const) if (entry[field] !== undefined) out[key] = String(entry[field]);
+      for (const [key, field] of [
+        ['k', 'k'],
+        ['kRev', 'k_rev'],
+        ['K', 'K'],
+      ] as const)
+        if (entry[field] !== undefined) out[key] = String(entry[field]);
       if (entry.energy?.barrier !== undefined) out.barrier = String(entry.energy.barrier);
       if (entry.energy?.change !== undefined) out.change = String(entry.energy.change);
       if (entry.note) out.note = entry.note;
@@ -128,18 +147,36 @@ export function recordView(checked: CatalogueRecord): RecordView {
       return out;
     });
   }
-  if (derivation?.energy) view.energySvg = energyProfileSvg(derivation.energy, { idPrefix: `energy-${checked.id}`, title: `Energy profile of ${view.title}` });
+  if (derivation?.energy)
+    view.energySvg = energyProfileSvg(derivation.energy, {
+      idPrefix: `energy-${checked.id}`,
+      title: `Energy profile of ${view.title}`,
+    });
   const series = checked.series;
-  if (series?.status === 'ok') view.concentrationSvg = concentrationTimeSvg(series, { logTime: true, idPrefix: `concentration-${checked.id}`, title: `Simulated concentrations against time for ${view.title} (observation ${series.observation}, log time axis)` });
-  if (record && derivation?.mechanism) view.sbml = sbmlDocument(checked.id, record, derivation.mechanism, derivation.constants ?? new Map());
-  if (derivation?.overall) view.overallLatex = overallLatex(derivation.overall.reactants, derivation.overall.products, derivation.overall.catalysts);
-  const failed = (report.observations ?? []).some((o) => o.status === 'fail' && o.method === report.rate_laws?.[0]?.method);
+  if (series?.status === 'ok')
+    view.concentrationSvg = concentrationTimeSvg(series, {
+      logTime: true,
+      idPrefix: `concentration-${checked.id}`,
+      title: `Simulated concentrations against time for ${view.title} (observation ${series.observation}, log time axis)`,
+    });
+  if (record && derivation?.mechanism)
+    view.sbml = sbmlDocument(checked.id, record, derivation.mechanism, derivation.constants ?? new Map());
+  if (derivation?.overall)
+    view.overallLatex = overallLatex(
+      derivation.overall.reactants,
+      derivation.overall.products,
+      derivation.overall.catalysts,
+    );
+  const failed = (report.observations ?? []).some(
+    (o) => o.status === 'fail' && o.method === report.rate_laws?.[0]?.method,
+  );
   view.survives = view.errors === 0 && !failed;
   return view;
 }
 
 function observationView(o: Observation): ObservationView {
-  const pairs = (m: Record<string, string | number> | undefined) => Object.entries(m ?? {}).map(([k, v]): [string, string] => [k, String(v)]);
+  const pairs = (m: Record<string, string | number> | undefined) =>
+    Object.entries(m ?? {}).map(([k, v]): [string, string] => [k, String(v)]);
   const out: ObservationView = { id: o.id, concentrations: pairs(o.concentrations), orders: pairs(o.orders) };
   if (o.source !== undefined) out.source = o.source;
   if (o.T !== undefined) out.T = String(o.T);

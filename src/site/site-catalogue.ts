@@ -55,7 +55,9 @@ export function siteCatalogue(loaded: LoadedCatalogue): Catalogue {
   const slugs = Object.fromEntries(speciesSlugs(records.flatMap((r) => r.species.map((s) => s.symbol))));
   const systems = loaded.systems.map((s) => {
     const rivals = s.rivals.map((id) => records.find((r) => r.id === id)!);
-    const judged = new Map<string, ObservationJson[]>([...s.judged].map(([id, checks]) => [id, checks.map(observationJson)]));
+    const judged = new Map<string, ObservationJson[]>(
+      [...s.judged].map(([id, checks]) => [id, checks.map(observationJson)]),
+    );
     return systemView(s.system, rivals, judged);
   });
   return { records, species: speciesPages(records, slugs), systems, slugs };
@@ -65,14 +67,27 @@ function speciesPages(records: RecordView[], slugs: Record<string, string>): Spe
   const pages = new Map<string, SpeciesPage>();
   for (const record of records) {
     for (const s of record.species) {
-      const page = pages.get(s.symbol) ?? { symbol: s.symbol, slug: slugs[s.symbol]!, names: [], inchi: [], smiles: [], aliases: [], occurrences: [] };
+      const page = pages.get(s.symbol) ?? {
+        symbol: s.symbol,
+        slug: slugs[s.symbol]!,
+        names: [],
+        inchi: [],
+        smiles: [],
+        aliases: [],
+        occurrences: [],
+      };
       addUnique(page.names, s.name);
       addUnique(page.inchi, s.inchi);
       addUnique(page.smiles, s.smiles);
       for (const a of s.aliases) addUnique(page.aliases, a);
       if (s.formula && !page.formula) page.formula = s.formula;
       if (s.charge !== undefined && page.charge === undefined) page.charge = s.charge;
-      page.occurrences.push({ mechanism: record.id, title: record.title, ...(s.role && { role: s.role }), buffered: s.buffered });
+      page.occurrences.push({
+        mechanism: record.id,
+        title: record.title,
+        ...(s.role && { role: s.role }),
+        buffered: s.buffered,
+      });
       pages.set(s.symbol, page);
     }
   }

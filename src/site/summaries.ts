@@ -16,7 +16,9 @@ export interface RoleCount {
 export function roleCounts(occurrences: readonly SpeciesOccurrence[]): RoleCount[] {
   const counts = new Map<string, number>();
   for (const o of occurrences) counts.set(roleWords(o.role), (counts.get(roleWords(o.role)) ?? 0) + 1);
-  return [...counts].map(([role, count]) => ({ role, count })).sort((a, b) => roleRank(a.role) - roleRank(b.role) || a.role.localeCompare(b.role));
+  return [...counts]
+    .map(([role, count]) => ({ role, count }))
+    .sort((a, b) => roleRank(a.role) - roleRank(b.role) || a.role.localeCompare(b.role));
 }
 
 /** "catalyst in 3, intermediate in 1" (plus "buffered in 1" where the species is held constant). */
@@ -58,8 +60,16 @@ export interface OpenProblems {
 export function openProblems(records: readonly RecordView[]): OpenProblems {
   return {
     withErrors: records.filter((r) => r.errors > 0),
-    contradictions: records.flatMap((record) => (record.report.observations ?? []).filter((o) => o.status === 'fail').map((observation) => ({ record, observation }))),
-    approximations: records.flatMap((record) => record.report.diagnostics.filter((d) => d.rule.startsWith('approximation/')).map((diagnostic) => ({ record, diagnostic }))),
+    contradictions: records.flatMap((record) =>
+      (record.report.observations ?? [])
+        .filter((o) => o.status === 'fail')
+        .map((observation) => ({ record, observation })),
+    ),
+    approximations: records.flatMap((record) =>
+      record.report.diagnostics
+        .filter((d) => d.rule.startsWith('approximation/'))
+        .map((diagnostic) => ({ record, diagnostic })),
+    ),
   };
 }
 
@@ -80,7 +90,12 @@ export interface SeverityGroup {
 export function groupDiagnostics(records: readonly RecordView[]): SeverityGroup[] {
   const all = records
     .flatMap((record) => record.report.diagnostics.map((diagnostic) => ({ record, diagnostic })))
-    .sort((a, b) => (a.diagnostic.file ?? a.record.file).localeCompare(b.diagnostic.file ?? b.record.file) || (a.diagnostic.line ?? 0) - (b.diagnostic.line ?? 0) || (a.diagnostic.column ?? 0) - (b.diagnostic.column ?? 0));
+    .sort(
+      (a, b) =>
+        (a.diagnostic.file ?? a.record.file).localeCompare(b.diagnostic.file ?? b.record.file) ||
+        (a.diagnostic.line ?? 0) - (b.diagnostic.line ?? 0) ||
+        (a.diagnostic.column ?? 0) - (b.diagnostic.column ?? 0),
+    );
   const severities = [...new Set([...SEVERITIES, ...all.map((d) => d.diagnostic.severity)])];
   return severities.map((severity) => {
     const here = all.filter((d) => d.diagnostic.severity === severity);
@@ -89,23 +104,36 @@ export function groupDiagnostics(records: readonly RecordView[]): SeverityGroup[
       severity,
       anchor: anchorId(severity),
       count: here.length,
-      rules: rules.map((rule) => ({ rule, anchor: anchorId(`${severity}-${rule}`), items: here.filter((d) => d.diagnostic.rule === rule) })),
+      rules: rules.map((rule) => ({
+        rule,
+        anchor: anchorId(`${severity}-${rule}`),
+        items: here.filter((d) => d.diagnostic.rule === rule),
+      })),
     };
   });
 }
 
 /** Every rule with its count per severity, for the checks page's index by rule. */
-export function ruleIndex(groups: readonly SeverityGroup[]): { rule: string; entries: { severity: string; anchor: string; count: number }[] }[] {
+export function ruleIndex(
+  groups: readonly SeverityGroup[],
+): { rule: string; entries: { severity: string; anchor: string; count: number }[] }[] {
   const rules = [...new Set(groups.flatMap((g) => g.rules.map((r) => r.rule)))].sort();
   return rules.map((rule) => ({
     rule,
-    entries: groups.flatMap((g) => g.rules.filter((r) => r.rule === rule).map((r) => ({ severity: g.severity, anchor: r.anchor, count: r.items.length }))),
+    entries: groups.flatMap((g) =>
+      g.rules
+        .filter((r) => r.rule === rule)
+        .map((r) => ({ severity: g.severity, anchor: r.anchor, count: r.items.length })),
+    ),
   }));
 }
 
 /** A fragment id made of safe characters (`warning-observation/order` → `warning-observation-order`). */
 export function anchorId(text: string): string {
-  return text.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+  return text
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '');
 }
 
 /** `file:line:column` as a reader expects it, with the record's file as the catalogue names it (relative). */

@@ -56,7 +56,11 @@ export interface SystemView {
 }
 
 /** Builds the comparison; `judged` holds each rival's checks against the observations of all rivals. */
-export function systemView(system: string, rivals: RecordView[], judged: ReadonlyMap<string, ObservationJson[]> = new Map()): SystemView {
+export function systemView(
+  system: string,
+  rivals: RecordView[],
+  judged: ReadonlyMap<string, ObservationJson[]> = new Map(),
+): SystemView {
   const shorts = shortLabels(rivals.map((r) => r.id));
   const variants: string[] = [];
   const columns = rivals.map((r, i): RivalColumn => {
@@ -80,9 +84,22 @@ export function systemView(system: string, rivals: RecordView[], judged: Readonl
     const method = r.report.rate_laws?.[0]?.method;
     for (const o of (judged.get(r.id) ?? r.report.observations ?? []).filter((x) => x.method === method)) {
       const key = `${o.id}\u0000${o.species}`;
-      const recordedBy = rivals.filter((x) => (x.report.observations ?? []).some((own) => own.id === o.id && own.species === o.species)).map((x) => x.id);
-      const row = rows.get(key) ?? { observation: o.id, species: o.species, observed: o.observed, tolerance: o.tolerance, recordedBy, cells: {} };
-      row.cells[r.id] = { status: o.status, ...(o.predicted !== undefined && { predicted: o.predicted }), ...(o.range && { range: o.range }) };
+      const recordedBy = rivals
+        .filter((x) => (x.report.observations ?? []).some((own) => own.id === o.id && own.species === o.species))
+        .map((x) => x.id);
+      const row = rows.get(key) ?? {
+        observation: o.id,
+        species: o.species,
+        observed: o.observed,
+        tolerance: o.tolerance,
+        recordedBy,
+        cells: {},
+      };
+      row.cells[r.id] = {
+        status: o.status,
+        ...(o.predicted !== undefined && { predicted: o.predicted }),
+        ...(o.range && { range: o.range }),
+      };
       rows.set(key, row);
     }
   }
@@ -91,15 +108,28 @@ export function systemView(system: string, rivals: RecordView[], judged: Readonl
     const rival = rivals.find((r) => r.id === column.id)!;
     column.survives = rival.errors === 0 && matrix.every((row) => row.cells[column.id]?.status !== 'fail');
   }
-  return { system, rivals: columns, overallDiffers: variants.length > 1, matrix, discriminators: discriminators(rivals, columns) };
+  return {
+    system,
+    rivals: columns,
+    overallDiffers: variants.length > 1,
+    matrix,
+    discriminators: discriminators(rivals, columns),
+  };
 }
 
 /**
  * The overall change as a key independent of the order the terms are written in (`B + A -> P`
  * is the same change as `A + B -> P`); catalysts over the arrow are not part of the change.
  */
-function overallKey(overall: { reactants: Record<string, number | string>; products: Record<string, number | string> }): string {
-  const side = (m: Record<string, number | string>) => Object.entries(m).map(([s, c]) => `${String(c)} ${s}`).sort().join(' + ');
+function overallKey(overall: {
+  reactants: Record<string, number | string>;
+  products: Record<string, number | string>;
+}): string {
+  const side = (m: Record<string, number | string>) =>
+    Object.entries(m)
+      .map(([s, c]) => `${String(c)} ${s}`)
+      .sort()
+      .join(' + ');
   return `${side(overall.reactants)} -> ${side(overall.products)}`;
 }
 
@@ -126,7 +156,8 @@ function discriminators(rivals: RecordView[], columns: RivalColumn[]): Discrimin
         const oa = range(ordersA[species]);
         const ob = range(ordersB[species]);
         const difference = Math.max(Math.abs(oa[0] - ob[0]), Math.abs(oa[1] - ob[1]));
-        if (difference > 0 && (!best || difference > best.difference)) best = { a: a.id, b: b.id, species, orderA: oa, orderB: ob, difference };
+        if (difference > 0 && (!best || difference > best.difference))
+          best = { a: a.id, b: b.id, species, orderA: oa, orderB: ob, difference };
       }
       if (best) out.push(best);
     }
@@ -137,6 +168,7 @@ function discriminators(rivals: RecordView[], columns: RivalColumn[]): Discrimin
 /** Order limits as numbers; a species absent from a rate law has order 0. */
 function range(o: { low: number | string; high: number | string } | undefined): [number, number] {
   if (!o) return [0, 0];
-  const n = (x: number | string) => (typeof x === 'number' ? x : Number(x.split('/')[0]) / Number(x.split('/')[1] ?? 1));
+  const n = (x: number | string) =>
+    typeof x === 'number' ? x : Number(x.split('/')[0]) / Number(x.split('/')[1] ?? 1);
   return [n(o.low), n(o.high)];
 }

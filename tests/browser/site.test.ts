@@ -19,14 +19,25 @@ const ROOT = fileURLToPath(new URL('../..', import.meta.url));
 const ARTIFACTS = join(ROOT, 'test-artifacts');
 const hasChromium = existsSync(CHROMIUM);
 const inCI = Boolean(process.env['CI']);
-const suite = hasChromium || inCI
-  ? 'the catalogue site in Chromium'
-  : `the catalogue site in Chromium — SKIPPED: ${CHROMIUM} is missing (apt-get install chromium; CI always runs this suite)`;
+const suite =
+  hasChromium || inCI
+    ? 'the catalogue site in Chromium'
+    : `the catalogue site in Chromium — SKIPPED: ${CHROMIUM} is missing (apt-get install chromium; CI always runs this suite)`;
 
-if (!hasChromium && !inCI) console.warn(`browser tests skipped: ${CHROMIUM} is missing (apt-get install chromium to run them; CI always does)`);
+if (!hasChromium && !inCI)
+  console.warn(`browser tests skipped: ${CHROMIUM} is missing (apt-get install chromium to run them; CI always does)`);
 
-interface ApiRecord { id: string; title: string; roles?: Record<string, string> }
-interface ApiSpecies { symbol: string; slug: string; names: string[]; occurrences: { mechanism: string; role?: string }[] }
+interface ApiRecord {
+  id: string;
+  title: string;
+  roles?: Record<string, string>;
+}
+interface ApiSpecies {
+  symbol: string;
+  slug: string;
+  names: string[];
+  occurrences: { mechanism: string; role?: string }[];
+}
 
 describe.skipIf(!hasChromium && !inCI)(suite, () => {
   let out = '';
@@ -43,7 +54,14 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
     browser = await chromium.launch({
       executablePath: CHROMIUM,
       headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+        '--no-first-run',
+      ],
     });
     context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     context.on('request', (request) => requests.push(request.url()));
@@ -83,11 +101,16 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
   async function searchFor(page: Page, query: string): Promise<void> {
     await page.fill('#search-q', query);
     await page.press('#search-q', 'Enter');
-    await page.waitForFunction((q) => (document.querySelector('#search-count')?.textContent ?? '').includes(`“${q}”`), query);
+    await page.waitForFunction(
+      (q) => (document.querySelector('#search-count')?.textContent ?? '').includes(`“${q}”`),
+      query,
+    );
   }
 
-  const mechanismIds = (page: Page) => page.$$eval('#results-mechanisms > li', (items) => items.map((li) => li.getAttribute('data-id') ?? ''));
-  const speciesSymbols = (page: Page) => page.$$eval('#results-species > li', (items) => items.map((li) => li.getAttribute('data-symbol') ?? ''));
+  const mechanismIds = (page: Page) =>
+    page.$$eval('#results-mechanisms > li', (items) => items.map((li) => li.getAttribute('data-id') ?? ''));
+  const speciesSymbols = (page: Page) =>
+    page.$$eval('#results-species > li', (items) => items.map((li) => li.getAttribute('data-symbol') ?? ''));
   const shot = (page: Page, name: string) => page.screenshot({ path: join(ARTIFACTS, name), fullPage: true });
 
   it('home page loads without console errors and has the search box', async () => {
@@ -106,7 +129,10 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
     await page.waitForFunction(() => (document.querySelector('#search-count')?.textContent ?? '').includes('match'));
     expect(await page.inputValue('#search-q')).toBe('fluoroform');
     const ids = await mechanismIds(page);
-    expect(ids.slice(0, 2).sort()).toEqual(['fluoroform-chlorination-cf3-termination', 'fluoroform-chlorination-cl-termination']);
+    expect(ids.slice(0, 2).sort()).toEqual([
+      'fluoroform-chlorination-cf3-termination',
+      'fluoroform-chlorination-cl-termination',
+    ]);
     expect(await speciesSymbols(page)).toContain('CHF3');
     // The matched species is shown with its role in each mechanism.
     const hit = page.locator('li[data-id="fluoroform-chlorination-cl-termination"] li.hit[data-symbol="CHF3"]');
@@ -122,23 +148,37 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
 
   it('an alias finds the species and its mechanisms', async () => {
     const page = await openSearch('trifluoromethane');
-    expect((await mechanismIds(page)).sort()).toEqual(['fluoroform-chlorination-cf3-termination', 'fluoroform-chlorination-cl-termination']);
+    expect((await mechanismIds(page)).sort()).toEqual([
+      'fluoroform-chlorination-cf3-termination',
+      'fluoroform-chlorination-cl-termination',
+    ]);
     // CHF3 first; near names (trifluoromethyl radical, chlorotrifluoromethane) may follow it.
     expect((await speciesSymbols(page))[0]).toBe('CHF3');
     expect(await page.locator('li[data-kind="species"][data-symbol="CHF3"] li[data-role="reactant"]').count()).toBe(2);
-    expect(await page.locator('li[data-kind="species"][data-symbol="CHF3"]').innerText()).toContain('also trifluoromethane');
+    expect(await page.locator('li[data-kind="species"][data-symbol="CHF3"]').innerText()).toContain(
+      'also trifluoromethane',
+    );
     await page.close();
   }, 60_000);
 
   it('formulas match exactly and with case: Cl2 finds the chlorination mechanisms, CL2 finds nothing', async () => {
     const page = await openSearch('Cl2');
     const ids = await mechanismIds(page);
-    expect(ids.slice(0, 2).sort()).toEqual(['fluoroform-chlorination-cf3-termination', 'fluoroform-chlorination-cl-termination']);
-    expect(await page.locator('li[data-id="fluoroform-chlorination-cl-termination"] li.hit[data-symbol="Cl2"]').getAttribute('data-role')).toBe('reactant');
+    expect(ids.slice(0, 2).sort()).toEqual([
+      'fluoroform-chlorination-cf3-termination',
+      'fluoroform-chlorination-cl-termination',
+    ]);
+    expect(
+      await page
+        .locator('li[data-id="fluoroform-chlorination-cl-termination"] li.hit[data-symbol="Cl2"]')
+        .getAttribute('data-role'),
+    ).toBe('reactant');
     expect((await speciesSymbols(page))[0]).toBe('Cl2');
     await shot(page, 'search-cl2.png');
     // Every link in the results (mechanisms, species, systems) opens a page.
-    const hrefs = await page.locator('#search-results a').evaluateAll((links) => links.map((a) => a.getAttribute('href') ?? ''));
+    const hrefs = await page
+      .locator('#search-results a')
+      .evaluateAll((links) => links.map((a) => a.getAttribute('href') ?? ''));
     expect(await brokenLinks(page, hrefs)).toEqual([]);
 
     await searchFor(page, 'CL2');
@@ -164,20 +204,26 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
 
     await page.selectOption('#search-role', 'catalyst');
     await page.waitForFunction(() => location.search.includes('role=catalyst'));
-    const roles = await page.$$eval('#results-mechanisms li.hit', (items) => items.map((li) => li.getAttribute('data-role')));
+    const roles = await page.$$eval('#results-mechanisms li.hit', (items) =>
+      items.map((li) => li.getAttribute('data-role')),
+    );
     expect(roles.length).toBeGreaterThanOrEqual(3);
     expect(new Set(roles)).toEqual(new Set(['catalyst']));
 
     await page.selectOption('#search-status', 'favoured');
     await page.waitForFunction(() => location.search.includes('status=favoured'));
     expect(await mechanismIds(page)).toEqual(['kx7-hydroarylation-alkene-first']);
-    expect(await page.locator('#search-count').innerText()).toBe('1 mechanism and 1 species match “KX-7” (role catalyst, status favoured).');
+    expect(await page.locator('#search-count').innerText()).toBe(
+      '1 mechanism and 1 species match “KX-7” (role catalyst, status favoured).',
+    );
     await shot(page, 'search-filters.png');
 
     // ↓ from the box reaches the first result; Enter follows it.
     await page.focus('#search-q');
     await page.keyboard.press('ArrowDown');
-    expect(await page.evaluate(() => document.activeElement?.getAttribute('href'))).toBe('/m/kx7-hydroarylation-alkene-first/');
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('href'))).toBe(
+      '/m/kx7-hydroarylation-alkene-first/',
+    );
     await Promise.all([page.waitForURL(/\/m\/kx7-hydroarylation-alkene-first\/$/), page.keyboard.press('Enter')]);
     await page.close();
   }, 60_000);
@@ -185,9 +231,14 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
   it('a link with ?q=&role=&status= restores the search', async () => {
     const page = await openSearch();
     await page.goto(`${server.origin}/search/?q=&role=inhibitor`);
-    await page.waitForFunction(() => (document.querySelector('#search-count')?.textContent ?? '').includes('role inhibitor'));
+    await page.waitForFunction(() =>
+      (document.querySelector('#search-count')?.textContent ?? '').includes('role inhibitor'),
+    );
     expect(await page.locator('#search-role').inputValue()).toBe('inhibitor');
-    expect((await mechanismIds(page)).sort()).toEqual(['isomerase-mimic-product-complex', 'isomerase-mimic-single-complex']);
+    expect((await mechanismIds(page)).sort()).toEqual([
+      'isomerase-mimic-product-complex',
+      'isomerase-mimic-single-complex',
+    ]);
     expect(await speciesSymbols(page)).toEqual(['I']);
     await page.close();
   }, 60_000);
@@ -199,7 +250,10 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
     await page.goto(`${server.origin}/search/?q=fluoroform`);
     const notice = page.locator('.no-script');
     expect(await notice.isVisible()).toBe(true);
-    expect(await notice.locator('a').evaluateAll((links) => links.map((a) => a.getAttribute('href')))).toEqual(['/species/', '/systems/']);
+    expect(await notice.locator('a').evaluateAll((links) => links.map((a) => a.getAttribute('href')))).toEqual([
+      '/species/',
+      '/systems/',
+    ]);
     expect(await page.locator('#catalogue-search').isVisible()).toBe(false);
     await shot(page, 'search-no-javascript.png');
     await plain.close();
@@ -228,7 +282,9 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
 
   it("a mechanism page's species links open species pages", async () => {
     const page = await open('/m/kx7-hydroarylation-alkene-first/');
-    const hrefs = await page.locator('section:has(> h2#species) a').evaluateAll((links) => links.map((a) => a.getAttribute('href') ?? ''));
+    const hrefs = await page
+      .locator('section:has(> h2#species) a')
+      .evaluateAll((links) => links.map((a) => a.getAttribute('href') ?? ''));
     expect(hrefs.length).toBeGreaterThan(0);
     expect(await brokenLinks(page, hrefs), 'species links that do not resolve').toEqual([]);
     await page.close();
@@ -238,7 +294,11 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
     const page = await open('/s/cat/');
     const rows = page.locator('tr[data-mechanism]');
     expect(await rows.count()).toBe(3);
-    expect(await rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-role')))).toEqual(['catalyst', 'catalyst', 'catalyst']);
+    expect(await rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-role')))).toEqual([
+      'catalyst',
+      'catalyst',
+      'catalyst',
+    ]);
     expect(await page.locator('main').innerText()).toMatch(/catalyst in 3/i);
     await shot(page, 'species.png');
     expect(consoleErrors).toEqual([]);
@@ -255,9 +315,14 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
       for (const [symbol, role] of Object.entries(record.roles ?? {})) {
         for (const query of [symbol, ...(names.get(symbol) ?? []).slice(0, 1)]) {
           await searchFor(page, query);
-          const hit = page.locator(`#results-mechanisms > li[data-id="${record.id}"] li.hit[data-symbol="${cssString(symbol)}"]`);
+          const hit = page.locator(
+            `#results-mechanisms > li[data-id="${record.id}"] li.hit[data-symbol="${cssString(symbol)}"]`,
+          );
           if ((await hit.count()) === 0) missed.push(`${record.id}: “${query}” (${symbol})`);
-          else if ((await hit.first().getAttribute('data-role')) !== role) missed.push(`${record.id}: “${query}” shows ${symbol} as ${await hit.first().getAttribute('data-role')}, not ${role}`);
+          else if ((await hit.first().getAttribute('data-role')) !== role)
+            missed.push(
+              `${record.id}: “${query}” shows ${symbol} as ${await hit.first().getAttribute('data-role')}, not ${role}`,
+            );
           else found.add(record.id);
         }
       }
@@ -293,8 +358,14 @@ async function catalogueFacts(page: Page): Promise<{ records: ApiRecord[]; names
   const species = (await get('/api/species.json')) as { species: ApiSpecies[] } | undefined;
   if (api && species) return { records: api.records, names: new Map(species.species.map((s) => [s.symbol, s.names])) };
   const bundle = (await get('/search/index.json')) as { docs: SearchDoc[] };
-  const records = bundle.docs.flatMap((d) => (d.kind === 'mechanism' ? [{ id: d.id, title: d.title, roles: Object.fromEntries(d.species.map((s) => [s.symbol, s.role ?? ''])) }] : []));
-  const names = new Map(bundle.docs.flatMap((d) => (d.kind === 'species' ? [[d.symbol, d.identity.names] as const] : [])));
+  const records = bundle.docs.flatMap((d) =>
+    d.kind === 'mechanism'
+      ? [{ id: d.id, title: d.title, roles: Object.fromEntries(d.species.map((s) => [s.symbol, s.role ?? ''])) }]
+      : [],
+  );
+  const names = new Map(
+    bundle.docs.flatMap((d) => (d.kind === 'species' ? [[d.symbol, d.identity.names] as const] : [])),
+  );
   return { records, names };
 }
 

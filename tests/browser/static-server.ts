@@ -60,7 +60,10 @@ export async function serveStatic(root: string): Promise<StaticServer> {
         response.writeHead(404, { 'Content-Type': 'text/plain' }).end('not found');
         return;
       }
-      response.writeHead(200, { 'Content-Type': TYPES[extname(file)] ?? 'application/octet-stream', 'Content-Length': info.size });
+      response.writeHead(200, {
+        'Content-Type': TYPES[extname(file)] ?? 'application/octet-stream',
+        'Content-Length': info.size,
+      });
       if (request.method === 'HEAD') response.end();
       else createReadStream(file).pipe(response);
     })();

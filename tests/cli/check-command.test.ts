@@ -21,7 +21,7 @@ describe('mechatlas check', () => {
 
   it('reports an unbalanced step with file, line, column and rule, and exits 1', async () => {
     const file = 'tests/fixtures/not-ok/balance-atoms.yaml';
-    const { code, stdout } = (await runMain(['check', file]));
+    const { code, stdout } = await runMain(['check', file]);
     expect(code).toBe(1);
     const rows = stdout.trim().split('\n');
     expect(rows[0]).toMatch(/^tests\/fixtures\/not-ok\/balance-atoms\.yaml:7:\d+ {2}error {2}.+ {2}balance\/atoms$/);
@@ -29,7 +29,13 @@ describe('mechatlas check', () => {
   });
 
   it('checks every record even when some fail', async () => {
-    const { code, stdout } = (await runMain(['check', '--format', 'json', 'tests/fixtures/not-ok/balance-atoms.yaml', 'tests/fixtures/ok/termolecular-note.yaml']));
+    const { code, stdout } = await runMain([
+      'check',
+      '--format',
+      'json',
+      'tests/fixtures/not-ok/balance-atoms.yaml',
+      'tests/fixtures/ok/termolecular-note.yaml',
+    ]);
     const report = JSON.parse(stdout);
     expect(code).toBe(1);
     expect(report.records.map((r: { id: string }) => r.id)).toEqual(['balance-atoms', 'termolecular-note']);
@@ -38,7 +44,9 @@ describe('mechatlas check', () => {
   });
 
   it('writes SARIF 2.1.0 and markdown', async () => {
-    const sarif = JSON.parse((await runMain(['check', '--format', 'sarif', 'tests/fixtures/not-ok/balance-charge.yaml'])).stdout);
+    const sarif = JSON.parse(
+      (await runMain(['check', '--format', 'sarif', 'tests/fixtures/not-ok/balance-charge.yaml'])).stdout,
+    );
     expect(sarif.version).toBe('2.1.0');
     expect(sarif.runs[0].results[0]).toMatchObject({ ruleId: 'balance/charge', level: 'error' });
     expect(sarif.runs[0].results[0].locations[0].physicalLocation.region.startLine).toBe(6);
@@ -56,7 +64,7 @@ describe('mechatlas check', () => {
   it('never crashes on a file that is not YAML at all', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'mechatlas-'));
     writeFileSync(join(dir, 'garbage.yaml'), '\u0000\u0001 ::: [unclosed\n\t- {');
-    const { code, stdout, stderr } = (await runMain(['check', '--format', 'json', dir]));
+    const { code, stdout, stderr } = await runMain(['check', '--format', 'json', dir]);
     expect(stderr).toBe('');
     expect(code).toBe(1);
     expect(JSON.parse(stdout).records[0].diagnostics[0].rule).toBe('record/yaml');
@@ -69,7 +77,7 @@ describe('mechatlas new', () => {
     expect((await runMain(['new', 'my-proposal', '--dir', dir])).code).toBe(0);
     const file = join(dir, 'my-proposal.yaml');
     expect(readFileSync(file, 'utf8')).toContain('title:');
-    const check = (await runMain(['check', file]));
+    const check = await runMain(['check', file]);
     expect(check.stdout).toContain('0 errors');
     expect((await runMain(['new', 'my-proposal', '--dir', dir])).code).toBe(2);
     expect((await runMain(['new', 'Bad Id', '--dir', dir])).code).toBe(2);

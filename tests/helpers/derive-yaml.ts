@@ -10,8 +10,13 @@ export function deriveYaml(yaml: string, id = 'inline-record'): Derivation {
 }
 
 /** The overall equation's sides as plain objects with numeric coefficients. */
-export function overallSides(d: Derivation): { reactants: Record<string, number>; products: Record<string, number>; catalysts: string[] } {
-  const side = (m: ReadonlyMap<string, { toNumber(): number }>) => Object.fromEntries([...m].map(([k, v]) => [k, v.toNumber()]));
+export function overallSides(d: Derivation): {
+  reactants: Record<string, number>;
+  products: Record<string, number>;
+  catalysts: string[];
+} {
+  const side = (m: ReadonlyMap<string, { toNumber(): number }>) =>
+    Object.fromEntries([...m].map(([k, v]) => [k, v.toNumber()]));
   if (!d.overall) throw new Error(`no overall equation: ${JSON.stringify(d.diagnostics)}`);
   return { reactants: side(d.overall.reactants), products: side(d.overall.products), catalysts: d.overall.catalysts };
 }

@@ -51,7 +51,11 @@ export function relativelyClose(a: number, b: number, tolerance: number): boolea
  * Expects the engine's exact law to have exactly the formula's symbols and to equal it at
  * `points` random positive points (relative tolerance 1e-12 by default).
  */
-export function expectSameLaw(expression: RationalFunction | undefined, formula: Formula, { points = 8, seed = 1, tolerance = 1e-12 } = {}): void {
+export function expectSameLaw(
+  expression: RationalFunction | undefined,
+  formula: Formula,
+  { points = 8, seed = 1, tolerance = 1e-12 } = {},
+): void {
   expect(expression, 'the engine gave no exact expression').toBeDefined();
   expect([...expression!.symbols()].sort()).toEqual([...formula.symbols].sort());
   const random = seededRandom(seed);
@@ -59,7 +63,10 @@ export function expectSameLaw(expression: RationalFunction | undefined, formula:
     const point = randomPoint(formula.symbols, random);
     const ours = expression!.evaluate(point);
     const expected = formula.rate(lookupIn(point));
-    expect(relativelyClose(ours, expected, tolerance), `at ${JSON.stringify(Object.fromEntries(point))}: engine ${ours}, formula ${expected}`).toBe(true);
+    expect(
+      relativelyClose(ours, expected, tolerance),
+      `at ${JSON.stringify(Object.fromEntries(point))}: engine ${ours}, formula ${expected}`,
+    ).toBe(true);
   }
 }
 

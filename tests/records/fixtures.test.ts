@@ -17,8 +17,7 @@ interface Found {
   line: number | undefined;
 }
 
-const byPosition = (a: Found, b: Found): number =>
-  (a.line ?? 0) - (b.line ?? 0) || a.rule.localeCompare(b.rule);
+const byPosition = (a: Found, b: Found): number => (a.line ?? 0) - (b.line ?? 0) || a.rule.localeCompare(b.rule);
 
 describe('not-ok record fixtures', () => {
   const names = yamlFiles(notOkDir, 'record-');

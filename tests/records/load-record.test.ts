@@ -5,12 +5,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { diagnostic } from '../../src/model/diagnostic.ts';
 import * as records from '../../src/records/index.ts';
-import {
-  findRecordFiles,
-  loadRecordFile,
-  loadRecordSource,
-  placeDiagnostics,
-} from '../../src/records/index.ts';
+import { findRecordFiles, loadRecordFile, loadRecordSource, placeDiagnostics } from '../../src/records/index.ts';
 
 const valid = 'title: t\nsystem: fixture\nstatus: proposed\nsteps:\n  - equation: A + B -> C\n';
 
@@ -58,9 +53,7 @@ describe('loadRecordSource', () => {
 
   it('rejects a file name that is not a valid id, at line 1', () => {
     const loaded = loadRecordSource('Halide_Route.yaml', valid);
-    expect(loaded.diagnostics).toMatchObject([
-      { rule: 'record/schema', line: 1, column: 1, actual: 'Halide_Route' },
-    ]);
+    expect(loaded.diagnostics).toMatchObject([{ rule: 'record/schema', line: 1, column: 1, actual: 'Halide_Route' }]);
     expect(loaded.diagnostics[0]?.note).toContain('halide-route.yaml');
     expect(loaded.record).toBeUndefined();
   });
@@ -72,26 +65,12 @@ describe('loadRecordSource', () => {
 
   it('keeps the record when YAML only warns', () => {
     const loaded = loadRecordSource('tagged.yaml', valid.replace('title: t', 'title: !note t'));
-    expect(loaded.diagnostics).toMatchObject([
-      { rule: 'record/yaml', severity: 'warning', line: 1 },
-    ]);
+    expect(loaded.diagnostics).toMatchObject([{ rule: 'record/yaml', severity: 'warning', line: 1 }]);
     expect(loaded.record?.title).toBe('t');
   });
 
   it('never throws on odd input', () => {
-    for (const source of [
-      '',
-      '---',
-      '...',
-      '[',
-      '"',
-      '&a',
-      '*a',
-      '? ? ?',
-      '\u0000',
-      'a: !!binary x',
-      '__proto__: 1',
-    ]) {
+    for (const source of ['', '---', '...', '[', '"', '&a', '*a', '? ? ?', '\u0000', 'a: !!binary x', '__proto__: 1']) {
       expect(() => loadRecordSource('odd.yaml', source)).not.toThrow();
       expect(loadRecordSource('odd.yaml', source).record).toBeUndefined();
     }
@@ -99,8 +78,7 @@ describe('loadRecordSource', () => {
 });
 
 describe('placeDiagnostics', () => {
-  const source =
-    'title: t\nsystem: fixture\nstatus: proposed\nsteps:\n  - equation: "A + B -> C"\n    k: 2\n';
+  const source = 'title: t\nsystem: fixture\nstatus: proposed\nsteps:\n  - equation: "A + B -> C"\n    k: 2\n';
   const loaded = loadRecordSource('placed.yaml', source);
 
   it('sets file, line and column from the path and offset', () => {

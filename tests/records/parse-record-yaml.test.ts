@@ -28,9 +28,7 @@ describe('parseRecordYaml', () => {
   });
 
   it('reports a tab used for indentation', () => {
-    expect(yamlProblems('a:\n\t- 1\n')).toMatchObject([
-      { rule: 'record/yaml', severity: 'error', line: 2 },
-    ]);
+    expect(yamlProblems('a:\n\t- 1\n')).toMatchObject([{ rule: 'record/yaml', severity: 'error', line: 2 }]);
   });
 
   it('reports more than one document', () => {
@@ -43,17 +41,13 @@ describe('parseRecordYaml', () => {
 
   it('warns about an unknown tag but still reads the value', () => {
     const parsed = parseRecordYaml('a: !chem H2O\n');
-    expect(parsed.diagnostics).toMatchObject([
-      { rule: 'record/yaml', severity: 'warning', line: 1, column: 4 },
-    ]);
+    expect(parsed.diagnostics).toMatchObject([{ rule: 'record/yaml', severity: 'warning', line: 1, column: 4 }]);
     expect(parsed.data).toEqual({ a: 'H2O' });
   });
 
   it('reports an alias without an anchor instead of throwing', () => {
     const parsed = parseRecordYaml('a: 1\nb: *missing\n');
-    expect(parsed.diagnostics).toMatchObject([
-      { rule: 'record/yaml', line: 2, column: 4, actual: '*missing' },
-    ]);
+    expect(parsed.diagnostics).toMatchObject([{ rule: 'record/yaml', line: 2, column: 4, actual: '*missing' }]);
     expect(parsed).not.toHaveProperty('data');
   });
 
@@ -73,9 +67,7 @@ describe('parseRecordYaml', () => {
     const row = (alias: string) => `[${Array(10).fill(alias).join(', ')}]`;
     const source = `a: &a ${row('x')}\nb: &b ${row('*a')}\nc: &c ${row('*b')}\nd: ${row('*c')}\n`;
     const parsed = parseRecordYaml(source);
-    expect(parsed.diagnostics).toMatchObject([
-      { rule: 'record/yaml', severity: 'error', line: 2, column: 8 },
-    ]);
+    expect(parsed.diagnostics).toMatchObject([{ rule: 'record/yaml', severity: 'error', line: 2, column: 8 }]);
     expect(parsed).not.toHaveProperty('data');
   });
 

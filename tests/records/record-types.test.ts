@@ -11,13 +11,9 @@ const run = promisify(execFile);
 
 describe('generated record types', () => {
   it('src/model/mechanism-record.ts is up to date with the schema (run `npm run types`)', async () => {
-    const { stdout } = await run(
-      process.execPath,
-      ['scripts/generate-record-types.mjs', '--stdout'],
-      {
-        cwd: root,
-      },
-    );
+    const { stdout } = await run(process.execPath, ['scripts/generate-record-types.mjs', '--stdout'], {
+      cwd: root,
+    });
     const committed = await readFile(`${root}src/model/mechanism-record.ts`, 'utf8');
     expect(committed).toBe(stdout);
   });
@@ -37,8 +33,7 @@ describe('generated record types', () => {
       'Approximation',
       'QuantityText',
     ];
-    for (const name of names)
-      expect(source).toMatch(new RegExp(`export (type|interface) ${name}\\b`));
+    for (const name of names) expect(source).toMatch(new RegExp(`export (type|interface) ${name}\\b`));
   });
 });
 
@@ -72,9 +67,7 @@ describe('the schema', () => {
 describe('demo records in content/mechanisms', () => {
   it('all validate against the schema (there may be none yet)', async () => {
     const dir = `${root}content/mechanisms/`;
-    const names = (await readdir(dir).catch(() => [] as string[])).filter((n) =>
-      /\.ya?ml$/.test(n),
-    );
+    const names = (await readdir(dir).catch(() => [] as string[])).filter((n) => /\.ya?ml$/.test(n));
     for (const name of names) {
       const loaded = await loadRecordFile(`${dir}${name}`);
       const problems = loaded.diagnostics.filter((d) => d.rule.startsWith('record/'));

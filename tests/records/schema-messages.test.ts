@@ -94,12 +94,7 @@ describe('describeSchemaErrors', () => {
       ['steps', 0, 'k'],
       ['string', 'number'],
     ],
-    [
-      'a flag written yes',
-      { steps: [{ equation: 'A -> B', rds: 'yes' }] },
-      ['steps', 0, 'rds'],
-      'boolean',
-    ],
+    ['a flag written yes', { steps: [{ equation: 'A -> B', rds: 'yes' }] }, ['steps', 0, 'rds'], 'boolean'],
   ])('reports %s with the expected type', (_name, change, path, type) => {
     const [problem] = problems({ ...base, ...change });
     expect(problem).toMatchObject({ path, at: 'value', expected: type });
@@ -107,11 +102,7 @@ describe('describeSchemaErrors', () => {
 
   it.each([
     ['a system that is not a slug', { system: 'Peroxide Route' }, ['system']],
-    [
-      'an observation id that is not a slug',
-      { observations: [{ id: 'Run 1' }] },
-      ['observations', 0, 'id'],
-    ],
+    ['an observation id that is not a slug', { observations: [{ id: 'Run 1' }] }, ['observations', 0, 'id']],
     [
       'a DOI with its resolver prefix',
       { references: [{ doi: 'https://doi.org/10.1000/x' }] },
@@ -120,33 +111,20 @@ describe('describeSchemaErrors', () => {
     ['an impossible date', { added: '2026-02-30' }, ['added']],
     ['an empty title', { title: '' }, ['title']],
     ['an empty list of steps', { steps: [] }, ['steps']],
-    [
-      'a step label with spaces',
-      { steps: [{ equation: 'A -> B', label: 'step one' }] },
-      ['steps', 0, 'label'],
-    ],
-    [
-      'an InChI without its prefix',
-      { species: { A: { inchi: '1S/H2O/h1H2' } } },
-      ['species', 'A', 'inchi'],
-    ],
+    ['a step label with spaces', { steps: [{ equation: 'A -> B', label: 'step one' }] }, ['steps', 0, 'label']],
+    ['an InChI without its prefix', { species: { A: { inchi: '1S/H2O/h1H2' } } }, ['species', 'A', 'inchi']],
   ])('reports %s at the value', (_name, change, path) => {
-    expect(problems({ ...base, ...change })).toEqual([
-      expect.objectContaining({ path, at: 'value' }),
-    ]);
+    expect(problems({ ...base, ...change })).toEqual([expect.objectContaining({ path, at: 'value' })]);
   });
 
   it('reports a document that is not a mapping at the root', () => {
-    expect(problems(['a', 'b'])).toEqual([
-      expect.objectContaining({ path: [], expected: 'object' }),
-    ]);
+    expect(problems(['a', 'b'])).toEqual([expect.objectContaining({ path: [], expected: 'object' })]);
     expect(problems(null)).toEqual([expect.objectContaining({ path: [], expected: 'object' })]);
   });
 
   it('writes every message as a lower-case phrase that starts with the path', () => {
     const found = problems({ ...base, status: 'x', tags: 'y', steps: [{ rsd: 1, times: -1 }] });
-    for (const problem of found)
-      expect(problem.message.startsWith(pathWords(problem.path.slice(0, 2)))).toBe(true);
+    for (const problem of found) expect(problem.message.startsWith(pathWords(problem.path.slice(0, 2)))).toBe(true);
   });
 });
 
@@ -177,8 +155,7 @@ describe('schema diagnostics from loadRecordSource', () => {
   });
 
   it('come in source order, not schema order', () => {
-    const source =
-      'title: t\nsystem: Bad\nstatus: maybe\nsteps:\n  - equation: A -> B\n    rsd: 1\n';
+    const source = 'title: t\nsystem: Bad\nstatus: maybe\nsteps:\n  - equation: A -> B\n    rsd: 1\n';
     const lines = loadRecordSource('fixture.yaml', source).diagnostics.map((d) => d.line);
     expect(lines).toEqual([2, 3, 6]);
   });

@@ -29,9 +29,7 @@ describe('locate', () => {
   });
 
   it('accepts list indices as numbers or as numeric strings (JSON Pointer segments)', () => {
-    expect(locator.locate(['steps', '1', 'equation'])).toEqual(
-      locator.locate(['steps', 1, 'equation']),
-    );
+    expect(locator.locate(['steps', '1', 'equation'])).toEqual(locator.locate(['steps', 1, 'equation']));
   });
 
   it('falls back to the nearest ancestor that exists', () => {

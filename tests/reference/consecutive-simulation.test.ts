@@ -46,7 +46,7 @@ describe.each([
     const end = series.times[series.times.length - 1]!;
     expect(end / 10 ** Math.floor(Math.log10(end))).toBeOneOf([1, 2, 5]);
     // 99 % of C needs about ln(100)/k₁ when the first step is the slow one; the span stays within a few of those.
-    expect(end).toBeLessThan(5 * Math.log(100) / Math.min(k1, k2));
+    expect(end).toBeLessThan((5 * Math.log(100)) / Math.min(k1, k2));
   });
 
   it('has log-spaced early times, reaching well before the faster step', () => {
@@ -85,6 +85,11 @@ describe('a record that cannot be simulated', () => {
     const d = deriveYaml(text);
     const record = loadRecordSource('missing.yaml', text).record!;
     const series = concentrationSeries(simulationBasis(d)!, new Map([['k_1', 1]]), record.observations![0]!);
-    expect(series).toMatchObject({ status: 'skipped', message: 'not simulated: needs the rate constant of step 2', times: [], values: [] });
+    expect(series).toMatchObject({
+      status: 'skipped',
+      message: 'not simulated: needs the rate constant of step 2',
+      times: [],
+      values: [],
+    });
   });
 });

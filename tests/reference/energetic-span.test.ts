@@ -62,7 +62,11 @@ function analyse(yaml: string) {
 }
 
 /** rate/[Cat]_T of the exact steady-state law at 1 M of every reactant and product. */
-function steadyStateTurnover(steps: CycleStep[], derivation: ReturnType<typeof deriveMechanism>, reversibleLast = true): number {
+function steadyStateTurnover(
+  steps: CycleStep[],
+  derivation: ReturnType<typeof deriveMechanism>,
+  reversibleLast = true,
+): number {
   const law = derivation.rateLaws?.find((l) => l.law.method === 'steady_state')?.law.expression;
   if (!law) throw new Error(`no steady-state law: ${JSON.stringify(derivation.diagnostics)}`);
   const values = new Map<string, number>([['[Cat]_T', 1]]);
@@ -104,12 +108,21 @@ describe('energetic span against the exact steady state', () => {
     const { energy, derivation, diagnostics } = analyse(cycleRecord(steps));
     // States by hand: 0, TS 70, −40, TS 20, −60, TS −10, −30 (ΔG_r = −30). Spans:
     // TS(add) − Y + ΔG_r = 70 + 60 − 30 = 100 beats every TS-after-intermediate pair (≤ 70).
-    expect(energy).toMatchObject({ kind: 'cycle', span: 100, tdts_step: 'add', tdts_state: 1, tdi_state: 2, overall_change: -30 });
+    expect(energy).toMatchObject({
+      kind: 'cycle',
+      span: 100,
+      tdts_step: 'add',
+      tdts_state: 1,
+      tdi_state: 2,
+      overall_change: -30,
+    });
     const exact = steadyStateTurnover(steps, derivation);
     expect(Math.abs(energy!.tof_per_s! / exact - 1)).toBeLessThan(1e-9);
     expect(energy!.tof_span_per_s).toBeCloseTo(eyring(100), 20);
     // The declared rds (the step out of the deepest intermediate) is not where the span points.
-    expect(diagnostics).toMatchObject([{ rule: 'energy/rds-span', severity: 'warning', path: ['steps', 2, 'rds'], actual: 'out', expected: 'add' }]);
+    expect(diagnostics).toMatchObject([
+      { rule: 'energy/rds-span', severity: 'warning', path: ['steps', 2, 'rds'], actual: 'out', expected: 'add' },
+    ]);
     // Degree of TOF control: the TDTS and TDI dominate, and each set sums to 1.
     const x = energy!.control!;
     expect(x.transition_states.reduce((a, t) => a + t.x_tof, 0)).toBeCloseTo(1, 12);

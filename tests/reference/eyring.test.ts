@@ -27,7 +27,8 @@ function constantsOf(yaml: string) {
   return eyringStepConstants(loaded.record, mechanism);
 }
 
-const header = (energy: string) => `title: eyring case\nsystem: eyring\nstatus: proposed\nnotation: labels\n${energy}steps:\n`;
+const header = (energy: string) =>
+  `title: eyring case\nsystem: eyring\nstatus: proposed\nnotation: labels\n${energy}steps:\n`;
 
 describe('Eyring equation', () => {
   it('k_B T/h at 298.15 K is 6.2124e12 s^-1 and the engine uses the same constants', () => {
@@ -45,7 +46,9 @@ describe('Eyring equation', () => {
   });
 
   it('reads kcal/mol: 20 kcal/mol is 83.68 kJ/mol (thermochemical calorie, 4.184 J exactly)', () => {
-    const { constants } = constantsOf(`${header('')}  - { equation: A -> B, energy: { barrier: 20 kcal/mol, change: -5 kcal/mol } }\n`);
+    const { constants } = constantsOf(
+      `${header('')}  - { equation: A -> B, energy: { barrier: 20 kcal/mol, change: -5 kcal/mol } }\n`,
+    );
     const expected = ((K_B * T) / H) * Math.exp(-83_680 / (R * T));
     expect(expected).toBeCloseTo(0.013588, 6);
     expect(relativeError(constants[0]!.k, expected)).toBeLessThan(1e-12);
@@ -80,7 +83,9 @@ describe('Eyring equation', () => {
   });
 
   it('a bad temperature or standard state is a diagnostic, not an exception', () => {
-    const { diagnostics, conditions } = constantsOf(`${header('energy: { T: 5 kJ/mol, standard_state: 3 s }\n')}  - { equation: A -> B }\n`);
+    const { diagnostics, conditions } = constantsOf(
+      `${header('energy: { T: 5 kJ/mol, standard_state: 3 s }\n')}  - { equation: A -> B }\n`,
+    );
     expect(diagnostics).toMatchObject([
       { rule: 'energy/profile', severity: 'error', path: ['energy', 'T'] },
       { rule: 'energy/profile', severity: 'error', path: ['energy', 'standard_state'] },

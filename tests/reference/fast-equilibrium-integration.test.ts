@@ -40,18 +40,27 @@ const michaelisMenten: OdeSystem = {
     dydt[P] = turnover;
   },
   jacobian(_t, y, J) {
-    J.set([
-      [-k1 * y[S]!, -k1 * y[E]!, kMinus1 + k2, 0],
-      [-k1 * y[S]!, -k1 * y[E]!, kMinus1, 0],
-      [k1 * y[S]!, k1 * y[E]!, -kMinus1 - k2, 0],
-      [0, 0, k2, 0],
-    ].flat());
+    J.set(
+      [
+        [-k1 * y[S]!, -k1 * y[E]!, kMinus1 + k2, 0],
+        [-k1 * y[S]!, -k1 * y[E]!, kMinus1, 0],
+        [k1 * y[S]!, k1 * y[E]!, -kMinus1 - k2, 0],
+        [0, 0, k2, 0],
+      ].flat(),
+    );
   },
 };
 
 // As src/engine/simulation/initial-rate.ts integrates: 8 outputs a decade from 1e-9 s, rtol 1e-7, atol 1e-14.
 const outputTimes = Array.from({ length: 16 * 8 + 6 }, (_, i) => 1e-9 * 10 ** (i / 8)).filter((t) => t <= 2.2e7);
-const result = integrateStiff(michaelisMenten, Float64Array.of(ET, S0, 0, 0), { tEnd: 2.2e7, outputTimes, rtol: 1e-7, atol: 1e-14, nonNegative: true, maxSteps: 50_000 });
+const result = integrateStiff(michaelisMenten, Float64Array.of(ET, S0, 0, 0), {
+  tEnd: 2.2e7,
+  outputTimes,
+  rtol: 1e-7,
+  atol: 1e-14,
+  nonNegative: true,
+  maxSteps: 50_000,
+});
 const relative = (x: number, ref: number) => Math.abs(x / ref - 1);
 // Binding relaxes at k₁[S] + k₋₁ = 2e9 s^-1; a microsecond is two thousand relaxation times.
 const slowPhase = result.t.map((t, i) => ({ t, y: result.y[i]! })).filter(({ t }) => t >= 1e-6);

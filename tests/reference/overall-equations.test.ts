@@ -19,7 +19,13 @@ describe('published mechanisms: overall equation, σ and roles', () => {
     expect(errorRules(d)).toEqual([]);
     expect(d.stoichiometricNumbers).toEqual([1, 1]);
     expect(overallSides(d)).toEqual({ reactants: { NO2: 1, CO: 1 }, products: { NO: 1, CO2: 1 }, catalysts: [] });
-    expect(Object.fromEntries(d.roles!)).toEqual({ NO2: 'reactant', NO3: 'intermediate', NO: 'product', CO: 'reactant', CO2: 'product' });
+    expect(Object.fromEntries(d.roles!)).toEqual({
+      NO2: 'reactant',
+      NO3: 'intermediate',
+      NO: 'product',
+      CO: 'reactant',
+      CO2: 'product',
+    });
   });
 
   it('iodide-catalysed decomposition of hydrogen peroxide', () => {
@@ -114,7 +120,11 @@ steps:
   - { equation: EtOAcH+ + H2O -> AcOH + EtOH + H+, rds: true }
 `);
     expect(errorRules(d)).toEqual([]);
-    expect(overallSides(d)).toEqual({ reactants: { EtOAc: 1, H2O: 1 }, products: { AcOH: 1, EtOH: 1 }, catalysts: ['H+'] });
+    expect(overallSides(d)).toEqual({
+      reactants: { EtOAc: 1, H2O: 1 },
+      products: { AcOH: 1, EtOH: 1 },
+      catalysts: ['H+'],
+    });
     expect(d.roles!.get('H2O')).toBe('solvent');
     expect(d.roles!.get('H+')).toBe('catalyst');
     expect(d.buffered).toEqual(['H+']);
@@ -133,7 +143,11 @@ steps:
   - equation: tBu+ + H2O -> tBuOH + H+
 `);
     expect(errorRules(d)).toEqual([]);
-    expect(overallSides(d)).toEqual({ reactants: { tBuCl: 1, H2O: 1 }, products: { 'Cl-': 1, tBuOH: 1, 'H+': 1 }, catalysts: [] });
+    expect(overallSides(d)).toEqual({
+      reactants: { tBuCl: 1, H2O: 1 },
+      products: { 'Cl-': 1, tBuOH: 1, 'H+': 1 },
+      catalysts: [],
+    });
     expect(d.roles!.get('tBu+')).toBe('intermediate');
   });
 });

@@ -32,13 +32,30 @@ const stoichiometry = [
   [-1, 0, 1, 0, 0, -1, 1],
   [1, 0, -2, 0, 0, 0, 0],
 ];
-const rates = (y: Float64Array) => [k1 * y[CL2]! * y[M]!, k2 * y[CL]! * y[CHF3]!, k3 * y[CF3]! * y[CL2]!, k4 * y[CL]! * y[CL]! * y[M]!];
+const rates = (y: Float64Array) => [
+  k1 * y[CL2]! * y[M]!,
+  k2 * y[CL]! * y[CHF3]!,
+  k3 * y[CF3]! * y[CL2]!,
+  k4 * y[CL]! * y[CL]! * y[M]!,
+];
 // ∂r/∂y as (species, derivative) pairs for each reaction.
 const rateDerivatives = (y: Float64Array): [number, number][][] => [
-  [[CL2, k1 * y[M]!], [M, k1 * y[CL2]!]],
-  [[CL, k2 * y[CHF3]!], [CHF3, k2 * y[CL]!]],
-  [[CF3, k3 * y[CL2]!], [CL2, k3 * y[CF3]!]],
-  [[CL, 2 * k4 * y[CL]! * y[M]!], [M, k4 * y[CL]! * y[CL]!]],
+  [
+    [CL2, k1 * y[M]!],
+    [M, k1 * y[CL2]!],
+  ],
+  [
+    [CL, k2 * y[CHF3]!],
+    [CHF3, k2 * y[CL]!],
+  ],
+  [
+    [CF3, k3 * y[CL2]!],
+    [CL2, k3 * y[CF3]!],
+  ],
+  [
+    [CL, 2 * k4 * y[CL]! * y[M]!],
+    [M, k4 * y[CL]! * y[CL]!],
+  ],
 ];
 const chain: OdeSystem = {
   size: 7,
@@ -85,7 +102,8 @@ describe('radical chain Cl2 + CHF3 → HCl + CF3Cl, carriers at 1e-11 and 1e-15 
   });
 
   it('agrees with the tight run to 1e-7 in every species at every output', () => {
-    for (const t of outputTimes) at(main, t).forEach((v, i) => expect(relative(v, at(reference, t)[i]!) || 0).toBeLessThan(1e-7));
+    for (const t of outputTimes)
+      at(main, t).forEach((v, i) => expect(relative(v, at(reference, t)[i]!) || 0).toBeLessThan(1e-7));
   });
 
   it('with a single atol of 1e-14 (above the radicals), still agrees with the tight run to 1e-6', () => {

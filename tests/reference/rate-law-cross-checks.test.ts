@@ -22,7 +22,10 @@ const header = (system: string) => `title: cross-check\nsystem: ${system}\nstatu
 const positive = fc.double({ min: -3, max: 3, noNaN: true }).map((e) => 10 ** e);
 
 /** The engine's law evaluated at named values. */
-function engineRate(expression: { evaluate(v: ReadonlyMap<string, number>): number }, values: Record<string, number>): number {
+function engineRate(
+  expression: { evaluate(v: ReadonlyMap<string, number>): number },
+  values: Record<string, number>,
+): number {
   return expression.evaluate(new Map(Object.entries(values)));
 }
 
@@ -35,7 +38,15 @@ describe('(a) steady state solved numerically in the test', () => {
 `);
     expect(errorRules(d)).toEqual([]);
     const law = lawBy(d, 'steady_state').law.expression!;
-    const arb = fc.record({ k1: positive, km1: positive, k2: positive, km2: positive, ET: positive, S: positive, P: positive });
+    const arb = fc.record({
+      k1: positive,
+      km1: positive,
+      k2: positive,
+      km2: positive,
+      ET: positive,
+      S: positive,
+      P: positive,
+    });
     fc.assert(
       fc.property(arb, (c) => {
         // d[ES]/dt = k1[E][S] − k-1[ES] − k2[ES] + k-2[E][P] = 0;  [E] + [ES] = [E]_T.
@@ -50,7 +61,15 @@ describe('(a) steady state solved numerically in the test', () => {
         // Rate of the overall S -> P: d[P]/dt = k2[ES] − k-2[E][P]; its size is set by the two terms.
         const forward = c.k2 * ES;
         const reverse = c.km2 * E * c.P;
-        const ours = engineRate(law, { k_1: c.k1, 'k_-1': c.km1, k_2: c.k2, 'k_-2': c.km2, '[E]_T': c.ET, '[S]': c.S, '[P]': c.P });
+        const ours = engineRate(law, {
+          k_1: c.k1,
+          'k_-1': c.km1,
+          k_2: c.k2,
+          'k_-2': c.km2,
+          '[E]_T': c.ET,
+          '[S]': c.S,
+          '[P]': c.P,
+        });
         expect(Math.abs(ours - (forward - reverse)) <= 1e-9 * (forward + reverse)).toBe(true);
       }),
       { numRuns: 60 },
@@ -66,7 +85,17 @@ describe('(a) steady state solved numerically in the test', () => {
 `);
     expect(errorRules(d)).toEqual([]);
     const law = lawBy(d, 'steady_state').law.expression!;
-    const arb = fc.record({ k1: positive, km1: positive, k2: positive, km2: positive, k3: positive, km3: positive, ET: positive, S: positive, P: positive });
+    const arb = fc.record({
+      k1: positive,
+      km1: positive,
+      k2: positive,
+      km2: positive,
+      k3: positive,
+      km3: positive,
+      ET: positive,
+      S: positive,
+      P: positive,
+    });
     fc.assert(
       fc.property(arb, (c) => {
         const [E, ES, EP] = gaussianSolve(
@@ -83,7 +112,15 @@ describe('(a) steady state solved numerically in the test', () => {
         const reverse = c.km3 * E * c.P;
         expect(E > 0 && ES > 0 && EP > 0).toBe(true);
         const ours = engineRate(law, {
-          k_1: c.k1, 'k_-1': c.km1, k_2: c.k2, 'k_-2': c.km2, k_3: c.k3, 'k_-3': c.km3, '[E]_T': c.ET, '[S]': c.S, '[P]': c.P,
+          k_1: c.k1,
+          'k_-1': c.km1,
+          k_2: c.k2,
+          'k_-2': c.km2,
+          k_3: c.k3,
+          'k_-3': c.km3,
+          '[E]_T': c.ET,
+          '[S]': c.S,
+          '[P]': c.P,
         });
         expect(Math.abs(ours - (forward - reverse)) <= 1e-9 * (forward + reverse)).toBe(true);
       }),
@@ -101,7 +138,18 @@ describe('(a) steady state solved numerically in the test', () => {
 `);
     expect(errorRules(d)).toEqual([]);
     const law = lawBy(d, 'steady_state').law.expression!;
-    const arb = fc.record({ k1: positive, km1: positive, k2: positive, k3: positive, km3: positive, k4: positive, km4: positive, ET: positive, S: positive, I: positive });
+    const arb = fc.record({
+      k1: positive,
+      km1: positive,
+      k2: positive,
+      k3: positive,
+      km3: positive,
+      k4: positive,
+      km4: positive,
+      ET: positive,
+      S: positive,
+      I: positive,
+    });
     fc.assert(
       fc.property(arb, (c) => {
         const x = gaussianSolve(
@@ -118,7 +166,16 @@ describe('(a) steady state solved numerically in the test', () => {
         )!;
         const rate = c.k2 * x[1]!;
         const ours = engineRate(law, {
-          k_1: c.k1, 'k_-1': c.km1, k_2: c.k2, k_3: c.k3, 'k_-3': c.km3, k_4: c.k4, 'k_-4': c.km4, '[E]_T': c.ET, '[S]': c.S, '[I]': c.I,
+          k_1: c.k1,
+          'k_-1': c.km1,
+          k_2: c.k2,
+          k_3: c.k3,
+          'k_-3': c.km3,
+          k_4: c.k4,
+          'k_-4': c.km4,
+          '[E]_T': c.ET,
+          '[S]': c.S,
+          '[I]': c.I,
         });
         expect(relativelyClose(ours, rate, 1e-9)).toBe(true);
       }),
@@ -227,10 +284,13 @@ describe('(b) published laws evaluated and differentiated by mathjs', () => {
       const law = derived.law.expression!;
       expect([...law.symbols()].sort()).toEqual(Object.values(c.names).sort());
       const value = math.compile(c.expression);
-      const slopes = new Map<string, EvalFunction>(c.orderIn.map((x) => [x, math.derivative(c.expression, x, { simplify: false }) as unknown as EvalFunction]));
+      const slopes = new Map<string, EvalFunction>(
+        c.orderIn.map((x) => [x, math.derivative(c.expression, x, { simplify: false }) as unknown as EvalFunction]),
+      );
       const mathjsOrder = (x: string, scope: Record<string, number>) =>
         ((slopes.get(x)!.evaluate(scope) as number) * scope[x]!) / (value.evaluate(scope) as number);
-      const toEngine = (scope: Record<string, number>) => new Map(Object.entries(scope).map(([k, v]) => [c.names[k]!, v]));
+      const toEngine = (scope: Record<string, number>) =>
+        new Map(Object.entries(scope).map(([k, v]) => [c.names[k]!, v]));
 
       const random = seededRandom(7);
       let checked = 0;
@@ -243,7 +303,10 @@ describe('(b) published laws evaluated and differentiated by mathjs', () => {
         for (const x of c.orderIn) {
           const ours = apparentOrder(law, c.names[x]!, at)!;
           const theirs = mathjsOrder(x, scope);
-          expect(Math.abs(ours - theirs) <= 1e-9 * Math.max(1, Math.abs(theirs)), `${x}: engine ${ours}, mathjs ${theirs}`).toBe(true);
+          expect(
+            Math.abs(ours - theirs) <= 1e-9 * Math.max(1, Math.abs(theirs)),
+            `${x}: engine ${ours}, mathjs ${theirs}`,
+          ).toBe(true);
         }
       }
       expect(checked).toBeGreaterThanOrEqual(8);
@@ -252,7 +315,9 @@ describe('(b) published laws evaluated and differentiated by mathjs', () => {
       for (const x of c.orderIn) {
         const limits = derived.orders.get(speciesOf(c.names[x]!))!;
         const absent = (k: string) => (c.products ?? []).includes(k) && k !== x;
-        const moderate = Object.fromEntries(Object.keys(c.names).map((k) => [k, absent(k) ? 0 : k.startsWith('c') ? 1 : 0.5 + random()]));
+        const moderate = Object.fromEntries(
+          Object.keys(c.names).map((k) => [k, absent(k) ? 0 : k.startsWith('c') ? 1 : 0.5 + random()]),
+        );
         const near = (conc: number) => mathjsOrder(x, { ...moderate, [x]: conc });
         expect(near(1e-9)).toBeCloseTo(limits.low.toNumber(), 6);
         expect(near(1e9)).toBeCloseTo(limits.high.toNumber(), 6);

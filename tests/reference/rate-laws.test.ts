@@ -12,7 +12,14 @@ import { describe, expect, it } from 'vitest';
 import { apparentOrder } from '../../src/engine/rate-law/orders.ts';
 import { solveSteadyStateNumeric } from '../../src/engine/rate-law/steady-state-numeric.ts';
 import { deriveYaml, errorRules } from '../helpers/derive-yaml.ts';
-import { constantTokens, expectSameLaw, lawBy, orderTable, relativelyClose, type Lookup } from '../helpers/rate-law-check.ts';
+import {
+  constantTokens,
+  expectSameLaw,
+  lawBy,
+  orderTable,
+  relativelyClose,
+  type Lookup,
+} from '../helpers/rate-law-check.ts';
 
 const header = (system: string) => `title: reference rate law\nsystem: ${system}\nstatus: proposed\n`;
 
@@ -204,8 +211,19 @@ steps:
     // The entry's control function CF = ∂ln v/∂ln k_i. For k_2, differentiating the steady-state v
     // by hand: CF_2 = 1 − k_2[D]/(k_-1 + k_2[D]) = k_-1/(k_-1 + k_2[D]). apparentOrder takes the
     // same logarithmic derivative in any symbol.
-    for (const [km1, k2, D] of [[1, 1e-3, 1], [1, 1e3, 1], [2, 3, 0.5]] as const) {
-      const values = new Map([['k_1', 1], ['k_-1', km1], ['k_2', k2], ['[A]', 1], ['[B]', 1], ['[D]', D]]);
+    for (const [km1, k2, D] of [
+      [1, 1e-3, 1],
+      [1, 1e3, 1],
+      [2, 3, 0.5],
+    ] as const) {
+      const values = new Map([
+        ['k_1', 1],
+        ['k_-1', km1],
+        ['k_2', k2],
+        ['[A]', 1],
+        ['[B]', 1],
+        ['[D]', D],
+      ]);
       expect(apparentOrder(ss.law.expression!, 'k_2', values)).toBeCloseTo(km1 / (km1 + k2 * D), 12);
     }
   });
@@ -376,10 +394,12 @@ ${observations}`;
   };
 
   it('initial rates ([HBr] = 0): first order in H2, half order in Br2', () => {
-    const d = deriveYaml(chain(`  - id: initial
+    const d = deriveYaml(
+      chain(`  - id: initial
     concentrations: { H2: 0.10 M, Br2: 0.05 M }
     orders: { H2: 1.0 ± 0.01, Br2: 0.5 ± 0.01 }
-`));
+`),
+    );
     expect(errorRules(d)).toEqual([]);
     const ss = lawBy(d, 'steady_state');
     expect(ss.law.expression).toBeUndefined();
@@ -391,18 +411,37 @@ ${observations}`;
   });
 
   it('with HBr present: the numeric steady state matches Bodenstein–Lind, order in HBr negative', () => {
-    const d = deriveYaml(chain(`  - id: inhibited
+    const d = deriveYaml(
+      chain(`  - id: inhibited
     concentrations: { H2: 0.10 M, Br2: 0.05 M, HBr: 0.20 M }
     orders: { HBr: -0.3 ± 0.2, Br2: 0.8 ± 0.2 }
-`));
+`),
+    );
     expect(errorRules(d)).toEqual([]);
     const system = lawBy(d, 'steady_state').law.nonlinear!;
     const { k1, k2, k3, k4, k5 } = constants;
-    for (const [H2, Br2, HBr] of [[0.1, 0.05, 0], [0.1, 0.05, 0.02], [1e-3, 2e-3, 0.5], [0.3, 1e-4, 1e-3]] as const) {
-      const values = new Map([['k_1', k1], ['k_2', k2], ['k_3', k3], ['k_4', k4], ['k_5', k5], ['[H2]', H2], ['[Br2]', Br2], ['[HBr]', HBr]]);
+    for (const [H2, Br2, HBr] of [
+      [0.1, 0.05, 0],
+      [0.1, 0.05, 0.02],
+      [1e-3, 2e-3, 0.5],
+      [0.3, 1e-4, 1e-3],
+    ] as const) {
+      const values = new Map([
+        ['k_1', k1],
+        ['k_2', k2],
+        ['k_3', k3],
+        ['k_4', k4],
+        ['k_5', k5],
+        ['[H2]', H2],
+        ['[Br2]', Br2],
+        ['[HBr]', HBr],
+      ]);
       const solved = solveSteadyStateNumeric(system, values);
       expect(solved, `no steady state at ${[H2, Br2, HBr]}`).toBeDefined();
-      expect(relativelyClose(solved!.rate, bodensteinLind(H2, Br2, HBr), 1e-8), `rate ${solved!.rate} vs ${bodensteinLind(H2, Br2, HBr)}`).toBe(true);
+      expect(
+        relativelyClose(solved!.rate, bodensteinLind(H2, Br2, HBr), 1e-8),
+        `rate ${solved!.rate} vs ${bodensteinLind(H2, Br2, HBr)}`,
+      ).toBe(true);
     }
     // Independent: with x = k_4[HBr]/(k_3[Br2]), the order in HBr is −x/(1 + x) and in Br2 ½ + x/(1 + x).
     const x = (k4 * 0.2) / (k3 * 0.05);
@@ -437,7 +476,8 @@ observations:
       {
         symbols: ['k_1', 'k_-1', 'k_2', 'k_-2', '[E]_T', '[S]', '[P]'],
         rate: (v) =>
-          ((v('k_2') * v('[E]_T') * v('[S]')) / KmS(v) - (v('k_-1') * v('[E]_T') * v('[P]')) / KmP(v)) / (1 + v('[S]') / KmS(v) + v('[P]') / KmP(v)),
+          ((v('k_2') * v('[E]_T') * v('[S]')) / KmS(v) - (v('k_-1') * v('[E]_T') * v('[P]')) / KmP(v)) /
+          (1 + v('[S]') / KmS(v) + v('[P]') / KmP(v)),
       },
       { tolerance: 1e-9 },
     );

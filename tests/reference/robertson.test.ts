@@ -28,10 +28,11 @@ const robertson: OdeSystem = {
 const PUBLISHED_AT_40 = [0.7158270687, 9.185534765e-6, 0.2841637457];
 // Mazzia & Magherini, Test Set for IVP Solvers (release 2.4), problem ROBER, reference solution at
 // t = 1e11 (from memory; the same 16 digits are widely quoted as that test set's reference).
-const PUBLISHED_AT_1E11 = [0.2083340149701255e-7, 0.8333360770334713e-13, 0.9999999791665050];
+const PUBLISHED_AT_1E11 = [0.2083340149701255e-7, 0.8333360770334713e-13, 0.999999979166505];
 
 const outputTimes = [0.4, 4, 40, 400, 4e3, 4e4, 4e5, 4e6, 4e7, 4e8, 4e9, 4e10, 1e11];
-const relative = (y: Float64Array, ref: readonly number[]) => Math.max(...ref.map((r, i) => Math.abs(y[i]! - r) / Math.abs(r)));
+const relative = (y: Float64Array, ref: readonly number[]) =>
+  Math.max(...ref.map((r, i) => Math.abs(y[i]! - r) / Math.abs(r)));
 // y2 peaks at 3.6e-5 and falls to 8e-14, so its absolute tolerance must sit far below the others'.
 const run = (rtol: number, extra: Partial<IntegrateOptions> = {}) =>
   integrateStiff(robertson, Float64Array.of(1, 0, 0), {
@@ -61,7 +62,8 @@ describe('Robertson (1966) to t = 1e11', () => {
   });
 
   it('agrees with the tight run to 1e-5 at every output, and converges as the tolerance shrinks', () => {
-    const error = (r: ReturnType<typeof run>) => Math.max(...outputTimes.map((t) => relative(at(r, t), Array.from(at(reference, t)))));
+    const error = (r: ReturnType<typeof run>) =>
+      Math.max(...outputTimes.map((t) => relative(at(r, t), Array.from(at(reference, t)))));
     expect(error(main)).toBeLessThan(1e-5);
     const loose = error(run(1e-6, { outputTimes }));
     const tight = error(run(1e-10, { outputTimes }));
@@ -86,7 +88,12 @@ describe('Robertson (1966) to t = 1e11', () => {
   });
 
   it('with nonNegative, survives a loose tolerance that otherwise drives y2 negative and away', () => {
-    const loose = integrateStiff(robertson, Float64Array.of(1, 0, 0), { tEnd: 1e11, rtol: 1e-2, atol: 1e-2, nonNegative: true });
+    const loose = integrateStiff(robertson, Float64Array.of(1, 0, 0), {
+      tEnd: 1e11,
+      rtol: 1e-2,
+      atol: 1e-2,
+      nonNegative: true,
+    });
     expect(loose.status).toBe('ok');
     for (const y of loose.y) for (const v of y) expect(v).toBeGreaterThanOrEqual(0);
     expect(loose.y.at(-1)![2]).toBeCloseTo(1, 1);

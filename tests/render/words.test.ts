@@ -82,7 +82,16 @@ describe('display words and number formats', () => {
     expect(severityCount(3, 'info')).toBe('3 notes');
   });
 
-  const check = (extra: Partial<ObservationJson>): ObservationJson => ({ id: 'o1', species: 'A', method: 'rds', observed: 1, tolerance: 0.1, basis: 'conditions', status: 'pass', ...extra });
+  const check = (extra: Partial<ObservationJson>): ObservationJson => ({
+    id: 'o1',
+    species: 'A',
+    method: 'rds',
+    observed: 1,
+    tolerance: 0.1,
+    basis: 'conditions',
+    status: 'pass',
+    ...extra,
+  });
 
   it('says what was predicted: at the conditions, at any, or a range', () => {
     expect(predictionText(check({ predicted: 0.5252 }))).toBe('0.525 at these conditions');

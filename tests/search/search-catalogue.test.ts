@@ -47,10 +47,19 @@ const mechanisms = [carbonyl, oxidation, labelled];
 
 /** Species pages as the catalogue builds them: one per symbol, with every occurrence. */
 function speciesOf(list: MechanismInput[]): SpeciesInput[] {
-  const bySymbol = new Map<string, SpeciesInput & { occurrences: { mechanism: string; title: string; role?: string }[] }>();
+  const bySymbol = new Map<
+    string,
+    SpeciesInput & { occurrences: { mechanism: string; title: string; role?: string }[] }
+  >();
   for (const m of list) {
     for (const s of m.species) {
-      const page = bySymbol.get(s.symbol) ?? { symbol: s.symbol, slug: s.symbol.toLowerCase() + (s.symbol === 'CO' ? '-x' : ''), names: s.name ? [s.name] : [], aliases: [...s.aliases], occurrences: [] };
+      const page = bySymbol.get(s.symbol) ?? {
+        symbol: s.symbol,
+        slug: s.symbol.toLowerCase() + (s.symbol === 'CO' ? '-x' : ''),
+        names: s.name ? [s.name] : [],
+        aliases: [...s.aliases],
+        occurrences: [],
+      };
       if (s.formula) page.formula = s.formula;
       page.occurrences.push({ mechanism: m.id, title: m.title, ...(s.role && { role: s.role }) });
       bySymbol.set(s.symbol, page);
@@ -75,8 +84,18 @@ describe('buildSearchIndex', () => {
   it('makes one document per mechanism, then one per species, with both indexes over them', () => {
     const bundle = buildSearchIndex(mechanisms, speciesOf(mechanisms));
     expect(bundle.docs.map((d) => `${d.kind}:${d.id}`)).toEqual([
-      'mechanism:cobalt-carbonyl', 'mechanism:monoxide-oxidation', 'mechanism:labelled-cycle',
-      'species:co', 'species:co-x', 'species:coco', 'species:o', 'species:co2', 'species:e', 'species:s', 'species:es', 'species:z2',
+      'mechanism:cobalt-carbonyl',
+      'mechanism:monoxide-oxidation',
+      'mechanism:labelled-cycle',
+      'species:co',
+      'species:co-x',
+      'species:coco',
+      'species:o',
+      'species:co2',
+      'species:e',
+      'species:s',
+      'species:es',
+      'species:z2',
     ]);
     const text = bundle.textIndex as { keys: { path: string[] }[]; records: unknown[] };
     const formula = bundle.formulaIndex as { keys: { path: string[] }[]; records: unknown[] };
@@ -99,8 +118,19 @@ describe('buildSearchIndex', () => {
 
 describe('isLiteralQuery', () => {
   it.each([
-    ['CO', true], ['HCl', true], ['Cl2', true], ['Fe3+', true], ['KX-7', true], ['A', true],
-    ['Co', false], ['Cat', false], ['Fluoroform', false], ['co', false], ['kx-7', false], ['carbon monoxide', false], ['CO + O', false],
+    ['CO', true],
+    ['HCl', true],
+    ['Cl2', true],
+    ['Fe3+', true],
+    ['KX-7', true],
+    ['A', true],
+    ['Co', false],
+    ['Cat', false],
+    ['Fluoroform', false],
+    ['co', false],
+    ['kx-7', false],
+    ['carbon monoxide', false],
+    ['CO + O', false],
   ])('%s → %s', (query, expected) => expect(isLiteralQuery(query)).toBe(expected));
 });
 
@@ -191,7 +221,9 @@ describe('the catalogue search', () => {
 describe('outcomeSummary', () => {
   it('counts, names the filters, and hints at case when nothing matched', () => {
     expect(outcomeSummary(search('CO'))).toBe('2 mechanisms and 3 species match “CO”.');
-    expect(outcomeSummary(search('CO', { role: 'product', status: 'proposed' }))).toBe('1 mechanism and 1 species match “CO” (role product, status proposed).');
+    expect(outcomeSummary(search('CO', { role: 'product', status: 'proposed' }))).toBe(
+      '1 mechanism and 1 species match “CO” (role product, status proposed).',
+    );
     expect(outcomeSummary(search('COCO'))).toBe('Nothing matches “COCO”. Formulas match with case: try CoCO.');
     expect(outcomeSummary(search('', { role: 'third_body' }))).toBe('0 mechanisms and 0 species (role third body).');
     expect(outcomeSummary(search(''))).toBe('Type a species name, formula, symbol, title or tag.');
@@ -201,12 +233,16 @@ describe('outcomeSummary', () => {
 describe('the demo catalogue', () => {
   it('finds every mechanism by the name and by the symbol of each of its species', async () => {
     const catalogue = await loadCatalogue();
-    const demo = createCatalogueSearch(JSON.parse(JSON.stringify(buildSearchIndex(catalogue.records, catalogue.species))) as SearchBundle);
+    const demo = createCatalogueSearch(
+      JSON.parse(JSON.stringify(buildSearchIndex(catalogue.records, catalogue.species))) as SearchBundle,
+    );
     const missed: string[] = [];
     for (const record of catalogue.records) {
       for (const s of record.species) {
         for (const query of [s.symbol, ...(s.name ? [s.name] : [])]) {
-          const hit = demo(query).mechanisms.find((m) => m.doc.id === record.id)?.hits.find((h) => record.species[h.index]?.symbol === s.symbol);
+          const hit = demo(query)
+            .mechanisms.find((m) => m.doc.id === record.id)
+            ?.hits.find((h) => record.species[h.index]?.symbol === s.symbol);
           if (!hit) missed.push(`${record.id}: ${query}`);
         }
       }

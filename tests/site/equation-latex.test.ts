@@ -4,7 +4,10 @@ import { equationLatex } from '../../src/render/words/equation-latex.ts';
 
 describe('equationLatex', () => {
   const cases: [equation: string, latex: string][] = [
-    ['H2O2 + I- -> H2O + IO-', '\\mathrm{H_{2}O_{2}} + \\mathrm{I^{-}} \\rightarrow \\mathrm{H_{2}O} + \\mathrm{IO^{-}}'],
+    [
+      'H2O2 + I- -> H2O + IO-',
+      '\\mathrm{H_{2}O_{2}} + \\mathrm{I^{-}} \\rightarrow \\mathrm{H_{2}O} + \\mathrm{IO^{-}}',
+    ],
     ['2 NO2 -> NO3 + NO', '2\\,\\mathrm{NO_{2}} \\rightarrow \\mathrm{NO_{3}} + \\mathrm{NO}'],
     ['2NO + O2 -> 2 NO2', '2\\,\\mathrm{NO} + \\mathrm{O_{2}} \\rightarrow 2\\,\\mathrm{NO_{2}}'],
     ['E + S <=> ES', '\\mathrm{E} + \\mathrm{S} \\rightleftharpoons \\mathrm{ES}'],

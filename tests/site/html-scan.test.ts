@@ -5,14 +5,26 @@ import { attr, decodeEntities, elementText, startTags } from './html-scan.ts';
 describe('startTags', () => {
   it('reads quoted, unquoted and bare attributes, decoded', () => {
     const [img, a] = startTags('<img src=x onerror=alert(1)><a href="java&#115;cript:x" download>t</a>');
-    expect(img).toMatchObject({ name: 'img', attrs: [['src', 'x'], ['onerror', 'alert(1)']] });
+    expect(img).toMatchObject({
+      name: 'img',
+      attrs: [
+        ['src', 'x'],
+        ['onerror', 'alert(1)'],
+      ],
+    });
     expect(attr(a!, 'href')).toBe('javascript:x');
     expect(attr(a!, 'download')).toBe('');
   });
 
   it('finds handlers after a slash and in upper case', () => {
     expect(startTags('<svg/onload=alert(1)>')[0]!.attrs).toEqual([['onload', 'alert(1)']]);
-    expect(startTags('<IMG SRC=x ONERROR="a()">')[0]).toMatchObject({ name: 'img', attrs: [['src', 'x'], ['onerror', 'a()']] });
+    expect(startTags('<IMG SRC=x ONERROR="a()">')[0]).toMatchObject({
+      name: 'img',
+      attrs: [
+        ['src', 'x'],
+        ['onerror', 'a()'],
+      ],
+    });
   });
 
   it('treats markup inside attribute values, comments and escaped text as text', () => {
@@ -21,7 +33,11 @@ describe('startTags', () => {
   });
 
   it('skips the raw text of script and style', () => {
-    expect(startTags('<style>a<b{}</style><script>if (a<b) x()</script><i>').map((t) => t.name)).toEqual(['style', 'script', 'i']);
+    expect(startTags('<style>a<b{}</style><script>if (a<b) x()</script><i>').map((t) => t.name)).toEqual([
+      'style',
+      'script',
+      'i',
+    ]);
   });
 });
 

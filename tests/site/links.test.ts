@@ -11,7 +11,9 @@ describe('doiUrl', () => {
     ['10.1002/(SICI)1097-4628', 'https://doi.org/10.1002/(SICI)1097-4628'],
   ])('%s', (doi, url) => expect(doiUrl(doi)).toBe(url));
 
-  it.each(['javascript:alert(1)', '11.1000/x', '10.1/x', 'notebook 14, p. 32', ''])('refuses %s', (doi) => expect(doiUrl(doi)).toBeUndefined());
+  it.each(['javascript:alert(1)', '11.1000/x', '10.1/x', 'notebook 14, p. 32', ''])('refuses %s', (doi) =>
+    expect(doiUrl(doi)).toBeUndefined(),
+  );
 });
 
 describe('httpUrl', () => {
@@ -19,7 +21,16 @@ describe('httpUrl', () => {
     expect(httpUrl('https://example.org/a b')).toBe('https://example.org/a%20b');
     expect(httpUrl('http://example.org/')).toBe('http://example.org/');
   });
-  it.each(['javascript:alert(1)', 'JaVaScRiPt:alert(1)', ' javascript:alert(1)', 'data:text/html,<script>alert(1)</script>', 'vbscript:x', '/relative', 'ftp://x.org/', 'https://user:pw@x.org/'])('refuses %s', (url) => {
+  it.each([
+    'javascript:alert(1)',
+    'JaVaScRiPt:alert(1)',
+    ' javascript:alert(1)',
+    'data:text/html,<script>alert(1)</script>',
+    'vbscript:x',
+    '/relative',
+    'ftp://x.org/',
+    'https://user:pw@x.org/',
+  ])('refuses %s', (url) => {
     expect(httpUrl(url)).toBeUndefined();
   });
 });

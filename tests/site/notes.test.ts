@@ -15,7 +15,9 @@ describe('renderNotes', () => {
   });
 
   it('keeps no raw HTML and links only to http(s)', () => {
-    const html = renderNotes('<script>alert(1)</script>\n\n<img src=x onerror=alert(1)>\n\n[a](javascript:alert(1)) [b](https://example.org/)');
+    const html = renderNotes(
+      '<script>alert(1)</script>\n\n<img src=x onerror=alert(1)>\n\n[a](javascript:alert(1)) [b](https://example.org/)',
+    );
     expect(html).not.toMatch(/<script|<img|onerror|javascript:/);
     expect(html).toContain('<a href="https://example.org/">b</a>');
   });

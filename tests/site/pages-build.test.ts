@@ -18,7 +18,8 @@ beforeAll(async () => {
 }, 60_000);
 
 /** A built page's HTML, without Astro's scoped-style attributes. */
-const page = async (path: string) => (await readFile(join(out, path, 'index.html'), 'utf8')).replace(/ data-astro-cid-[\w-]+/g, '');
+const page = async (path: string) =>
+  (await readFile(join(out, path, 'index.html'), 'utf8')).replace(/ data-astro-cid-[\w-]+/g, '');
 
 /** The opening tag of the first element carrying `attribute="value"`, and the text up to the next such row. */
 function rowOf(html: string, attribute: string, value: string): string {
@@ -30,7 +31,14 @@ function rowOf(html: string, attribute: string, value: string): string {
 
 describe('the demo site pages', () => {
   it('builds home, the species index and pages, the systems index and pages, and checks', () => {
-    const expected = ['', 'species', 'systems', 'checks', ...catalogue.species.map((s) => `s/${s.slug}`), ...catalogue.systems.map((s) => `systems/${s.system}`)];
+    const expected = [
+      '',
+      'species',
+      'systems',
+      'checks',
+      ...catalogue.species.map((s) => `s/${s.slug}`),
+      ...catalogue.systems.map((s) => `systems/${s.system}`),
+    ];
     expect(catalogue.species.length).toBeGreaterThan(30);
     expect(catalogue.systems.map((s) => s.system)).toContain('kx7-hydroarylation');
     const missing = expected.filter((p) => !existsSync(join(out, p, 'index.html')));
@@ -47,11 +55,16 @@ describe('the demo site pages', () => {
     expect(rowOf(html, 'data-observation', 'kx7-saturation-2026-02')).toContain('kx7-hydroarylation-arene-first');
     // Approximation warnings, where the engine reports any, link to their lines.
     for (const r of catalogue.records) {
-      for (const d of r.report.diagnostics.filter((x) => x.rule.startsWith('approximation/'))) expect(html).toContain(`href="/m/${r.id}/#L${d.line}"`);
+      for (const d of r.report.diagnostics.filter((x) => x.rule.startsWith('approximation/')))
+        expect(html).toContain(`href="/m/${r.id}/#L${d.line}"`);
     }
     // The five newest records, newest first.
     const recent = html.slice(html.indexOf('id="recent-heading"'));
-    const order = ['isomerase-mimic-product-complex', 'isomerase-mimic-single-complex', 'fluoroform-chlorination-cf3-termination'].map((id) => recent.indexOf(`/m/${id}/`));
+    const order = [
+      'isomerase-mimic-product-complex',
+      'isomerase-mimic-single-complex',
+      'fluoroform-chlorination-cf3-termination',
+    ].map((id) => recent.indexOf(`/m/${id}/`));
     expect(order.every((i) => i > 0)).toBe(true);
     expect([...order].sort((a, b) => a - b)).toEqual(order);
   });
@@ -63,7 +76,9 @@ describe('the demo site pages', () => {
     expect(rowOf(html, 'data-rival', 'kx7-hydroarylation-alkene-first')).toContain('data-survives="true"');
     // The matrix: arene-first fails the saturation observation, in words, not by colour alone.
     const saturation = rowOf(html, 'data-observation', 'kx7-saturation-2026-02');
-    expect(saturation).toMatch(/data-rival="kx7-hydroarylation-arene-first" data-status="fail">\s*<span class="fail"><span aria-hidden="true">✗<\/span> contradicted/);
+    expect(saturation).toMatch(
+      /data-rival="kx7-hydroarylation-arene-first" data-status="fail">\s*<span class="fail"><span aria-hidden="true">✗<\/span> contradicted/,
+    );
     // Rival overall equations are the same change, written in another order: not flagged.
     expect(html).not.toContain('data-overall-differs');
     // The measurement that would tell the survivors apart.
@@ -74,7 +89,11 @@ describe('the demo site pages', () => {
   it('a species page lists the role in every mechanism (Cat is the catalyst in the kx7 system)', async () => {
     const slug = catalogue.slugs['Cat']!;
     const html = await page(`s/${slug}`);
-    for (const id of ['kx7-hydroarylation-alkene-first', 'kx7-hydroarylation-arene-first', 'kx7-hydroarylation-ternary-adduct']) {
+    for (const id of [
+      'kx7-hydroarylation-alkene-first',
+      'kx7-hydroarylation-arene-first',
+      'kx7-hydroarylation-ternary-adduct',
+    ]) {
       expect(rowOf(html, 'data-mechanism', id)).toContain('data-role="catalyst"');
       expect(rowOf(html, 'data-mechanism', id)).toMatch(/class="role"[^>]*>catalyst/);
     }
@@ -95,7 +114,10 @@ describe('the demo site pages', () => {
     for (const line of [27, 32]) expect(section).toContain(`href="/m/kx7-hydroarylation-arene-first/#L${line}"`);
     expect(section).toContain('content/mechanisms/kx7-hydroarylation-arene-first.yaml:27:18');
     expect(html).toContain('href="#warning-observation-order"');
-    const warnings = catalogue.records.reduce((n, r) => n + r.report.diagnostics.filter((d) => d.severity === 'warning').length, 0);
+    const warnings = catalogue.records.reduce(
+      (n, r) => n + r.report.diagnostics.filter((d) => d.severity === 'warning').length,
+      0,
+    );
     expect(warnings).toBeGreaterThanOrEqual(3);
     expect(html).toContain(`href="#warning">${warnings} warnings</a>`);
     expect(html).not.toContain('<script');

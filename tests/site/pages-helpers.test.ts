@@ -1,9 +1,35 @@
 import { describe, expect, it } from 'vitest';
-import { anchorId, groupDiagnostics, recentRecords, roleSummary, ruleIndex, shortLabels, type RecordView } from '../../src/site/index.ts';
+import {
+  anchorId,
+  groupDiagnostics,
+  recentRecords,
+  roleSummary,
+  ruleIndex,
+  shortLabels,
+  type RecordView,
+} from '../../src/site/index.ts';
 
 /** A record view with only what the helpers read. */
-function view(id: string, extra: Partial<RecordView> = {}, diagnostics: RecordView['report']['diagnostics'] = []): RecordView {
-  return { id, file: `content/mechanisms/${id}.yaml`, title: id, tags: [], contributors: [], references: [], steps: [], species: [], report: { id, file: `/abs/${id}.yaml`, diagnostics }, errors: 0, warnings: 0, survives: true, ...extra } as unknown as RecordView;
+function view(
+  id: string,
+  extra: Partial<RecordView> = {},
+  diagnostics: RecordView['report']['diagnostics'] = [],
+): RecordView {
+  return {
+    id,
+    file: `content/mechanisms/${id}.yaml`,
+    title: id,
+    tags: [],
+    contributors: [],
+    references: [],
+    steps: [],
+    species: [],
+    report: { id, file: `/abs/${id}.yaml`, diagnostics },
+    errors: 0,
+    warnings: 0,
+    survives: true,
+    ...extra,
+  } as unknown as RecordView;
 }
 
 describe('roleSummary', () => {
@@ -15,17 +41,31 @@ describe('roleSummary', () => {
       { mechanism: 'd', title: 'D', role: 'third_body', buffered: false },
       { mechanism: 'e', title: 'E', buffered: false },
     ];
-    expect(roleSummary(occurrences)).toBe('catalyst in 2, intermediate in 1, third body in 1, no role derived in 1, buffered in 1');
+    expect(roleSummary(occurrences)).toBe(
+      'catalyst in 2, intermediate in 1, third body in 1, no role derived in 1, buffered in 1',
+    );
   });
 });
 
 describe('shortLabels', () => {
   it.each([
-    [['kx7-hydroarylation-alkene-first', 'kx7-hydroarylation-arene-first'], ['alkene-first', 'arene-first']],
-    [['acetal-hydrolysis-a1', 'acetal-hydrolysis-a2'], ['a1', 'a2']],
-    [['x-a', 'x-a-b'], ['a', 'a-b']],
+    [
+      ['kx7-hydroarylation-alkene-first', 'kx7-hydroarylation-arene-first'],
+      ['alkene-first', 'arene-first'],
+    ],
+    [
+      ['acetal-hydrolysis-a1', 'acetal-hydrolysis-a2'],
+      ['a1', 'a2'],
+    ],
+    [
+      ['x-a', 'x-a-b'],
+      ['a', 'a-b'],
+    ],
     [['solo-record'], ['solo-record']],
-    [['a-b', 'c-d'], ['a-b', 'c-d']],
+    [
+      ['a-b', 'c-d'],
+      ['a-b', 'c-d'],
+    ],
   ])('%j', (ids, shorts) => expect(shortLabels(ids)).toEqual(shorts));
 });
 
@@ -37,7 +77,12 @@ describe('anchors', () => {
 
 describe('recentRecords', () => {
   it('newest first, undated left out', () => {
-    const records = [view('a', { added: '2026-01-02' }), view('b'), view('c', { added: '2026-03-01' }), view('d', { added: '2026-02-01' })];
+    const records = [
+      view('a', { added: '2026-01-02' }),
+      view('b'),
+      view('c', { added: '2026-03-01' }),
+      view('d', { added: '2026-02-01' }),
+    ];
     expect(recentRecords(records, 2).map((r) => r.id)).toEqual(['c', 'd']);
   });
 });
@@ -52,7 +97,11 @@ describe('groupDiagnostics', () => {
       ]),
     ];
     const groups = groupDiagnostics(records);
-    expect(groups.map((g) => [g.severity, g.count])).toEqual([['error', 0], ['warning', 2], ['info', 1]]);
+    expect(groups.map((g) => [g.severity, g.count])).toEqual([
+      ['error', 0],
+      ['warning', 2],
+      ['info', 1],
+    ]);
     expect(groups[1]!.rules[0]).toMatchObject({ rule: 'observation/order', anchor: 'warning-observation-order' });
     expect(groups[1]!.rules[0]!.items.map((i) => i.diagnostic.line)).toEqual([27, 30]);
     expect(ruleIndex(groups).map((r) => r.rule)).toEqual(['observation/order', 'rate/nonlinear']);

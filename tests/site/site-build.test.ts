@@ -13,7 +13,10 @@ import { attr, decodeEntities, elementText, startTags, type Tag } from './html-s
 
 const DEMO = join(ROOT, 'content', 'mechanisms');
 const FIXTURES = join(ROOT, 'tests', 'site', 'fixtures');
-const demoIds = readdirSync(DEMO).filter((f) => f.endsWith('.yaml')).map((f) => f.slice(0, -5)).sort();
+const demoIds = readdirSync(DEMO)
+  .filter((f) => f.endsWith('.yaml'))
+  .map((f) => f.slice(0, -5))
+  .sort();
 const HOSTILE = 'hostile-record';
 const BROKEN = 'broken-record';
 
@@ -47,7 +50,19 @@ describe('the demo catalogue builds', () => {
 
   it('renders each part of a full record: steps, overall equation, rate laws with derivations, orders, plots, sources', () => {
     const html = page('kx7-hydroarylation-alkene-first');
-    for (const anchor of ['overall', 'steps', 'species', 'rate-laws', 'orders', 'plots', 'diagnostics', 'notes', 'references', 'downloads']) expect(html).toContain(`id="${anchor}"`);
+    for (const anchor of [
+      'overall',
+      'steps',
+      'species',
+      'rate-laws',
+      'orders',
+      'plots',
+      'diagnostics',
+      'notes',
+      'references',
+      'downloads',
+    ])
+      expect(html).toContain(`id="${anchor}"`);
     expect(html).toContain('<details class="derivation"');
     expect(html).toContain('Rate-determining step with fast pre-equilibria');
     expect(html).toContain('Steady-state approximation');
@@ -73,7 +88,11 @@ describe('the demo catalogue builds', () => {
   it('links only to pages and files the build wrote (species, systems, downloads, anchors)', () => {
     for (const id of [...demoIds, HOSTILE, BROKEN]) {
       const html = page(id);
-      const ids = new Set(startTags(html).map((t) => attr(t, 'id')).filter((x) => x !== undefined));
+      const ids = new Set(
+        startTags(html)
+          .map((t) => attr(t, 'id'))
+          .filter((x) => x !== undefined),
+      );
       for (const tag of startTags(html).filter((t) => t.name === 'a')) {
         const href = attr(tag, 'href');
         if (href === undefined || /^https?:/.test(href)) continue;
@@ -88,7 +107,8 @@ describe('the demo catalogue builds', () => {
   });
 
   it('serves each record source byte for byte', () => {
-    for (const id of demoIds) expect(readFileSync(join(out, 'm', id, `${id}.yaml`)), id).toEqual(readFileSync(join(DEMO, `${id}.yaml`)));
+    for (const id of demoIds)
+      expect(readFileSync(join(out, 'm', id, `${id}.yaml`)), id).toEqual(readFileSync(join(DEMO, `${id}.yaml`)));
   });
 
   it('offers each derivable record as SBML, the same document as `mechatlas export --sbml`', async () => {
@@ -98,7 +118,9 @@ describe('the demo catalogue builds', () => {
       expect(page(id), id).toContain(`${id}.sbml.xml`);
     }
     const id = demoIds[0]!;
-    expect(readFileSync(join(out, 'm', id, `${id}.sbml.xml`), 'utf8')).toBe((await runMain(['export', '--sbml', join(DEMO, `${id}.yaml`)])).stdout);
+    expect(readFileSync(join(out, 'm', id, `${id}.sbml.xml`), 'utf8')).toBe(
+      (await runMain(['export', '--sbml', join(DEMO, `${id}.yaml`)])).stdout,
+    );
     expect(existsSync(join(out, 'm', BROKEN, `${BROKEN}.sbml.xml`))).toBe(false);
   });
 
@@ -109,7 +131,8 @@ describe('the demo catalogue builds', () => {
     const cli = await runMain(['check', content, '--format', 'json']);
     const fromCli = JSON.parse(cli.stdout) as CatalogueReport;
     expect(all.summary).toEqual(fromCli.summary);
-    const withoutFiles = (r: RecordReport) => JSON.parse(JSON.stringify(r, (k, v: unknown) => (k === 'file' ? undefined : v))) as unknown;
+    const withoutFiles = (r: RecordReport) =>
+      JSON.parse(JSON.stringify(r, (k, v: unknown) => (k === 'file' ? undefined : v))) as unknown;
     for (const record of fromCli.records) {
       const published = all.records.find((r) => r.id === record.id)!;
       expect(withoutFiles(published), record.id).toEqual(withoutFiles(record));
@@ -117,7 +140,9 @@ describe('the demo catalogue builds', () => {
       expect(published.file.startsWith('/')).toBe(false);
       expect(JSON.parse(read(`api/m/${record.id}.json`))).toEqual(published);
     }
-    const species = JSON.parse(read('api/species.json')) as { species: { symbol: string; slug: string; occurrences: unknown[] }[] };
+    const species = JSON.parse(read('api/species.json')) as {
+      species: { symbol: string; slug: string; occurrences: unknown[] }[];
+    };
     expect(species.species.find((s) => s.symbol === 'Cat')?.occurrences.length).toBeGreaterThan(1);
   });
 
@@ -128,11 +153,15 @@ describe('the demo catalogue builds', () => {
       for (const tag of startTags(readFileSync(file, 'utf8'))) {
         if (tag.name === 'a') continue; // links to DOIs and references are not assets
         for (const [name, value] of tag.attrs) {
-          if (['src', 'href', 'srcset', 'poster', 'data', 'xlink:href', 'action'].includes(name)) expect(value, `${relative(out, file)} <${tag.name} ${name}>`).not.toMatch(/^\s*(https?:)?\/\//i);
+          if (['src', 'href', 'srcset', 'poster', 'data', 'xlink:href', 'action'].includes(name))
+            expect(value, `${relative(out, file)} <${tag.name} ${name}>`).not.toMatch(/^\s*(https?:)?\/\//i);
         }
       }
     }
-    for (const file of filesUnder(out, '.css')) expect(readFileSync(file, 'utf8'), relative(out, file)).not.toMatch(/url\(\s*['"]?(https?:)?\/\/|@import\s+['"]?(url\()?\s*['"]?(https?:)?\/\//i);
+    for (const file of filesUnder(out, '.css'))
+      expect(readFileSync(file, 'utf8'), relative(out, file)).not.toMatch(
+        /url\(\s*['"]?(https?:)?\/\/|@import\s+['"]?(url\()?\s*['"]?(https?:)?\/\//i,
+      );
   });
 });
 
@@ -142,9 +171,14 @@ function dangerous(tags: Tag[]): string[] {
   for (const tag of tags) {
     for (const [name, value] of tag.attrs) {
       if (/^on/.test(name)) found.push(`<${tag.name} ${name}="${value}">`);
-      if (/^\s*(javascript|data|vbscript):/i.test(value.replace(/[\u0000-\u0020]/g, ''))) found.push(`<${tag.name} ${name}="${value}">`);
+      if (/^\s*(javascript|data|vbscript):/i.test(value.replace(/[\u0000-\u0020]/g, '')))
+        found.push(`<${tag.name} ${name}="${value}">`);
     }
-    if (['script', 'iframe', 'object', 'embed', 'base', 'meta'].includes(tag.name) && !(tag.name === 'meta' && !attr(tag, 'http-equiv'))) found.push(`<${tag.name}>`);
+    if (
+      ['script', 'iframe', 'object', 'embed', 'base', 'meta'].includes(tag.name) &&
+      !(tag.name === 'meta' && !attr(tag, 'http-equiv'))
+    )
+      found.push(`<${tag.name}>`);
   }
   return found;
 }
@@ -156,18 +190,26 @@ describe('pages stay inert whatever a record says', () => {
     // Read as a browser does: `<script>` inside a quoted attribute value is text, not a tag.
     expect(startTags(html).filter((t) => t.name === 'script')).toEqual([]);
     // The notes' ![img](javascript:…) keeps its alt text and loses its address.
-    expect(startTags(html).filter((t) => t.name === 'img').map((t) => attr(t, 'src'))).toEqual([undefined]);
+    expect(
+      startTags(html)
+        .filter((t) => t.name === 'img')
+        .map((t) => attr(t, 'src')),
+    ).toEqual([undefined]);
   });
 
   it('keeps the hostile text visible, escaped', () => {
     const html = page(HOSTILE);
-    expect(elementText(html, /<h1[^>]*>/, 'h1')).toBe('<script>alert("title")</script> "><svg onload=alert(1)> <img src=x onerror=alert(1)>');
+    expect(elementText(html, /<h1[^>]*>/, 'h1')).toBe(
+      '<script>alert("title")</script> "><svg onload=alert(1)> <img src=x onerror=alert(1)>',
+    );
     expect(html).toContain('&lt;script&gt;alert(&quot;tag&quot;)&lt;/script&gt;');
     expect(html).toContain('&lt;script&gt;alert(&quot;name&quot;)&lt;/script&gt;');
     expect(html).toContain('&lt;script&gt;alert(&quot;step&quot;)&lt;/script&gt;');
     // Links only to http(s) and DOIs: the javascript: and data: references are shown as text.
     expect(decodeEntities(html)).toContain('javascript:alert(1)');
-    const external = startTags(html).filter((t) => t.name === 'a' && !/^[#/]/.test(attr(t, 'href') ?? '#')).map((t) => attr(t, 'href'));
+    const external = startTags(html)
+      .filter((t) => t.name === 'a' && !/^[#/]/.test(attr(t, 'href') ?? '#'))
+      .map((t) => attr(t, 'href'));
     expect(external).toEqual(['https://doi.org/10.1234/%22%3E%3Cscript%3Ealert(1)%3C/script%3E']);
   });
 
@@ -178,11 +220,17 @@ describe('pages stay inert whatever a record says', () => {
     // \href and \url are not rendered as links (trust off), and the Markdown links to javascript:
     // and data: addresses keep their text without an address.
     expect(notes).toMatch(/>\\href</);
-    expect(startTags(notes).filter((t) => t.name === 'a').map((t) => attr(t, 'href'))).toEqual([undefined, undefined]);
+    expect(
+      startTags(notes)
+        .filter((t) => t.name === 'a')
+        .map((t) => attr(t, 'href')),
+    ).toEqual([undefined, undefined]);
     // The raw HTML of the notes is dropped, not passed through (its inner text stays, as text).
     expect(notes).toContain('raw link');
     expect(notes).not.toMatch(/<a[^>]*>raw link/);
-    const sizes = [...html.matchAll(/style="([^"]*)"/g)].flatMap((m) => [...m[1]!.matchAll(/(-?[\d.]+)em/g)].map((x) => Math.abs(Number(x[1]))));
+    const sizes = [...html.matchAll(/style="([^"]*)"/g)].flatMap((m) =>
+      [...m[1]!.matchAll(/(-?[\d.]+)em/g)].map((x) => Math.abs(Number(x[1]))),
+    );
     expect(Math.max(...sizes)).toBeLessThanOrEqual(12);
     expect(html).toMatch(/class="mord rule"[^>]*border-right-width:\s*10em/);
   });
@@ -194,11 +242,15 @@ describe('pages stay inert whatever a record says', () => {
   it('gives a record with errors and no derivation a page with its diagnostics', () => {
     const html = page(BROKEN);
     expect(html).toContain('record/schema');
-    expect(html).toContain('the record has an unknown field &#39;&lt;script&gt;alert(&quot;key&quot;)&lt;/script&gt;&#39;');
+    expect(html).toContain(
+      'the record has an unknown field &#39;&lt;script&gt;alert(&quot;key&quot;)&lt;/script&gt;&#39;',
+    );
     expect(html).toContain('href="#L5"');
     expect(html).toContain('id="L5"');
     expect(dangerous(startTags(html))).toEqual([]);
-    expect(readFileSync(join(out, 'm', BROKEN, `${BROKEN}.yaml`))).toEqual(readFileSync(join(FIXTURES, `${BROKEN}.yaml`)));
+    expect(readFileSync(join(out, 'm', BROKEN, `${BROKEN}.yaml`))).toEqual(
+      readFileSync(join(FIXTURES, `${BROKEN}.yaml`)),
+    );
   });
 
   it('leaves no handler or script URL on any page of the catalogue', () => {

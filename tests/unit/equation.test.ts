@@ -14,30 +14,121 @@ function flat(terms: ParsedEquation['reactants']): [string, string, number][] {
 }
 
 describe('parseEquation: terms, coefficients and offsets', () => {
-  const cases: [text: string, reactants: [string, string, number][], products: [string, string, number][], reversible: boolean][] = [
-    ['H2O2 + I- -> H2O + IO-', [['H2O2', '1', 0], ['I-', '1', 7]], [['H2O', '1', 13], ['IO-', '1', 19]], false],
+  const cases: [
+    text: string,
+    reactants: [string, string, number][],
+    products: [string, string, number][],
+    reversible: boolean,
+  ][] = [
+    [
+      'H2O2 + I- -> H2O + IO-',
+      [
+        ['H2O2', '1', 0],
+        ['I-', '1', 7],
+      ],
+      [
+        ['H2O', '1', 13],
+        ['IO-', '1', 19],
+      ],
+      false,
+    ],
     // Charges use + and -: a plus glued to a species is part of it.
-    ['Fe3+ + e- -> Fe2+', [['Fe3+', '1', 0], ['e-', '1', 7]], [['Fe2+', '1', 13]], false],
-    ['Na+ + Cl- -> NaCl', [['Na+', '1', 0], ['Cl-', '1', 6]], [['NaCl', '1', 13]], false],
-    ['2 NO + O2 -> 2 NO2', [['NO', '2', 2], ['O2', '1', 7]], [['NO2', '2', 15]], false],
+    [
+      'Fe3+ + e- -> Fe2+',
+      [
+        ['Fe3+', '1', 0],
+        ['e-', '1', 7],
+      ],
+      [['Fe2+', '1', 13]],
+      false,
+    ],
+    [
+      'Na+ + Cl- -> NaCl',
+      [
+        ['Na+', '1', 0],
+        ['Cl-', '1', 6],
+      ],
+      [['NaCl', '1', 13]],
+      false,
+    ],
+    [
+      '2 NO + O2 -> 2 NO2',
+      [
+        ['NO', '2', 2],
+        ['O2', '1', 7],
+      ],
+      [['NO2', '2', 15]],
+      false,
+    ],
     ['2NO2 <=> N2O4', [['NO2', '2', 1]], [['N2O4', '1', 9]], true],
     ['2NO2<=>N2O4', [['NO2', '2', 1]], [['N2O4', '1', 7]], true],
-    ['2e- + Cu2+ -> Cu', [['e-', '2', 1], ['Cu2+', '1', 6]], [['Cu', '1', 14]], false],
+    [
+      '2e- + Cu2+ -> Cu',
+      [
+        ['e-', '2', 1],
+        ['Cu2+', '1', 6],
+      ],
+      [['Cu', '1', 14]],
+      false,
+    ],
     ['2[Fe(CN)6]3- -> X', [['[Fe(CN)6]3-', '2', 1]], [['X', '1', 16]], false],
     ['2(CH3)3C• -> C8H18', [['(CH3)3C•', '2', 1]], [['C8H18', '1', 13]], false],
-    ['E + S ⇌ ES', [['E', '1', 0], ['S', '1', 4]], [['ES', '1', 8]], true],
+    [
+      'E + S ⇌ ES',
+      [
+        ['E', '1', 0],
+        ['S', '1', 4],
+      ],
+      [['ES', '1', 8]],
+      true,
+    ],
     ['A <-> B', [['A', '1', 0]], [['B', '1', 6]], true],
     ['A ⇄ B', [['A', '1', 0]], [['B', '1', 4]], true],
     ['A → B', [['A', '1', 0]], [['B', '1', 4]], false],
     ['A ⟶ B', [['A', '1', 0]], [['B', '1', 4]], false],
-    ['A* -> A + hν', [['A*', '1', 0]], [['A', '1', 6], ['hν', '1', 10]], false],
+    [
+      'A* -> A + hν',
+      [['A*', '1', 0]],
+      [
+        ['A', '1', 6],
+        ['hν', '1', 10],
+      ],
+      false,
+    ],
     // The same species twice on one side is one term; the first offset is kept.
     ['A + A -> A2', [['A', '2', 0]], [['A2', '1', 9]], false],
-    ['Br• + M + Br• -> Br2 + M', [['Br•', '2', 0], ['M', '1', 6]], [['Br2', '1', 17], ['M', '1', 23]], false],
+    [
+      'Br• + M + Br• -> Br2 + M',
+      [
+        ['Br•', '2', 0],
+        ['M', '1', 6],
+      ],
+      [
+        ['Br2', '1', 17],
+        ['M', '1', 23],
+      ],
+      false,
+    ],
     // White space: tabs and runs of spaces, and around the whole equation.
-    ['  A\t+   B  ->C ', [['A', '1', 2], ['B', '1', 8]], [['C', '1', 13]], false],
+    [
+      '  A\t+   B  ->C ',
+      [
+        ['A', '1', 2],
+        ['B', '1', 8],
+      ],
+      [['C', '1', 13]],
+      false,
+    ],
     // A bond mark inside a species is not an arrow when a real arrow is present.
-    ['CH2=CH2 + H2 -> C2H6', [['CH2=CH2', '1', 0], ['H2', '1', 10]], [['C2H6', '1', 16]], false],
+    [
+      'CH2=CH2 + H2 -> C2H6',
+      [
+        ['CH2=CH2', '1', 0],
+        ['H2', '1', 10],
+      ],
+      [['C2H6', '1', 16]],
+      false,
+    ],
     // `e-` right before the arrow with no space: the arrow is the first "->".
     ['e-->B', [['e-', '1', 0]], [['B', '1', 4]], false],
     // Digits not followed by a letter, '[' or '(' are part of the species text.
@@ -95,10 +186,30 @@ describe('parseEquation: errors point at the problem', () => {
 
 describe('parseEquation: properties', () => {
   const species = fc.oneof(
-    fc.constantFrom('Fe3+', 'Fe2+', 'e-', 'NH4+', 'Na+', 'I-', 'H2O2', 'SO4^2-', '[Co(NH3)6]3+', 'A*', 'E', 'ES', 'O2•-', 'CH2=CH2', '(CH3)3C•'),
+    fc.constantFrom(
+      'Fe3+',
+      'Fe2+',
+      'e-',
+      'NH4+',
+      'Na+',
+      'I-',
+      'H2O2',
+      'SO4^2-',
+      '[Co(NH3)6]3+',
+      'A*',
+      'E',
+      'ES',
+      'O2•-',
+      'CH2=CH2',
+      '(CH3)3C•',
+    ),
     fc.stringMatching(/^[A-Z][A-Za-z0-9]{0,4}[+*-]?$/),
   );
-  const term = fc.record({ species, coefficient: fc.integer({ min: 1, max: 12 }), style: fc.constantFrom('plain', 'spaced', 'glued') });
+  const term = fc.record({
+    species,
+    coefficient: fc.integer({ min: 1, max: 12 }),
+    style: fc.constantFrom('plain', 'spaced', 'glued'),
+  });
   const gap = fc.stringMatching(/^[ \t]{1,3}$/);
   const arrow = fc.constantFrom('->', '→', '⟶', '<=>', '⇌', '<->', '⇄');
   const side = fc.array(fc.tuple(term, gap, gap), { minLength: 1, maxLength: 4 });
@@ -113,12 +224,16 @@ describe('parseEquation: properties', () => {
           const expected = new Map<string, { coefficient: bigint; offset: number }>();
           terms.forEach(([t, gapBefore, gapAfter], i) => {
             if (i > 0) text += `${gapBefore}+${gapAfter}`;
-            const style = t.coefficient === 1 && t.style === 'plain' ? 'plain' : t.style === 'plain' ? 'spaced' : t.style;
+            const style =
+              t.coefficient === 1 && t.style === 'plain' ? 'plain' : t.style === 'plain' ? 'spaced' : t.style;
             if (style === 'spaced') text += `${t.coefficient} `;
             if (style === 'glued') text += `${t.coefficient}`;
             const seen = expected.get(t.species);
             const n = BigInt(style === 'plain' ? 1 : t.coefficient);
-            expected.set(t.species, { coefficient: (seen?.coefficient ?? 0n) + n, offset: seen?.offset ?? text.length });
+            expected.set(t.species, {
+              coefficient: (seen?.coefficient ?? 0n) + n,
+              offset: seen?.offset ?? text.length,
+            });
             text += t.species;
           });
           expectedSides.push(expected);
@@ -139,19 +254,40 @@ describe('parseEquation: properties', () => {
   });
 
   it('never throws, and every error offset lies inside the text', () => {
-    const piece = fc.constantFrom('A', 'Fe3+', 'e-', ' + ', '+', ' ', '->', '<=>', '=', '2', '0', '1/2', '½', '⇌', '↔', '\t');
+    const piece = fc.constantFrom(
+      'A',
+      'Fe3+',
+      'e-',
+      ' + ',
+      '+',
+      ' ',
+      '->',
+      '<=>',
+      '=',
+      '2',
+      '0',
+      '1/2',
+      '½',
+      '⇌',
+      '↔',
+      '\t',
+    );
     fc.assert(
-      fc.property(fc.array(piece, { maxLength: 10 }).map((a) => a.join('')), (text) => {
-        const r = parseEquation(text);
-        if ('error' in r) {
-          expect(r.offset).toBeGreaterThanOrEqual(0);
-          expect(r.offset).toBeLessThanOrEqual(text.length);
-        } else {
-          expect(r.equation.reactants.length).toBeGreaterThan(0);
-          expect(r.equation.products.length).toBeGreaterThan(0);
-          for (const t of [...r.equation.reactants, ...r.equation.products]) expect(t.coefficient.num).toBeGreaterThan(0n);
-        }
-      }),
+      fc.property(
+        fc.array(piece, { maxLength: 10 }).map((a) => a.join('')),
+        (text) => {
+          const r = parseEquation(text);
+          if ('error' in r) {
+            expect(r.offset).toBeGreaterThanOrEqual(0);
+            expect(r.offset).toBeLessThanOrEqual(text.length);
+          } else {
+            expect(r.equation.reactants.length).toBeGreaterThan(0);
+            expect(r.equation.products.length).toBeGreaterThan(0);
+            for (const t of [...r.equation.reactants, ...r.equation.products])
+              expect(t.coefficient.num).toBeGreaterThan(0n);
+          }
+        },
+      ),
     );
   });
 });

@@ -1,6 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { ELEMENT_SYMBOLS, atomicNumber, isAtomSymbol, nuclideSymbol, splitNuclide } from '../../src/engine/notation/elements.ts';
+import {
+  ELEMENT_SYMBOLS,
+  atomicNumber,
+  isAtomSymbol,
+  nuclideSymbol,
+  splitNuclide,
+} from '../../src/engine/notation/elements.ts';
 import { formatComposition, parseFormula, type Composition, type Phase } from '../../src/engine/notation/formula.ts';
 
 function compositionOf(text: string): Composition {
@@ -242,13 +248,16 @@ describe('parseFormula: properties', () => {
   it('never throws, and every error offset lies inside the text', () => {
     const alphabet = fc.constantFrom(...'HOCNFeSl()[]{}^+-−23456·.•*e ²⁻₂aqgs'.split(''), 'Fe', '(aq)', '[13C]');
     fc.assert(
-      fc.property(fc.array(alphabet, { maxLength: 12 }).map((a) => a.join('')), (text) => {
-        const r = parseFormula(text);
-        if ('error' in r) {
-          expect(r.offset).toBeGreaterThanOrEqual(0);
-          expect(r.offset).toBeLessThanOrEqual(text.length);
-        }
-      }),
+      fc.property(
+        fc.array(alphabet, { maxLength: 12 }).map((a) => a.join('')),
+        (text) => {
+          const r = parseFormula(text);
+          if ('error' in r) {
+            expect(r.offset).toBeGreaterThanOrEqual(0);
+            expect(r.offset).toBeLessThanOrEqual(text.length);
+          }
+        },
+      ),
     );
   });
 });

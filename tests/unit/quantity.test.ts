@@ -120,20 +120,44 @@ describe('conversion', () => {
 });
 
 describe('properties', () => {
-  const units = ['', 'M', 'µM', 's^-1', 'M^-1 s^-1', 'cm^3 molecule^-1 s^-1', 'kJ/mol', 'kcal/mol', 'eV', 'K', 'atm', 'Torr'];
+  const units = [
+    '',
+    'M',
+    'µM',
+    's^-1',
+    'M^-1 s^-1',
+    'cm^3 molecule^-1 s^-1',
+    'kJ/mol',
+    'kcal/mol',
+    'eV',
+    'K',
+    'atm',
+    'Torr',
+  ];
   // -0 prints as 0; adding 0 turns it into +0 so that the comparison is about parsing.
   const finite = fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e200, max: 1e200 }).map((x) => x + 0);
   const nonNegative = fc.double({ noNaN: true, noDefaultInfinity: true, min: 0, max: 1e200 }).map((x) => x + 0);
 
   it('reads back what formatQuantity writes, exactly', () => {
     fc.assert(
-      fc.property(finite, fc.option(nonNegative, { nil: undefined }), fc.constantFrom(...units), (value, uncertainty, unitText) => {
-        const r = parseUnit(unitText);
-        if ('error' in r) return false;
-        const q: Quantity = uncertainty === undefined ? { value, unit: r.unit } : { value, uncertainty, unit: r.unit };
-        const back = parseQuantity(formatQuantity(q));
-        return 'quantity' in back && back.quantity.value === value && back.quantity.uncertainty === uncertainty && back.quantity.unit.text === unitText;
-      }),
+      fc.property(
+        finite,
+        fc.option(nonNegative, { nil: undefined }),
+        fc.constantFrom(...units),
+        (value, uncertainty, unitText) => {
+          const r = parseUnit(unitText);
+          if ('error' in r) return false;
+          const q: Quantity =
+            uncertainty === undefined ? { value, unit: r.unit } : { value, uncertainty, unit: r.unit };
+          const back = parseQuantity(formatQuantity(q));
+          return (
+            'quantity' in back &&
+            back.quantity.value === value &&
+            back.quantity.uncertainty === uncertainty &&
+            back.quantity.unit.text === unitText
+          );
+        },
+      ),
     );
   });
 

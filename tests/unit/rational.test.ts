@@ -3,7 +3,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Rational } from '../../src/engine/exact/rational.ts';
 
-const rational = fc.tuple(fc.bigInt({ min: -(10n ** 12n), max: 10n ** 12n }), fc.bigInt({ min: 1n, max: 10n ** 9n })).map(([n, d]) => Rational.of(n, d));
+const rational = fc
+  .tuple(fc.bigInt({ min: -(10n ** 12n), max: 10n ** 12n }), fc.bigInt({ min: 1n, max: 10n ** 9n }))
+  .map(([n, d]) => Rational.of(n, d));
 
 describe('Rational', () => {
   it.each([

@@ -8,14 +8,21 @@ import { deriveMechanism } from '../../src/engine/derive.ts';
 import { loadRecordSource } from '../../src/records/index.ts';
 
 const symbols = ['A', 'B', 'C', 'I', 'J', 'E', 'ES', 'P', 'Q', 'M', 'X2', 'X'];
-const term = fc.tuple(fc.integer({ min: 1, max: 3 }), fc.constantFrom(...symbols)).map(([n, s]) => (n === 1 ? s : `${n} ${s}`));
-const side = fc.uniqueArray(term, { minLength: 1, maxLength: 3, selector: (t) => t.split(' ').at(-1) }).map((ts) => ts.join(' + '));
+const term = fc
+  .tuple(fc.integer({ min: 1, max: 3 }), fc.constantFrom(...symbols))
+  .map(([n, s]) => (n === 1 ? s : `${n} ${s}`));
+const side = fc
+  .uniqueArray(term, { minLength: 1, maxLength: 3, selector: (t) => t.split(' ').at(-1) })
+  .map((ts) => ts.join(' + '));
 const step = fc.record({
   left: side,
   right: side,
   arrow: fc.constantFrom('->', '<=>'),
   rds: fc.boolean(),
-  k: fc.option(fc.constantFrom('1 s^-1', '2.5e3 M^-1 s^-1', '7 M^-2 s^-1', '3 s', 'x', '1e9 M^-1 s^-1', '1e-4 s^-1'), { freq: 1, nil: undefined }),
+  k: fc.option(fc.constantFrom('1 s^-1', '2.5e3 M^-1 s^-1', '7 M^-2 s^-1', '3 s', 'x', '1e9 M^-1 s^-1', '1e-4 s^-1'), {
+    freq: 1,
+    nil: undefined,
+  }),
   K: fc.option(fc.constantFrom('0.5', '2 M', '1e-3 M^-1'), { nil: undefined }),
   barrier: fc.option(fc.integer({ min: -20, max: 120 }), { nil: undefined }),
   change: fc.option(fc.integer({ min: -80, max: 60 }), { nil: undefined }),
@@ -25,10 +32,20 @@ const record = fc.record({
   approximation: fc.constantFrom('auto', 'rds', 'steady_state', 'both'),
   declared: fc.dictionary(
     fc.constantFrom(...symbols),
-    fc.constantFrom('{ role: catalyst }', '{ role: intermediate }', '{ role: inhibitor }', '{ buffered: true }', '{ solvent: true }', '{ third_body: true }', '{ role: reactant }'),
+    fc.constantFrom(
+      '{ role: catalyst }',
+      '{ role: intermediate }',
+      '{ role: inhibitor }',
+      '{ buffered: true }',
+      '{ solvent: true }',
+      '{ third_body: true }',
+      '{ role: reactant }',
+    ),
     { maxKeys: 3 },
   ),
-  concentrations: fc.dictionary(fc.constantFrom(...symbols), fc.constantFrom('0.1 M', '0 M', '1e-6 M', '5 mM'), { maxKeys: 4 }),
+  concentrations: fc.dictionary(fc.constantFrom(...symbols), fc.constantFrom('0.1 M', '0 M', '1e-6 M', '5 mM'), {
+    maxKeys: 4,
+  }),
   orders: fc.dictionary(fc.constantFrom(...symbols), fc.constantFrom('1', '0.5 ± 0.1', '-1', '2'), { maxKeys: 3 }),
 });
 
@@ -41,14 +58,21 @@ function yamlOf(r: Generated): string {
       if (s.rds) lines.push('    rds: true');
       if (s.k) lines.push(`    k: ${s.k}`);
       if (s.K && s.arrow === '<=>') lines.push(`    K: ${s.K}`);
-      if (s.barrier !== undefined) lines.push(`    energy: { barrier: ${s.barrier} kJ/mol${s.change === undefined ? '' : `, change: ${s.change} kJ/mol`} }`);
+      if (s.barrier !== undefined)
+        lines.push(
+          `    energy: { barrier: ${s.barrier} kJ/mol${s.change === undefined ? '' : `, change: ${s.change} kJ/mol`} }`,
+        );
       return lines.join('\n');
     })
     .join('\n');
   const declared = Object.entries(r.declared);
   const species = declared.length > 0 ? `species:\n${declared.map(([k, v]) => `  ${k}: ${v}`).join('\n')}\n` : '';
-  const conc = Object.entries(r.concentrations).map(([k, v]) => `${k}: ${v}`).join(', ');
-  const ord = Object.entries(r.orders).map(([k, v]) => `${k}: ${v}`).join(', ');
+  const conc = Object.entries(r.concentrations)
+    .map(([k, v]) => `${k}: ${v}`)
+    .join(', ');
+  const ord = Object.entries(r.orders)
+    .map(([k, v]) => `${k}: ${v}`)
+    .join(', ');
   return `title: generated\nsystem: generated\nstatus: favoured\nnotation: labels\napproximation: ${r.approximation}\n${species}steps:\n${steps}\nobservations:\n  - id: obs\n    concentrations: { ${conc} }\n    orders: { ${ord} }\n`;
 }
 

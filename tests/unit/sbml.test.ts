@@ -53,14 +53,18 @@ describe('SBML export', () => {
     const ids = [...sbml.matchAll(/ id="([^"]+)"/g)].map((m) => m[1]!);
     for (const id of ids) expect(id).toMatch(SID);
     expect(new Set(ids).size).toBe(ids.length);
-    const referenced = [...sbml.matchAll(/<ci> (\S+) <\/ci>/g), ...sbml.matchAll(/species="([^"]+)"/g)].map((m) => m[1]!);
+    const referenced = [...sbml.matchAll(/<ci> (\S+) <\/ci>/g), ...sbml.matchAll(/species="([^"]+)"/g)].map(
+      (m) => m[1]!,
+    );
     for (const r of referenced) expect(ids).toContain(r);
   });
 
   it('gives every species the attributes L3 requires, the solvent as a boundary species', () => {
     const species = [...sbml.matchAll(/<species [^>]*\/>/g)].map((m) => m[0]);
     expect(species).toHaveLength(5);
-    for (const s of species) for (const attr of ['compartment=', 'hasOnlySubstanceUnits=', 'boundaryCondition=', 'constant=']) expect(s).toContain(attr);
+    for (const s of species)
+      for (const attr of ['compartment=', 'hasOnlySubstanceUnits=', 'boundaryCondition=', 'constant='])
+        expect(s).toContain(attr);
     expect(species.find((s) => s.includes('name="H2O"'))).toContain('boundaryCondition="true"');
     expect(species.find((s) => s.includes('name="I-"'))).toContain('initialConcentration="0.01"');
   });

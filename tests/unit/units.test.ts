@@ -102,7 +102,16 @@ describe('parseUnit factors (canonical: mol, dm, s, J, K)', () => {
 
   it('reads the same unit through every grammar form', () => {
     // All of these spell M^-1 s^-1, by the grammar in the brief.
-    for (const text of ['M^-1 s^-1', 'M^-1*s^-1', 'M^-1·s^-1', 'M-1 s-1', 'M^(-1) s^(-1)', 'M−1 s−1', '1/(M s)', 'L/mol/s']) {
+    for (const text of [
+      'M^-1 s^-1',
+      'M^-1*s^-1',
+      'M^-1·s^-1',
+      'M-1 s-1',
+      'M^(-1) s^(-1)',
+      'M−1 s−1',
+      '1/(M s)',
+      'L/mol/s',
+    ]) {
       expect(sameDimension(unitOf(text).dimension, rateConstantDimension(2)), text).toBe(true);
       expect(unitOf(text).factor, text).toBe(1);
     }
@@ -149,13 +158,31 @@ describe('dimensions', () => {
   });
 
   it('multiplies factors and adds dimensions when units are juxtaposed (property)', () => {
-    const texts = ['M', 'mM', 'µM', 's^-1', 'min', 'h^-1', 'cm^3', 'molecule^-1', 'kJ/mol', 'kcal', 'eV', 'K^-1', 'atm', 'Torr', 'L'];
+    const texts = [
+      'M',
+      'mM',
+      'µM',
+      's^-1',
+      'min',
+      'h^-1',
+      'cm^3',
+      'molecule^-1',
+      'kJ/mol',
+      'kcal',
+      'eV',
+      'K^-1',
+      'atm',
+      'Torr',
+      'L',
+    ];
     fc.assert(
       fc.property(fc.constantFrom(...texts), fc.constantFrom(...texts), (a, b) => {
         const ua = unitOf(a);
         const ub = unitOf(b);
         const both = unitOf(`${a} ${b}`);
-        const dimensionsAdd = BASE_DIMENSIONS.every((k) => both.dimension[k].equals(ua.dimension[k].add(ub.dimension[k])));
+        const dimensionsAdd = BASE_DIMENSIONS.every((k) =>
+          both.dimension[k].equals(ua.dimension[k].add(ub.dimension[k])),
+        );
         return dimensionsAdd && Math.abs(both.factor / (ua.factor * ub.factor) - 1) < 1e-15;
       }),
     );

@@ -40,9 +40,18 @@ function readTemperature(text: string | number | undefined, diagnostics: Diagnos
   if (text === undefined) return DEFAULT_TEMPERATURE;
   const path = ['energy', 'T'];
   const parsed = parseQuantity(text);
-  if ('error' in parsed || !sameDimension(parsed.quantity.unit.dimension, TEMPERATURE) || toCanonical(parsed.quantity) <= 0) {
+  if (
+    'error' in parsed ||
+    !sameDimension(parsed.quantity.unit.dimension, TEMPERATURE) ||
+    toCanonical(parsed.quantity) <= 0
+  ) {
     const why = 'error' in parsed ? parsed.error : 'it must be a positive temperature in K';
-    diagnostics.push(diagnostic('energy/profile', 'error', `energy/T: ${why}; ${DEFAULT_TEMPERATURE} K is used`, { path, actual: text }));
+    diagnostics.push(
+      diagnostic('energy/profile', 'error', `energy/T: ${why}; ${DEFAULT_TEMPERATURE} K is used`, {
+        path,
+        actual: text,
+      }),
+    );
     return DEFAULT_TEMPERATURE;
   }
   return toCanonical(parsed.quantity);
@@ -60,7 +69,10 @@ function readStandardState(text: string | number | undefined, T: number, diagnos
   }
   const why = 'error' in parsed ? parsed.error : 'it must be a positive concentration (1 M) or pressure (1 bar)';
   diagnostics.push(
-    diagnostic('energy/profile', 'error', `energy/standard_state: ${why}; 1 M is used`, { path: ['energy', 'standard_state'], actual: text }),
+    diagnostic('energy/profile', 'error', `energy/standard_state: ${why}; 1 M is used`, {
+      path: ['energy', 'standard_state'],
+      actual: text,
+    }),
   );
   return DEFAULT_STANDARD_CONCENTRATION;
 }

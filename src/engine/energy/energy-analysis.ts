@@ -18,11 +18,22 @@ export type { EnergyResult };
 const KJ = 1000;
 
 /** Profile and energetic span of one turnover along the route. */
-export function energyAnalysis(record: MechanismRecord, mechanism: Mechanism, route: Route): { energy?: EnergyResult; diagnostics: Diagnostic[] } {
+export function energyAnalysis(
+  record: MechanismRecord,
+  mechanism: Mechanism,
+  route: Route,
+): { energy?: EnergyResult; diagnostics: Diagnostic[] } {
   const { conditions, diagnostics } = energyConditions(record);
   const read = readStepEnergies(record, mechanism);
   diagnostics.push(...read.diagnostics);
-  const built = buildEnergyProfile({ mechanism, sigma: route.sigma, sequence: route.sequence, reactants: route.overall.reactants, energies: read.energies, basis: conditions.basis });
+  const built = buildEnergyProfile({
+    mechanism,
+    sigma: route.sigma,
+    sequence: route.sequence,
+    reactants: route.overall.reactants,
+    energies: read.energies,
+    basis: conditions.basis,
+  });
   diagnostics.push(...built.diagnostics);
   const profile = built.profile;
   const energy: EnergyResult = { ...profile, T: conditions.T };
@@ -35,16 +46,26 @@ export function energyAnalysis(record: MechanismRecord, mechanism: Mechanism, ro
   Object.assign(energy, spanFields(profile, span, conditions.basis === 'G'));
   if (conditions.basis !== 'G') {
     diagnostics.push(
-      diagnostic('energy/profile', 'info', `the energies are ${conditions.basis === 'H' ? 'enthalpies' : 'electronic energies'}; the span and its determining states are shown, but a turnover frequency needs Gibbs energies`, {
-        path: ['energy', 'basis'],
-      }),
+      diagnostic(
+        'energy/profile',
+        'info',
+        `the energies are ${conditions.basis === 'H' ? 'enthalpies' : 'electronic energies'}; the span and its determining states are shown, but a turnover frequency needs Gibbs energies`,
+        {
+          path: ['energy', 'basis'],
+        },
+      ),
     );
   }
   if (profile.kind === 'cycle' && span.reactionEnergy > 0) {
     diagnostics.push(
-      diagnostic('energy/profile', 'warning', `one turnover is endergonic (ΔG_r = +${+(span.reactionEnergy / KJ).toPrecision(6)} kJ/mol): at the standard state the cycle runs backwards`, {
-        path: ['steps'],
-      }),
+      diagnostic(
+        'energy/profile',
+        'warning',
+        `one turnover is endergonic (ΔG_r = +${+(span.reactionEnergy / KJ).toPrecision(6)} kJ/mol): at the standard state the cycle runs backwards`,
+        {
+          path: ['steps'],
+        },
+      ),
     );
   }
   diagnostics.push(...rdsAgainstSpan(mechanism, energy));
@@ -71,7 +92,8 @@ function spanFields(profile: EnergyProfile, span: SpanResult, gibbs: boolean): P
 // says which one does, measured from the lowest preceding minimum rather than from its own start.
 function rdsAgainstSpan(mechanism: Mechanism, energy: EnergyResult): Diagnostic[] {
   const rds = mechanism.steps.find((s) => s.rds);
-  if (!rds || energy.tdts_step === undefined || energy.rds_step === undefined || rds.label === energy.tdts_step) return [];
+  if (!rds || energy.tdts_step === undefined || energy.rds_step === undefined || rds.label === energy.tdts_step)
+    return [];
   return [
     diagnostic(
       'energy/rds-span',

@@ -64,11 +64,22 @@ export function eyringStepConstants(
     const { barrier, change } = read.energies[step.index] ?? {};
     const forwardMolecularity = molecularity(step.reactants);
     const reverseMolecularity = molecularity(step.products);
-    const out: StepEyringConstants = { stepIndex: step.index, label: step.label, forwardMolecularity, reverseMolecularity };
+    const out: StepEyringConstants = {
+      stepIndex: step.index,
+      label: step.label,
+      forwardMolecularity,
+      reverseMolecularity,
+    };
     if (barrier === undefined) return out;
     out.k = eyringRateConstant({ barrier, T, molecularity: forwardMolecularity, standardConcentration });
     // The reverse climbs to the same transition state from the step's products.
-    if (change !== undefined) out.kRev = eyringRateConstant({ barrier: barrier - change, T, molecularity: reverseMolecularity, standardConcentration });
+    if (change !== undefined)
+      out.kRev = eyringRateConstant({
+        barrier: barrier - change,
+        T,
+        molecularity: reverseMolecularity,
+        standardConcentration,
+      });
     return out;
   });
   return { conditions, constants, diagnostics };

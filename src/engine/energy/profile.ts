@@ -44,7 +44,9 @@ export function buildEnergyProfile(input: ProfileInput): { profile: EnergyProfil
     states.push(minimum);
   });
   const onRoute = mechanism.steps.filter((s) => (sigma[s.index] ?? 0) > 0);
-  const missing = onRoute.filter((s) => energies[s.index]?.barrier === undefined || energies[s.index]?.change === undefined);
+  const missing = onRoute.filter(
+    (s) => energies[s.index]?.barrier === undefined || energies[s.index]?.change === undefined,
+  );
   const rds = onRoute.find((s) => s.rds);
   const profile: EnergyProfile = {
     basis,
@@ -60,13 +62,20 @@ export function buildEnergyProfile(input: ProfileInput): { profile: EnergyProfil
     profile.direction = level < 0 ? 'exergonic' : level > 0 ? 'endergonic' : 'thermoneutral';
   }
   const diagnostics = onRoute.flatMap((s) => transitionStateChecks(s.label, s.index, energies[s.index] ?? {}));
-  const someRecorded = onRoute.some((s) => energies[s.index]?.barrier !== undefined || energies[s.index]?.change !== undefined);
+  const someRecorded = onRoute.some(
+    (s) => energies[s.index]?.barrier !== undefined || energies[s.index]?.change !== undefined,
+  );
   if (someRecorded && missing.length > 0) {
     const labels = missing.map((s) => s.label).join(', ');
     diagnostics.push(
-      diagnostic('energy/profile', 'info', `step${missing.length > 1 ? 's' : ''} ${labels} of the route record${missing.length > 1 ? '' : 's'} no barrier or no change, so the profile is schematic and no energetic span is computed`, {
-        path: ['steps', missing[0]!.index],
-      }),
+      diagnostic(
+        'energy/profile',
+        'info',
+        `step${missing.length > 1 ? 's' : ''} ${labels} of the route record${missing.length > 1 ? '' : 's'} no barrier or no change, so the profile is schematic and no energetic span is computed`,
+        {
+          path: ['steps', missing[0]!.index],
+        },
+      ),
     );
   }
   return { profile, diagnostics };
@@ -79,16 +88,28 @@ function transitionStateChecks(label: string, index: number, e: StepEnergyValues
   const kj = (x: number) => `${+(x / KJ).toPrecision(6)} kJ/mol`;
   if (e.barrier === undefined) return [];
   if (e.barrier < 0) {
-    return [diagnostic('energy/profile', 'error', `the transition state of step ${label} lies below its starting minimum (barrier ${kj(e.barrier)})`, { path, actual: e.barrier / KJ })];
+    return [
+      diagnostic(
+        'energy/profile',
+        'error',
+        `the transition state of step ${label} lies below its starting minimum (barrier ${kj(e.barrier)})`,
+        { path, actual: e.barrier / KJ },
+      ),
+    ];
   }
   if (e.change !== undefined && e.barrier < e.change) {
     return [
-      diagnostic('energy/profile', 'error', `the transition state of step ${label} lies below the minimum it leads to (barrier ${kj(e.barrier)} < change ${kj(e.change)})`, {
-        path,
-        actual: e.barrier / KJ,
-        expected: `at least ${e.change / KJ}`,
-        note: 'a barrier is measured from the step’s starting state; the reverse barrier is barrier − change and must not be negative',
-      }),
+      diagnostic(
+        'energy/profile',
+        'error',
+        `the transition state of step ${label} lies below the minimum it leads to (barrier ${kj(e.barrier)} < change ${kj(e.change)})`,
+        {
+          path,
+          actual: e.barrier / KJ,
+          expected: `at least ${e.change / KJ}`,
+          note: 'a barrier is measured from the step’s starting state; the reverse barrier is barrier − change and must not be negative',
+        },
+      ),
     ];
   }
   return [];

@@ -19,7 +19,11 @@ export interface SpeciesWalk {
  * and its deepest running deficit along the route: that deficit is how much of a catalyst (or of a
  * reactant consumed twice before it is partly re-formed, as NO2 in NO2 + CO) must be on hand.
  */
-export function walkSpecies(mechanism: Mechanism, sequence: readonly Step[], reactants: ReadonlyMap<string, Rational>): SpeciesWalk {
+export function walkSpecies(
+  mechanism: Mechanism,
+  sequence: readonly Step[],
+  reactants: ReadonlyMap<string, Rational>,
+): SpeciesWalk {
   const order = [...mechanism.species.keys()];
   const deficit = new Map<string, Rational>();
   const running = new Map<string, Rational>();

@@ -18,7 +18,10 @@ export interface StepEnergyValues {
 const KJ_PER_MOL = 1000;
 
 /** The recorded energies of every step, by step index, with unit diagnostics. */
-export function readStepEnergies(record: MechanismRecord, mechanism: Mechanism): { energies: StepEnergyValues[]; diagnostics: Diagnostic[] } {
+export function readStepEnergies(
+  record: MechanismRecord,
+  mechanism: Mechanism,
+): { energies: StepEnergyValues[]; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
   const energies = mechanism.steps.map((step) => {
     const entry = record.steps[step.index]?.energy;
@@ -44,13 +47,22 @@ function readEnergy(text: string | number, path: (string | number)[], diagnostic
   const q = parsed.quantity;
   if (q.unit.text === '') {
     diagnostics.push(
-      diagnostic('energy/profile', 'warning', `${field} has no unit; it is read as kJ/mol`, { path, actual: text, note: `write ${q.value} kJ/mol (or kcal/mol, eV)` }),
+      diagnostic('energy/profile', 'warning', `${field} has no unit; it is read as kJ/mol`, {
+        path,
+        actual: text,
+        note: `write ${q.value} kJ/mol (or kcal/mol, eV)`,
+      }),
     );
     return q.value * KJ_PER_MOL;
   }
   if (!sameDimension(q.unit.dimension, MOLAR_ENERGY)) {
     diagnostics.push(
-      diagnostic('energy/profile', 'error', `${field} must be a molar energy such as kJ/mol, kcal/mol or eV, not '${q.unit.text}'`, { path, actual: text }),
+      diagnostic(
+        'energy/profile',
+        'error',
+        `${field} must be a molar energy such as kJ/mol, kcal/mol or eV, not '${q.unit.text}'`,
+        { path, actual: text },
+      ),
     );
     return undefined;
   }

@@ -93,8 +93,9 @@ function polynomial(p: Polynomial, notation: Notation): string {
   const weight = notation.weight;
   ordered.sort(
     (a, b) =>
-      (weight ? weight(a.t.monomial) - weight(b.t.monomial) : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) ||
-      compareFactors(a.factors, b.factors, notation),
+      (weight
+        ? weight(a.t.monomial) - weight(b.t.monomial)
+        : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) || compareFactors(a.factors, b.factors, notation),
   );
   return ordered
     .map(({ t }, i) => {

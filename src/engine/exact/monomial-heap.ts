@@ -16,7 +16,7 @@ export class MonomialHeap {
   push(m: Monomial): void {
     const a = this.items;
     a.push(m);
-    for (let i = a.length - 1; i > 0; ) {
+    for (let i = a.length - 1; i > 0;) {
       const parent = (i - 1) >> 1;
       if (Monomial.compare(a[i]!, a[parent]!) <= 0) break;
       [a[i], a[parent]] = [a[parent]!, a[i]!];
@@ -31,7 +31,7 @@ export class MonomialHeap {
     const last = a.pop();
     if (a.length === 0 || last === undefined) return top;
     a[0] = last;
-    for (let i = 0; ; ) {
+    for (let i = 0; ;) {
       const [l, r] = [2 * i + 1, 2 * i + 2];
       let big = i;
       if (l < a.length && Monomial.compare(a[l]!, a[big]!) > 0) big = l;

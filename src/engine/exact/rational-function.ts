@@ -125,7 +125,13 @@ export class RationalFunction {
   /** ∂/∂symbol by the quotient rule. */
   derivative(symbol: string): RationalFunction {
     const [a, b] = [this.numerator, this.denominator];
-    return RationalFunction.of(a.derivative(symbol).mul(b).sub(a.mul(b.derivative(symbol))), b.mul(b));
+    return RationalFunction.of(
+      a
+        .derivative(symbol)
+        .mul(b)
+        .sub(a.mul(b.derivative(symbol))),
+      b.mul(b),
+    );
   }
 
   /**
@@ -135,7 +141,10 @@ export class RationalFunction {
   logDerivative(symbol: string): RationalFunction | undefined {
     if (this.isZero()) return undefined;
     const [a, b] = [this.numerator, this.denominator];
-    const slope = a.derivative(symbol).mul(b).sub(a.mul(b.derivative(symbol)));
+    const slope = a
+      .derivative(symbol)
+      .mul(b)
+      .sub(a.mul(b.derivative(symbol)));
     return RationalFunction.of(slope.mulTerm(Rational.ONE, Monomial.of(symbol)), a.mul(b));
   }
 }

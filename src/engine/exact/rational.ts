@@ -53,7 +53,9 @@ export class Rational {
     const fraction = bits & ((1n << 52n) - 1n);
     const mantissa = biased === 0 ? fraction : fraction | (1n << 52n);
     const exponent = (biased === 0 ? 1 : biased) - 1075;
-    return exponent >= 0 ? Rational.of(sign * (mantissa << BigInt(exponent))) : Rational.of(sign * mantissa, 1n << BigInt(-exponent));
+    return exponent >= 0
+      ? Rational.of(sign * (mantissa << BigInt(exponent)))
+      : Rational.of(sign * mantissa, 1n << BigInt(-exponent));
   }
 
   add(o: Rational): Rational {
@@ -96,7 +98,7 @@ export class Rational {
   /** The nearest double (within an ulp or so), also when numerator and denominator are huge. */
   toNumber(): number {
     const limit = 1n << 53n;
-    if ((this.num < limit && -this.num < limit) && this.den < limit) return Number(this.num) / Number(this.den);
+    if (this.num < limit && -this.num < limit && this.den < limit) return Number(this.num) / Number(this.den);
     // Keep 64 significant bits of the quotient, then scale back by a power of two.
     const shift = bitLength(this.den) - bitLength(this.num < 0n ? -this.num : this.num) + 64;
     const q = shift >= 0 ? (this.num << BigInt(shift)) / this.den : this.num / (this.den << BigInt(-shift));
@@ -107,7 +109,9 @@ export class Rational {
     return this.den === 1n ? this.num.toString() : `${this.num}/${this.den}`;
   }
   toJSON(): number | string {
-    return this.den === 1n && this.num <= BigInt(Number.MAX_SAFE_INTEGER) && -this.num <= BigInt(Number.MAX_SAFE_INTEGER)
+    return this.den === 1n &&
+      this.num <= BigInt(Number.MAX_SAFE_INTEGER) &&
+      -this.num <= BigInt(Number.MAX_SAFE_INTEGER)
       ? Number(this.num)
       : this.toString();
   }

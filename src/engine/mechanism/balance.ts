@@ -26,7 +26,10 @@ function checkStepBalance(mechanism: Mechanism, step: Step): { balance: StepBala
   const atoms = new Map<string, { left: number; right: number }>();
   let leftCharge = 0;
   let rightCharge = 0;
-  for (const [side, terms] of [['left', step.reactants], ['right', step.products]] as const) {
+  for (const [side, terms] of [
+    ['left', step.reactants],
+    ['right', step.products],
+  ] as const) {
     for (const term of terms) {
       const composition = mechanism.species.get(term.species)!.composition;
       if (!composition) continue;
@@ -53,11 +56,16 @@ function checkStepBalance(mechanism: Mechanism, step: Step): { balance: StepBala
   }
   if (leftCharge !== rightCharge) {
     out.push(
-      diagnostic('balance/charge', 'error', `charge does not balance: ${signed(leftCharge)} on the left, ${signed(rightCharge)} on the right`, {
-        path,
-        actual: rightCharge,
-        expected: leftCharge,
-      }),
+      diagnostic(
+        'balance/charge',
+        'error',
+        `charge does not balance: ${signed(leftCharge)} on the left, ${signed(rightCharge)} on the right`,
+        {
+          path,
+          actual: rightCharge,
+          expected: leftCharge,
+        },
+      ),
     );
   }
   return { balance: out.length > 0 ? 'unbalanced' : 'balanced', diagnostics: out };

@@ -36,10 +36,15 @@ export function checkDetailedBalance(mechanism: Mechanism, constants: readonly S
     if (!known || Math.abs(logProduct) <= Math.log(1 + TOLERANCE)) continue;
     const first = reversible[cycle.findIndex((n) => !n.isZero())]!;
     out.push(
-      diagnostic('constants/detailed-balance', 'warning', `the steps ${parts.map((p) => p.split('^')[0]!.slice(2)).join(', ')} form a closed cycle, so ${parts.join(' · ')} must be 1 (detailed balance), but it is ${Math.exp(logProduct).toPrecision(3)}`, {
-        path: ['steps', first.index],
-        note: 'no equilibrium satisfies these constants; check the K, k or k_rev of the cycle',
-      }),
+      diagnostic(
+        'constants/detailed-balance',
+        'warning',
+        `the steps ${parts.map((p) => p.split('^')[0]!.slice(2)).join(', ')} form a closed cycle, so ${parts.join(' · ')} must be 1 (detailed balance), but it is ${Math.exp(logProduct).toPrecision(3)}`,
+        {
+          path: ['steps', first.index],
+          note: 'no equilibrium satisfies these constants; check the K, k or k_rev of the cycle',
+        },
+      ),
     );
   }
   return out;

@@ -49,7 +49,12 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
   record.steps.forEach((entry, index) => {
     const parsed = parseEquation(entry.equation);
     if ('error' in parsed) {
-      diagnostics.push(diagnostic('equation/syntax', 'error', parsed.error, { path: ['steps', index, 'equation'], offset: parsed.offset }));
+      diagnostics.push(
+        diagnostic('equation/syntax', 'error', parsed.error, {
+          path: ['steps', index, 'equation'],
+          offset: parsed.offset,
+        }),
+      );
       return;
     }
     const { reactants, products, reversible } = parsed.equation;
@@ -77,7 +82,11 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
     }
   }
   for (const symbol of Object.keys(record.species ?? {}).filter((s) => !firstUse.has(s))) {
-    diagnostics.push(diagnostic('species/unused', 'warning', `${symbol} is declared but no step uses it`, { path: ['species', symbol] }));
+    diagnostics.push(
+      diagnostic('species/unused', 'warning', `${symbol} is declared but no step uses it`, {
+        path: ['species', symbol],
+      }),
+    );
   }
   for (const symbol of firstUse.keys()) {
     const entry = record.species?.[symbol];
@@ -133,6 +142,13 @@ function duplicateLabels(steps: Step[]): Diagnostic[] {
       seen.add(s.label);
       return [];
     }
-    return [diagnostic('record/schema', 'error', `step label '${s.label}' is used twice; labels name the rate constants and must differ`, { path: ['steps', s.index, 'label'] })];
+    return [
+      diagnostic(
+        'record/schema',
+        'error',
+        `step label '${s.label}' is used twice; labels name the rate constants and must differ`,
+        { path: ['steps', s.index, 'label'] },
+      ),
+    ];
   });
 }

@@ -16,7 +16,9 @@ export function checkMolecularity(mechanism: Mechanism): Diagnostic[] {
   return mechanism.steps.flatMap((step) => {
     const directions: [string, number][] = [['', molecularity(step.reactants)]];
     if (step.reversible) directions.push(['the reverse of ', molecularity(step.products)]);
-    const withThirdBody = [...step.reactants, ...step.products].some((t) => mechanism.species.get(t.species)?.thirdBody);
+    const withThirdBody = [...step.reactants, ...step.products].some(
+      (t) => mechanism.species.get(t.species)?.thirdBody,
+    );
     return directions.flatMap(([which, n]) => judge(step, which, n, withThirdBody));
   });
 }
@@ -25,28 +27,43 @@ function judge(step: Step, which: string, n: number, withThirdBody: boolean): Di
   const path = ['steps', step.index, 'equation'];
   if (n > 3) {
     return [
-      diagnostic('step/molecularity', 'error', `${which}step ${step.label} brings ${n} particles together; an elementary step has molecularity of at most 3`, {
-        path,
-        actual: n,
-        note: 'split it into elementary steps',
-      }),
+      diagnostic(
+        'step/molecularity',
+        'error',
+        `${which}step ${step.label} brings ${n} particles together; an elementary step has molecularity of at most 3`,
+        {
+          path,
+          actual: n,
+          note: 'split it into elementary steps',
+        },
+      ),
     ];
   }
   if (n === 3 && withThirdBody) {
     return [
-      diagnostic('step/molecularity', 'info', `${which}step ${step.label} is termolecular through a third body, as in gas-phase recombination at low pressure (common practice)`, {
-        path,
-        actual: n,
-      }),
+      diagnostic(
+        'step/molecularity',
+        'info',
+        `${which}step ${step.label} is termolecular through a third body, as in gas-phase recombination at low pressure (common practice)`,
+        {
+          path,
+          actual: n,
+        },
+      ),
     ];
   }
   if (n === 3) {
     return [
-      diagnostic('step/molecularity', 'info', `${which}step ${step.label} is termolecular; such elementary steps are rare (common practice)`, {
-        path,
-        actual: n,
-        note: 'a fast pre-equilibrium followed by a bimolecular step often explains the same third order',
-      }),
+      diagnostic(
+        'step/molecularity',
+        'info',
+        `${which}step ${step.label} is termolecular; such elementary steps are rare (common practice)`,
+        {
+          path,
+          actual: n,
+          note: 'a fast pre-equilibrium followed by a bimolecular step often explains the same third order',
+        },
+      ),
     ];
   }
   return [];

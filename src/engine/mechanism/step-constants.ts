@@ -8,7 +8,14 @@ import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
 import { molecularity } from './molecularity.ts';
 import { parseQuantity, toCanonical, type Quantity } from '../units/quantity.ts';
-import { CONCENTRATION, formatDimension, powerDimension, rateConstantDimension, sameDimension, type Dimension } from '../units/units.ts';
+import {
+  CONCENTRATION,
+  formatDimension,
+  powerDimension,
+  rateConstantDimension,
+  sameDimension,
+  type Dimension,
+} from '../units/units.ts';
 import { Rational } from '../exact/rational.ts';
 
 /** The constants of one step in canonical units (M and s), where given and readable. */
@@ -19,7 +26,10 @@ export interface StepConstants {
 }
 
 /** Reads and checks k, k_rev and K of every step; returns canonical values by step index. */
-export function readStepConstants(record: MechanismRecord, mechanism: Mechanism): { constants: StepConstants[]; diagnostics: Diagnostic[] } {
+export function readStepConstants(
+  record: MechanismRecord,
+  mechanism: Mechanism,
+): { constants: StepConstants[]; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
   const constants = mechanism.steps.map((step) => {
     const entry = record.steps[step.index]!;
@@ -40,13 +50,27 @@ export function readStepConstants(record: MechanismRecord, mechanism: Mechanism)
     }
     const kRev = read('k_rev', rateConstantDimension(reverse), `a reverse rate constant of molecularity ${reverse}`);
     if (kRev !== undefined) out.kRev = kRev;
-    const K = read('K', powerDimension(CONCENTRATION, Rational.of(reverse - forward)), 'the equilibrium constant of this step');
+    const K = read(
+      'K',
+      powerDimension(CONCENTRATION, Rational.of(reverse - forward)),
+      'the equilibrium constant of this step',
+    );
     if (K !== undefined) out.K = K;
-    if (out.k !== undefined && out.kRev !== undefined && out.K !== undefined && Math.abs(out.k / out.kRev / out.K - 1) > 0.01) {
+    if (
+      out.k !== undefined &&
+      out.kRev !== undefined &&
+      out.K !== undefined &&
+      Math.abs(out.k / out.kRev / out.K - 1) > 0.01
+    ) {
       diagnostics.push(
-        diagnostic('step/units', 'warning', `K differs from k/k_rev by more than 1 % (${out.K.toPrecision(3)} against ${(out.k / out.kRev).toPrecision(3)})`, {
-          path: ['steps', step.index, 'K'],
-        }),
+        diagnostic(
+          'step/units',
+          'warning',
+          `K differs from k/k_rev by more than 1 % (${out.K.toPrecision(3)} against ${(out.k / out.kRev).toPrecision(3)})`,
+          {
+            path: ['steps', step.index, 'K'],
+          },
+        ),
       );
     }
     return out;
@@ -76,11 +100,18 @@ function checkedQuantity(
   if (!sameDimension(q.unit.dimension, expected)) {
     const wanted = formatDimension(expected);
     diagnostics.push(
-      diagnostic('step/units', 'error', q.unit.text === '' ? `${field} must have a unit: ${what} is in ${wanted}` : `${field} is in ${q.unit.text}, but ${what} must be in ${wanted}`, {
-        path,
-        actual: q.unit.text,
-        expected: wanted,
-      }),
+      diagnostic(
+        'step/units',
+        'error',
+        q.unit.text === ''
+          ? `${field} must have a unit: ${what} is in ${wanted}`
+          : `${field} is in ${q.unit.text}, but ${what} must be in ${wanted}`,
+        {
+          path,
+          actual: q.unit.text,
+          expected: wanted,
+        },
+      ),
     );
     return undefined;
   }
@@ -88,7 +119,12 @@ function checkedQuantity(
 }
 
 function oneWay(step: Step, field: string): Diagnostic {
-  return diagnostic('step/units', 'error', `step ${step.label} is one-way (->), so ${field} has no meaning; write <=> for a reversible step`, {
-    path: ['steps', step.index, field],
-  });
+  return diagnostic(
+    'step/units',
+    'error',
+    `step ${step.label} is one-way (->), so ${field} has no meaning; write <=> for a reversible step`,
+    {
+      path: ['steps', step.index, field],
+    },
+  );
 }

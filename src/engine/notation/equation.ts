@@ -93,7 +93,13 @@ function missingArrow(text: string): EquationError {
 }
 
 // side = term { " + " term }, read as white-space separated words where a lone "+" separates.
-function readSide(text: string, from: number, to: number, side: 'left' | 'right', arrowAt: number): Term[] | EquationError {
+function readSide(
+  text: string,
+  from: number,
+  to: number,
+  side: 'left' | 'right',
+  arrowAt: number,
+): Term[] | EquationError {
   const words = [...text.slice(from, to).matchAll(/\S+/g)].map((m) => ({ text: m[0], at: from + m.index }));
   if (words.length === 0) return { error: `the ${side} side of the arrow has no species`, offset: arrowAt };
   const terms: Term[] = [];
@@ -124,17 +130,23 @@ function readTerm(words: readonly { text: string; at: number }[]): Term | Equati
     return { error: "terms are separated by ' + ' (a plus with spaces on both sides)", offset: second.at };
   }
   if (!WHOLE_ONLY.test(first.text) || /^0+$/.test(first.text)) return wholeNumberError(first.at);
-  if (third !== undefined) return { error: "terms are separated by ' + ' (a plus with spaces on both sides)", offset: third.at };
+  if (third !== undefined)
+    return { error: "terms are separated by ' + ' (a plus with spaces on both sides)", offset: third.at };
   return { species: second.text, coefficient: Rational.of(BigInt(first.text)), offset: second.at };
 }
 
 function readGluedTerm(word: { text: string; at: number }): Term | EquationError {
   const number = NUMBER_LIKE.exec(word.text)?.[0];
-  if (number === word.text) return { error: 'a coefficient needs a species after it', offset: word.at + word.text.length };
+  if (number === word.text)
+    return { error: 'a coefficient needs a species after it', offset: word.at + word.text.length };
   const whole = WHOLE_GLUED.exec(word.text)?.[1];
   if (whole !== undefined && number === whole) {
     if (/^0+$/.test(whole)) return wholeNumberError(word.at);
-    return { species: word.text.slice(whole.length), coefficient: Rational.of(BigInt(whole)), offset: word.at + whole.length };
+    return {
+      species: word.text.slice(whole.length),
+      coefficient: Rational.of(BigInt(whole)),
+      offset: word.at + whole.length,
+    };
   }
   // `0.5O2`, `1/2O2`, `½O2`: a fraction glued to a species, never a species name of its own.
   if (number !== undefined && /^[A-Za-z[(]/.test(word.text.slice(number.length)) && !WHOLE_ONLY.test(number)) {

@@ -3,7 +3,16 @@
  * (`Fe3+` vs `NH4+`) are documented in formula.ts; the digits-or-charge choice is made in
  * formula-body.ts, which leaves the digits here when they are the charge.
  */
-import { Reader, digitFamily, isAnyDigit, isSign, readDigits, signOf, startsChargeSpec, unexpectedMessage } from './formula-reader.ts';
+import {
+  Reader,
+  digitFamily,
+  isAnyDigit,
+  isSign,
+  readDigits,
+  signOf,
+  startsChargeSpec,
+  unexpectedMessage,
+} from './formula-reader.ts';
 
 // charge = "^" spec | "^{" spec "}" | "{" spec "}" | spec
 /** Reads a charge (`^2-`, `^{2-}`, `{2-}`, `²⁻`, `+3`, `++`, `-`); undefined after a failure. */
@@ -39,7 +48,8 @@ function readChargeSpec(r: Reader): number | undefined {
     signs++;
     r.pos++;
   }
-  if (signs === 0) return r.fail(digits === null ? 'expected a charge' : 'a charge needs a sign, as in 2+ or 2-', signAt);
+  if (signs === 0)
+    return r.fail(digits === null ? 'expected a charge' : 'a charge needs a sign, as in 2+ or 2-', signAt);
   let magnitude = signs;
   if (digits !== null) {
     if (signs > 1) return r.fail('write a charge as digits and one sign, as in 3+', signAt);

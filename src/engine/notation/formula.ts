@@ -30,7 +30,15 @@
 import type { Composition, Phase } from './composition.ts';
 import { readBody, type Counts } from './formula-body.ts';
 import { readCharge } from './formula-charge.ts';
-import { Reader, isAnyDigit, isLower, isRadicalDot, startsCharge, unexpectedMessage, type FormulaError } from './formula-reader.ts';
+import {
+  Reader,
+  isAnyDigit,
+  isLower,
+  isRadicalDot,
+  startsCharge,
+  unexpectedMessage,
+  type FormulaError,
+} from './formula-reader.ts';
 
 export type { Composition, Phase } from './composition.ts';
 export type { FormulaError } from './formula-reader.ts';

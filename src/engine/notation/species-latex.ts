@@ -33,13 +33,15 @@ export function speciesLatex(symbol: string): string {
 /** Separates a trailing charge, read as the formula parser reads it (`Fe3+`, `Fe+3`, `SO4^2-`, `NH4+`, `[X]3+`). */
 function splitCharge(symbol: string): { body: string; charge: string } {
   const explicit = /\^\{?(\d*[+-]+|[+-]\d*)\}?$/.exec(symbol);
-  if (explicit && explicit.index > 0) return { body: symbol.slice(0, explicit.index), charge: normaliseCharge(explicit[1]!) };
+  if (explicit && explicit.index > 0)
+    return { body: symbol.slice(0, explicit.index), charge: normaliseCharge(explicit[1]!) };
   const signFirst = /(?<=[A-Za-z)\]])([+-])(\d+)$/.exec(symbol);
   if (signFirst) return { body: symbol.slice(0, signFirst.index), charge: `${signFirst[2]}${signFirst[1]}` };
   const trailing = /(\d*)([+-]+)$/.exec(symbol);
   if (!trailing || trailing.index + trailing[1]!.length === 0) return { body: symbol, charge: '' };
   const before = symbol.slice(0, trailing.index);
-  const digitsAreCharge = trailing[1] !== '' && trailing[2]!.length === 1 && (before.endsWith(']') || /^[A-Z][a-z]?$/.test(before));
+  const digitsAreCharge =
+    trailing[1] !== '' && trailing[2]!.length === 1 && (before.endsWith(']') || /^[A-Z][a-z]?$/.test(before));
   if (digitsAreCharge) return { body: before, charge: `${trailing[1]}${trailing[2]}` };
   return { body: symbol.slice(0, trailing.index + trailing[1]!.length), charge: trailing[2]! };
 }

@@ -34,7 +34,19 @@ export interface ExtendedLuWorkspace {
 export function createExtendedLuWorkspace(n: number): ExtendedLuWorkspace {
   const square = () => new Float64Array(n * n);
   const vector = () => new Float64Array(n);
-  return { n, matrixHi: square(), matrixLo: square(), factorsHi: square(), factorsLo: square(), pivots: new Int32Array(n), xHi: vector(), xLo: vector(), rHi: vector(), rLo: vector(), out: new Float64Array(2) };
+  return {
+    n,
+    matrixHi: square(),
+    matrixLo: square(),
+    factorsHi: square(),
+    factorsLo: square(),
+    pivots: new Int32Array(n),
+    xHi: vector(),
+    xLo: vector(),
+    rHi: vector(),
+    rLo: vector(),
+    out: new Float64Array(2),
+  };
 }
 
 /** Sets the matrix to diag(d) − J, exactly (each diagonal entry as an unrounded double-double sum). */

@@ -7,7 +7,13 @@
  * of a reactant's equation at 1e-3 M; in either case an error the embedded estimate, built from the
  * same stages, cannot see.
  */
-import { createExtendedLuWorkspace, extendedLuFactor, extendedLuSolve, setShiftedNegative, type ExtendedLuWorkspace } from './extended-lu.ts';
+import {
+  createExtendedLuWorkspace,
+  extendedLuFactor,
+  extendedLuSolve,
+  setShiftedNegative,
+  type ExtendedLuWorkspace,
+} from './extended-lu.ts';
 import { ROSENBROCK_METHOD, type TransformedMethod } from './rosenbrock-method.ts';
 import type { OdeSystem } from './ode-system.ts';
 

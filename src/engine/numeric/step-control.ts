@@ -19,7 +19,13 @@ export const CONTROLLER = { safety: 0.9, minFactor: 0.2, maxFactor: 5 } as const
  * nonNegative, a negative y1_i counts as an error of its own size, so that a step producing an
  * overshoot beyond the tolerance is rejected rather than clipped.
  */
-export function errorNorm(err: Float64Array, y0: Float64Array, y1: Float64Array, tol: Tolerances, nonNegative: boolean): number {
+export function errorNorm(
+  err: Float64Array,
+  y0: Float64Array,
+  y1: Float64Array,
+  tol: Tolerances,
+  nonNegative: boolean,
+): number {
   let sum = 0;
   let worstNegative = 0;
   for (let i = 0; i < err.length; i++) {

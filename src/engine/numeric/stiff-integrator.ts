@@ -63,19 +63,22 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
       result.y.push(Float64Array.from(y));
     }
   };
-  if (!Number.isFinite(t0) || !Number.isFinite(tEnd)) return stop('non-finite', `the time span ${t0} to ${tEnd} is not finite`);
+  if (!Number.isFinite(t0) || !Number.isFinite(tEnd))
+    return stop('non-finite', `the time span ${t0} to ${tEnd} is not finite`);
   const badStart = firstNonFinite(y);
   if (badStart >= 0) return stop('non-finite', `the initial value of component ${badStart} is not finite`);
   const f0 = new Float64Array(n);
   system.rhs(t, y, f0);
   const badRate = firstNonFinite(f0);
-  if (badRate >= 0) return stop('non-finite', `the right-hand side of component ${badRate} is not finite at t = ${fmt(t)}`);
+  if (badRate >= 0)
+    return stop('non-finite', `the right-hand side of component ${badRate} is not finite at t = ${fmt(t)}`);
   report();
 
   const span = tEnd - t0;
   const embeddedOrder = ROSENBROCK_TABLEAU.embeddedOrder;
   const given = options.initialStep;
-  const estimate = () => (span > 0 ? initialStep(y, f0, t0, span, ROSENBROCK_TABLEAU.order, tol, (s, v, d) => system.rhs(s, v, d)) : 0);
+  const estimate = () =>
+    span > 0 ? initialStep(y, f0, t0, span, ROSENBROCK_TABLEAU.order, tol, (s, v, d) => system.rhs(s, v, d)) : 0;
   let h = Math.min(span, given !== undefined && given > 0 ? given : estimate());
   const ws = createWorkspace(n);
   const jacobian = new Float64Array(n * n);
@@ -87,7 +90,10 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
 
   while (t < tEnd) {
     if (result.steps + result.rejected >= maxSteps) {
-      return stop('max-steps', `the integration needed more than ${maxSteps} steps before t = ${fmt(tEnd)}; it stopped at t = ${fmt(t)}`);
+      return stop(
+        'max-steps',
+        `the integration needed more than ${maxSteps} steps before t = ${fmt(tEnd)}; it stopped at t = ${fmt(t)}`,
+      );
     }
     const target = outputs && nextOutput < outputs.length ? outputs[nextOutput]! : tEnd;
     const remaining = target - t;
@@ -96,13 +102,20 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
     if (!(hTry >= 10 * Number.EPSILON * Math.max(Math.abs(t), 1e-290))) {
       return lastFailure === 'non-finite'
         ? stop('non-finite', `the solution becomes non-finite just after t = ${fmt(t)}, however small the step`)
-        : stop('step-too-small', `the step size fell to ${fmt(hTry)} at t = ${fmt(t)}${lastFailure === 'singular' ? ' (singular iteration matrix)' : ''}`);
+        : stop(
+            'step-too-small',
+            `the step size fell to ${fmt(hTry)} at t = ${fmt(t)}${lastFailure === 'singular' ? ' (singular iteration matrix)' : ''}`,
+          );
     }
     if (!jacobianCurrent) {
       system.jacobian(t, y, jacobian);
       result.jacobianEvaluations++;
       const bad = firstNonFinite(jacobian);
-      if (bad >= 0) return stop('non-finite', `the Jacobian entry (${Math.floor(bad / n)}, ${bad % n}) is not finite at t = ${fmt(t)}`);
+      if (bad >= 0)
+        return stop(
+          'non-finite',
+          `the Jacobian entry (${Math.floor(bad / n)}, ${bad % n}) is not finite at t = ${fmt(t)}`,
+        );
       jacobianCurrent = true;
     }
     const outcome = rosenbrockStep(system, t, hTry, y, f0, jacobian, y1, err, ws);
@@ -135,7 +148,8 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
 
 function resolveTolerances(options: IntegrateOptions, n: number): Tolerances {
   const atol = options.atol ?? 1e-12;
-  if (typeof atol !== 'number' && atol.length !== n) throw new RangeError(`atol has ${atol.length} components, the system ${n}`);
+  if (typeof atol !== 'number' && atol.length !== n)
+    throw new RangeError(`atol has ${atol.length} components, the system ${n}`);
   return { rtol: options.rtol ?? 1e-6, atol: typeof atol === 'number' ? new Float64Array(n).fill(atol) : atol };
 }
 

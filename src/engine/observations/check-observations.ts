@@ -14,11 +14,18 @@ import type { OrderRange } from '../rate-law/rate-law.ts';
 import { restingStates, type RestingState } from '../rate-law/resting-state.ts';
 
 /** Order limits with the species this observation lacks (zero concentration) taken as absent. */
-function limitsAt(derived: DerivedRateLaw, species: string, symbol: string | undefined, values: ReadonlyMap<string, number>): OrderRange | undefined {
+function limitsAt(
+  derived: DerivedRateLaw,
+  species: string,
+  symbol: string | undefined,
+  values: ReadonlyMap<string, number>,
+): OrderRange | undefined {
   const expression = derived.presented?.expression;
   if (!expression || !symbol) return derived.orders.get(species);
   const absent = expression.symbols().filter((s) => values.get(s) === 0 && s !== symbol);
-  return orderLimitsOf(withAbsent(expression, absent), [{ species, symbol }]).get(species) ?? derived.orders.get(species);
+  return (
+    orderLimitsOf(withAbsent(expression, absent), [{ species, symbol }]).get(species) ?? derived.orders.get(species)
+  );
 }
 
 /** What the observations say about each rate law. */
@@ -52,7 +59,8 @@ export function checkObservations(
     diagnostics.push(...conditions.diagnostics);
     const values = new Map([...given, ...conditions.values]);
     rateLaws.forEach((derived, lawIndex) => {
-      for (const state of restingStates(derived.law.catalystBalances, values)) resting[lawIndex]!.push({ observation: observation.id, ...state });
+      for (const state of restingStates(derived.law.catalystBalances, values))
+        resting[lawIndex]!.push({ observation: observation.id, ...state });
     });
     for (const [species, text] of Object.entries(observation.orders ?? {})) {
       const path = ['observations', index, 'orders', species];
@@ -63,7 +71,9 @@ export function checkObservations(
       }
       const symbol = symbols.find((s) => s.species === species)?.symbol;
       if (!context.mechanism.species.has(species)) {
-        diagnostics.push(diagnostic('observation/species', 'warning', `${species} is not a species of this mechanism`, { path }));
+        diagnostics.push(
+          diagnostic('observation/species', 'warning', `${species} is not a species of this mechanism`, { path }),
+        );
       }
       rateLaws.forEach((derived, lawIndex) => {
         const prediction: Prediction = {};
@@ -75,7 +85,14 @@ export function checkObservations(
             : derived.law.nonlinear && numericOrderAt(derived.law.nonlinear, symbol, values);
           if (typeof at === 'number') prediction.atConditions = at;
         }
-        const check = judgeOrder(observation.id, species, derived.law.method, observed.value, observed.tolerance, prediction);
+        const check = judgeOrder(
+          observation.id,
+          species,
+          derived.law.method,
+          observed.value,
+          observed.tolerance,
+          prediction,
+        );
         checks.push(check);
         if (lawIndex === 0 && check.status === 'fail') diagnostics.push(contradiction(check, record.status, index));
       });

@@ -34,7 +34,14 @@ export interface Prediction {
 }
 
 /** Compares one observed order with its prediction. */
-export function judgeOrder(observation: string, species: string, method: RateLawMethod, observed: number, tolerance: number, prediction: Prediction): ObservationCheck {
+export function judgeOrder(
+  observation: string,
+  species: string,
+  method: RateLawMethod,
+  observed: number,
+  tolerance: number,
+  prediction: Prediction,
+): ObservationCheck {
   const base = { observation, species, method, observed, tolerance };
   const within = (x: number) => Math.abs(x - observed) <= tolerance + 1e-12;
   if (prediction.atConditions !== undefined) {
@@ -55,18 +62,26 @@ export function judgeOrder(observation: string, species: string, method: RateLaw
 export function readObservedOrder(text: string | number): { value: number; tolerance: number } | { error: string } {
   const parsed = parseQuantity(text);
   if ('error' in parsed) return { error: parsed.error };
-  if (!sameDimension(parsed.quantity.unit.dimension, DIMENSIONLESS)) return { error: 'an order is a plain number, with no unit' };
+  if (!sameDimension(parsed.quantity.unit.dimension, DIMENSIONLESS))
+    return { error: 'an order is a plain number, with no unit' };
   return { value: parsed.quantity.value, tolerance: parsed.quantity.uncertainty ?? DEFAULT_ORDER_TOLERANCE };
 }
 
 /** The diagnostic for a contradicted observation: an error when the record is favoured. */
 export function contradiction(check: ObservationCheck, status: Status, index: number): Diagnostic {
-  const predicted = check.predicted !== undefined ? `${check.predicted}` : `between ${check.range![0]} and ${check.range![1]} for any constants`;
+  const predicted =
+    check.predicted !== undefined
+      ? `${check.predicted}`
+      : `between ${check.range![0]} and ${check.range![1]} for any constants`;
   return diagnostic(
     'observation/order',
     status === 'favoured' ? 'error' : 'warning',
     `observation ${check.observation}: order in ${check.species} is ${check.observed} ± ${check.tolerance}, but the ${check.method === 'rds' ? 'rate-determining-step' : 'steady-state'} rate law gives ${predicted}`,
-    { path: ['observations', index, 'orders', check.species], actual: check.observed, expected: check.predicted ?? check.range },
+    {
+      path: ['observations', index, 'orders', check.species],
+      actual: check.observed,
+      expected: check.predicted ?? check.range,
+    },
   );
 }
 

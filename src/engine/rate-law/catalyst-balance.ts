@@ -31,7 +31,12 @@ export function catalystBalance(
   const exponents = law.numerator.terms.map((t) => t.monomial.exponent(free));
   if (exponents.every((e) => e.isZero())) return { law, trace: [] };
   if (!exponents.every((e) => e.equals(Rational.ONE)) || !law.denominator.degreeIn(free).isZero()) {
-    return { problem: problem(rds, `the rate is not first order in the free catalyst ${conservation.catalyst}, so its balance has no closed form here`) };
+    return {
+      problem: problem(
+        rds,
+        `the rate is not first order in the free catalyst ${conservation.catalyst}, so its balance has no closed form here`,
+      ),
+    };
   }
   const forms: { species: string; term: Polynomial }[] = [];
   const negligible: string[] = [];
@@ -45,15 +50,23 @@ export function catalystBalance(
     if (v) {
       forms.push({ species, term: Polynomial.term(weight, v.div(Monomial.of(free))) });
     } else if (formedBeforeRds(species, context, rds)) {
-      return { problem: problem(rds, `${species} holds part of the catalyst ${conservation.catalyst} but no equilibrium before the rate-determining step fixes its amount`) };
+      return {
+        problem: problem(
+          rds,
+          `${species} holds part of the catalyst ${conservation.catalyst} but no equilibrium before the rate-determining step fixes its amount`,
+        ),
+      };
     } else {
       negligible.push(species);
     }
   }
   const denominator = Polynomial.sum(forms.map((f) => f.term));
-  if (!denominator.degreeIn(free).isZero() || !denominator.lowDegreeIn(free).isZero()) return nonlinearBalance(conservation, law, denominator, negligible, fmt);
+  if (!denominator.degreeIn(free).isZero() || !denominator.lowDegreeIn(free).isZero())
+    return nonlinearBalance(conservation, law, denominator, negligible, fmt);
   const total = conservation.total;
-  const numerator = law.numerator.terms.map((t) => Polynomial.term(t.coefficient, t.monomial.without(free).mul(Monomial.of(total))));
+  const numerator = law.numerator.terms.map((t) =>
+    Polynomial.term(t.coefficient, t.monomial.without(free).mul(Monomial.of(total))),
+  );
   const result = RationalFunction.of(Polynomial.sum(numerator), law.denominator.mul(denominator));
   const formsText = conservation.species.filter((s) => !negligible.includes(s)).map(concentration);
   const trace: TraceLine[] = [
@@ -75,10 +88,24 @@ export function catalystBalance(
  * A form not proportional to the free catalyst (a dimer holds it squared) makes the balance a
  * polynomial equation in [C]: kept for a numeric solution at each observation.
  */
-function nonlinearBalance(conservation: Conservation, law: RationalFunction, perFree: Polynomial, negligible: string[], fmt: Formatter): Outcome {
+function nonlinearBalance(
+  conservation: Conservation,
+  law: RationalFunction,
+  perFree: Polynomial,
+  negligible: string[],
+  fmt: Formatter,
+): Outcome {
   const free = concentration(conservation.catalyst);
   const den = law.denominator.terms;
-  if (den.length !== 1) return { problem: diagnostic('rate/not-eliminable', 'error', `the balance of ${conservation.catalyst} has no closed form`, { path: ['steps'] }) };
+  if (den.length !== 1)
+    return {
+      problem: diagnostic(
+        'rate/not-eliminable',
+        'error',
+        `the balance of ${conservation.catalyst} has no closed form`,
+        { path: ['steps'] },
+      ),
+    };
   const rate = law.numerator.mulTerm(den[0]!.coefficient.inverse(), den[0]!.monomial.pow(-1));
   const balance = perFree.mulTerm(Rational.ONE, Monomial.of(free)).sub(Polynomial.symbol(conservation.total));
   return {
@@ -96,9 +123,14 @@ function nonlinearBalance(conservation: Conservation, law: RationalFunction, per
 /** True when some step before the rds along the route forms the species. */
 function formedBeforeRds(species: string, context: RateLawContext, rds: Step): boolean {
   const rank = (index: number) => context.order[index] ?? Infinity;
-  return context.mechanism.steps.some((s) => rank(s.index) < rank(rds.index) && (s.change.get(species)?.sign() ?? 0) !== 0);
+  return context.mechanism.steps.some(
+    (s) => rank(s.index) < rank(rds.index) && (s.change.get(species)?.sign() ?? 0) !== 0,
+  );
 }
 
 function problem(rds: Step, message: string): Diagnostic {
-  return diagnostic('rate/not-eliminable', 'error', message, { path: ['steps', rds.index], note: 'use approximation: steady_state' });
+  return diagnostic('rate/not-eliminable', 'error', message, {
+    path: ['steps', rds.index],
+    note: 'use approximation: steady_state',
+  });
 }

@@ -39,20 +39,40 @@ export function rateLawContext(
   order: readonly number[] = mechanism.steps.map((s) => s.index),
 ): RateLawContext {
   const species = [...mechanism.species.values()].filter((s) => !s.buffered && !s.solvent && !s.thirdBody);
-  const internal = species.filter((s) => roles.get(s.symbol) === 'intermediate' || (roles.get(s.symbol) === 'catalyst' && !offRoute.has(s.symbol))).map((s) => s.symbol);
+  const internal = species
+    .filter(
+      (s) => roles.get(s.symbol) === 'intermediate' || (roles.get(s.symbol) === 'catalyst' && !offRoute.has(s.symbol)),
+    )
+    .map((s) => s.symbol);
   // A net-zero species consumed first off the route is either a free inhibitor in excess, or a
   // reservoir form of the catalyst (a resting dimer): it is internal when it shares the catalyst's balance.
   for (const candidate of species.filter((s) => roles.get(s.symbol) === 'catalyst' && offRoute.has(s.symbol))) {
     const trial = [...internal, candidate.symbol];
     const relations = conservationRelations(mechanism, trial, roles);
-    const joinsCatalyst = relations.some((r) => r.species.includes(candidate.symbol) && r.species.some((sp) => roles.get(sp) === 'catalyst' && !offRoute.has(sp)));
+    const joinsCatalyst = relations.some(
+      (r) =>
+        r.species.includes(candidate.symbol) &&
+        r.species.some((sp) => roles.get(sp) === 'catalyst' && !offRoute.has(sp)),
+    );
     if (joinsCatalyst) internal.push(candidate.symbol);
   }
   const solvents = [...mechanism.species.values()].filter((s) => s.solvent).map((s) => s.symbol);
-  return { mechanism, sigma, roles, order, internal, solvents, conservations: conservationRelations(mechanism, internal, roles) };
+  return {
+    mechanism,
+    sigma,
+    roles,
+    order,
+    internal,
+    solvents,
+    conservations: conservationRelations(mechanism, internal, roles),
+  };
 }
 
-function conservationRelations(mechanism: Mechanism, internal: string[], roles: ReadonlyMap<string, Role>): Conservation[] {
+function conservationRelations(
+  mechanism: Mechanism,
+  internal: string[],
+  roles: ReadonlyMap<string, Role>,
+): Conservation[] {
   if (internal.length === 0) return [];
   // w · N = 0 for the internal rows of the stoichiometric matrix N: one equation per step.
   const rows = mechanism.steps.map((step) => internal.map((sp) => step.change.get(sp) ?? Rational.ZERO));

@@ -44,15 +44,30 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
   const fmt = formatterFor(mechanism);
   const rdsSteps = mechanism.steps.filter((s) => s.rds);
   for (const extra of rdsSteps.slice(1)) {
-    diagnostics.push(diagnostic('step/rds', 'error', `step ${extra.label} is a second rate-determining step; mark at most one`, { path: ['steps', extra.index, 'rds'] }));
+    diagnostics.push(
+      diagnostic('step/rds', 'error', `step ${extra.label} is a second rate-determining step; mark at most one`, {
+        path: ['steps', extra.index, 'rds'],
+      }),
+    );
   }
   const rds = rdsSteps[0];
   if (rds && (sigma[rds.index] ?? 0) === 0) {
-    diagnostics.push(diagnostic('step/rds', 'error', `the rate-determining step ${rds.label} is off the route (σ = 0), so it cannot set the overall rate`, { path: ['steps', rds.index, 'rds'] }));
+    diagnostics.push(
+      diagnostic(
+        'step/rds',
+        'error',
+        `the rate-determining step ${rds.label} is off the route (σ = 0), so it cannot set the overall rate`,
+        { path: ['steps', rds.index, 'rds'] },
+      ),
+    );
   }
   const methods = chooseMethods(approximation, rds !== undefined);
   if (methods.includes('rds') && !rds) {
-    diagnostics.push(diagnostic('step/rds', 'error', 'approximation: rds needs one step marked rds: true', { path: ['approximation'] }));
+    diagnostics.push(
+      diagnostic('step/rds', 'error', 'approximation: rds needs one step marked rds: true', {
+        path: ['approximation'],
+      }),
+    );
   }
   const symbols = orderSymbols(context);
   const rateLaws: DerivedRateLaw[] = [];
@@ -62,7 +77,11 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
     diagnostics.push(...result.diagnostics);
     if (!result.law) continue;
     const law = result.law;
-    law.pools = context.conservations.map((c) => ({ total: c.total, species: c.species, weights: c.weights.map((w) => w.toNumber()) }));
+    law.pools = context.conservations.map((c) => ({
+      total: c.total,
+      species: c.species,
+      weights: c.weights.map((w) => w.toNumber()),
+    }));
     if (!law.expression) {
       rateLaws.push({ law, orders: new Map(), restingStates: [] });
       continue;
@@ -82,15 +101,26 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
  * product's with the others absent.
  * Each observation takes out its own absent species (check-observations.ts).
  */
-function reportedOrders(expression: RationalFunction, symbols: readonly { species: string; symbol: string }[], roles: ReadonlyMap<string, Role>): Map<string, OrderRange> {
+function reportedOrders(
+  expression: RationalFunction,
+  symbols: readonly { species: string; symbol: string }[],
+  roles: ReadonlyMap<string, Role>,
+): Map<string, OrderRange> {
   const orders = orderLimitsOf(expression, symbols);
   if (expression.numerator.terms.every((t) => t.coefficient.sign() > 0)) return orders;
   const products = symbols.filter((s) => roles.get(s.species) === 'product').map((s) => s.symbol);
   const initial = withAbsent(expression, products);
-  for (const [species, range] of orderLimitsOf(initial, symbols.filter((s) => !products.includes(s.symbol)))) orders.set(species, range);
+  for (const [species, range] of orderLimitsOf(
+    initial,
+    symbols.filter((s) => !products.includes(s.symbol)),
+  ))
+    orders.set(species, range);
   // A product's own order is read with the other products absent: its inhibition of the initial rate.
   for (const product of symbols.filter((s) => products.includes(s.symbol))) {
-    const alone = withAbsent(expression, products.filter((p) => p !== product.symbol));
+    const alone = withAbsent(
+      expression,
+      products.filter((p) => p !== product.symbol),
+    );
     const range = orderLimitsOf(alone, [product]).get(product.species);
     if (range) orders.set(product.species, range);
   }
@@ -105,7 +135,11 @@ function chooseMethods(approximation: string, hasRds: boolean): RateLawMethod[] 
 }
 
 /** A net-zero binder off the route with a negative order in the rate law is an inhibitor. */
-function confirmInhibitors(roles: ReadonlyMap<string, Role>, offRoute: ReadonlySet<string>, primary: DerivedRateLaw | undefined): Map<string, Role> {
+function confirmInhibitors(
+  roles: ReadonlyMap<string, Role>,
+  offRoute: ReadonlySet<string>,
+  primary: DerivedRateLaw | undefined,
+): Map<string, Role> {
   const out = new Map(roles);
   if (!primary) return out;
   for (const sp of offRoute) {

@@ -24,6 +24,10 @@ export function formatterFor(mechanism: Mechanism): Formatter {
     style,
     text,
     latex,
-    line: (say, [leftText, leftLatex], right) => ({ say, text: `${leftText} = ${text(right)}`, latex: `${leftLatex} = ${latex(right)}` }),
+    line: (say, [leftText, leftLatex], right) => ({
+      say,
+      text: `${leftText} = ${text(right)}`,
+      latex: `${leftLatex} = ${latex(right)}`,
+    }),
   };
 }

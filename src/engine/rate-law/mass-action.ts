@@ -11,7 +11,10 @@ import { concentration, forwardConstant, reverseConstant } from './symbols.ts';
 
 /** k Π[X]^ν over one side of a step. */
 export function sideRate(constant: string, terms: readonly Term[]): Polynomial {
-  const factors: [string, number][] = [[constant, 1], ...terms.map((t): [string, number] => [concentration(t.species), t.coefficient.toNumber()])];
+  const factors: [string, number][] = [
+    [constant, 1],
+    ...terms.map((t): [string, number] => [concentration(t.species), t.coefficient.toNumber()]),
+  ];
   return Polynomial.term(Rational.ONE, Monomial.fromFactors(factors));
 }
 

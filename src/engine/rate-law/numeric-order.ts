@@ -8,7 +8,11 @@ import type { NonlinearSystem } from './rate-law.ts';
 const RELATIVE_STEP = 1e-3;
 
 /** The apparent order in `symbol` at the given values, or undefined when the solve fails. */
-export function numericOrderAt(system: NonlinearSystem, symbol: string, values: ReadonlyMap<string, number>): number | undefined {
+export function numericOrderAt(
+  system: NonlinearSystem,
+  symbol: string,
+  values: ReadonlyMap<string, number>,
+): number | undefined {
   const x = values.get(symbol);
   if (x === undefined || x <= 0) return undefined;
   const rateAt = (value: number) => solveSteadyStateNumeric(system, new Map([...values, [symbol, value]]))?.rate;

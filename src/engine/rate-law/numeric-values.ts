@@ -32,20 +32,32 @@ export function constantValues(mechanism: Mechanism, constants: readonly StepCon
  * puts into it: Σ weight × listed concentration of each of its forms (a catalyst listed alone is
  * its total; an added ligand joins the pool it is released from).
  */
-export function observationValues(observation: Observation, index: number, context: RateLawContext): { values: Map<string, number>; assumedZero: string[]; diagnostics: Diagnostic[] } {
+export function observationValues(
+  observation: Observation,
+  index: number,
+  context: RateLawContext,
+): { values: Map<string, number>; assumedZero: string[]; diagnostics: Diagnostic[] } {
   const values = new Map<string, number>();
   const listed = new Map<string, number>();
   const diagnostics: Diagnostic[] = [];
   for (const [species, text] of Object.entries(observation.concentrations ?? {})) {
     const path = ['observations', index, 'concentrations', species];
     if (!context.mechanism.species.has(species)) {
-      diagnostics.push(diagnostic('observation/species', 'warning', `${species} is not a species of this mechanism`, { path }));
+      diagnostics.push(
+        diagnostic('observation/species', 'warning', `${species} is not a species of this mechanism`, { path }),
+      );
       continue;
     }
     const parsed = parseQuantity(text);
     if ('error' in parsed || !sameDimension(parsed.quantity.unit.dimension, CONCENTRATION)) {
-      const why = 'error' in parsed ? parsed.error : `'${parsed.quantity.unit.text || 'no unit'}' is not a concentration unit`;
-      diagnostics.push(diagnostic('observation/units', 'error', `concentration of ${species}: ${why}`, { path, note: 'e.g. 0.10 M, 5 mM, 2.0e17 molecule cm^-3' }));
+      const why =
+        'error' in parsed ? parsed.error : `'${parsed.quantity.unit.text || 'no unit'}' is not a concentration unit`;
+      diagnostics.push(
+        diagnostic('observation/units', 'error', `concentration of ${species}: ${why}`, {
+          path,
+          note: 'e.g. 0.10 M, 5 mM, 2.0e17 molecule cm^-3',
+        }),
+      );
       continue;
     }
     listed.set(species, toCanonical(parsed.quantity));
@@ -53,7 +65,10 @@ export function observationValues(observation: Observation, index: number, conte
   }
   for (const pool of context.conservations) {
     if (!pool.species.some((sp) => listed.has(sp))) continue;
-    values.set(pool.total, pool.species.reduce((sum, sp, i) => sum + pool.weights[i]!.toNumber() * (listed.get(sp) ?? 0), 0));
+    values.set(
+      pool.total,
+      pool.species.reduce((sum, sp, i) => sum + pool.weights[i]!.toNumber() * (listed.get(sp) ?? 0), 0),
+    );
   }
   const assumedZero: string[] = [];
   for (const [species, role] of context.roles) {

@@ -17,7 +17,10 @@ export function orderSymbols(context: RateLawContext): { species: string; symbol
 }
 
 /** Order limits of every species in an exact rate law. */
-export function orderLimitsOf(expression: RationalFunction, symbols: readonly { species: string; symbol: string }[]): Map<string, OrderRange> {
+export function orderLimitsOf(
+  expression: RationalFunction,
+  symbols: readonly { species: string; symbol: string }[],
+): Map<string, OrderRange> {
   const out = new Map<string, OrderRange>();
   for (const { species, symbol } of symbols) {
     const limits = orderLimits(expression, symbol);
@@ -30,7 +33,12 @@ export function orderLimitsOf(expression: RationalFunction, symbols: readonly { 
  * The apparent order x ∂ln r/∂x at the given values; at x = 0 it is the low limit. Undefined
  * when a symbol has no value or the rate vanishes there.
  */
-export function apparentOrder(expression: RationalFunction, symbol: string, values: ReadonlyMap<string, number>, low?: number): number | undefined {
+export function apparentOrder(
+  expression: RationalFunction,
+  symbol: string,
+  values: ReadonlyMap<string, number>,
+  low?: number,
+): number | undefined {
   if (!expression.symbols().every((s) => values.has(s))) return undefined;
   if (values.get(symbol) === 0) return low;
   const derivative = expression.logDerivative(symbol);

@@ -10,7 +10,9 @@ import type { RateLawContext } from './context.ts';
 import { netRate } from './mass-action.ts';
 
 /** The overall rate as a polynomial in constants and concentrations, and the species it is read from. */
-export function overallRatePolynomial(context: RateLawContext): { species: string; polynomial: Polynomial } | undefined {
+export function overallRatePolynomial(
+  context: RateLawContext,
+): { species: string; polynomial: Polynomial } | undefined {
   const { mechanism, sigma, internal, solvents } = context;
   const net = netOverRoute(mechanism, sigma);
   const candidates = [...net].filter(([sp, v]) => !v.isZero() && !internal.includes(sp) && !solvents.includes(sp));
@@ -19,6 +21,8 @@ export function overallRatePolynomial(context: RateLawContext): { species: strin
   const chosen = ranked[0];
   if (!chosen) return undefined;
   const [species, nu] = chosen;
-  const formation = Polynomial.sum(mechanism.steps.map((s) => netRate(s).scale(s.change.get(species) ?? Rational.ZERO)));
+  const formation = Polynomial.sum(
+    mechanism.steps.map((s) => netRate(s).scale(s.change.get(species) ?? Rational.ZERO)),
+  );
   return { species, polynomial: formation.scale(nu.inverse()) };
 }

@@ -18,7 +18,11 @@ import type { RateLaw, TraceLine } from './rate-law.ts';
 import { concentration, equilibriumConstant } from './symbols.ts';
 
 /** Derives the rate law by the rds method, or explains why it cannot. */
-export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt: Formatter): { law?: RateLaw; diagnostics: Diagnostic[] } {
+export function eliminateByPreEquilibria(
+  context: RateLawContext,
+  rds: Step,
+  fmt: Formatter,
+): { law?: RateLaw; diagnostics: Diagnostic[] } {
   const { mechanism, sigma } = context;
   const trace: TraceLine[] = [];
   const sigmaRds = sigma[rds.index] ?? 0;
@@ -26,15 +30,25 @@ export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt
   const unknowns = context.internal.filter((sp) => !freeCatalysts.has(sp));
   // "Before the rds" is along the route, not down the page: a cycle may be written from any step.
   const before = (s: Step) => (context.order[s.index] ?? Infinity) < (context.order[rds.index] ?? Infinity);
-  const equilibria = mechanism.steps.filter((s) => s !== rds && s.reversible && (before(s) || (sigma[s.index] ?? 0) === 0));
+  const equilibria = mechanism.steps.filter(
+    (s) => s !== rds && s.reversible && (before(s) || (sigma[s.index] ?? 0) === 0),
+  );
 
   let rate = Polynomial.term(Rational.of(1, sigmaRds), Monomial.ONE).mul(forwardRate(rds));
-  trace.push(fmt.line(`rate of the overall reaction: the rate of the rate-determining step ${rds.label} divided by its σ = ${sigmaRds}`, ['r', 'r'], rate));
+  trace.push(
+    fmt.line(
+      `rate of the overall reaction: the rate of the rate-determining step ${rds.label} divided by its σ = ${sigmaRds}`,
+      ['r', 'r'],
+      rate,
+    ),
+  );
 
   const rows: LogLinearRow[] = equilibria.map((step) => {
     const rhs = Monomial.fromFactors([
       [equilibriumConstant(step.label), Rational.ONE],
-      ...[...step.change].filter(([sp]) => !unknowns.includes(sp)).map(([sp, nu]): [string, Rational] => [concentration(sp), nu.neg()]),
+      ...[...step.change]
+        .filter(([sp]) => !unknowns.includes(sp))
+        .map(([sp, nu]): [string, Rational] => [concentration(sp), nu.neg()]),
     ]);
     return { exponents: unknowns.map((sp) => step.change.get(sp) ?? Rational.ZERO), rhs };
   });
@@ -44,10 +58,26 @@ export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt
   unknowns.forEach((sp, i) => solved[i] && value.set(sp, solved[i]!));
 
   const stuck = rds.reactants.map((t) => t.species).filter((sp) => unknowns.includes(sp) && !value.has(sp));
-  if (stuck.length > 0) return { diagnostics: [notEliminable(rds, stuck, equilibria, unknowns.filter((sp) => !value.has(sp)))] };
+  if (stuck.length > 0)
+    return {
+      diagnostics: [
+        notEliminable(
+          rds,
+          stuck,
+          equilibria,
+          unknowns.filter((sp) => !value.has(sp)),
+        ),
+      ],
+    };
   rate = substitute(rate, value);
   for (const sp of rds.reactants.map((t) => t.species).filter((s) => value.has(s))) {
-    trace.push(fmt.line(`${sp} from the equilibria`, [concentration(sp), fmt.style.latex(concentration(sp))], Polynomial.term(Rational.ONE, value.get(sp)!)));
+    trace.push(
+      fmt.line(
+        `${sp} from the equilibria`,
+        [concentration(sp), fmt.style.latex(concentration(sp))],
+        Polynomial.term(Rational.ONE, value.get(sp)!),
+      ),
+    );
   }
   if (value.size > 0) trace.push(fmt.line('substituted', ['r', 'r'], rate));
 
@@ -58,8 +88,16 @@ export function eliminateByPreEquilibria(context: RateLawContext, rds: Step, fmt
     if ('problem' in result) return { diagnostics: [result.problem] };
     if ('nonlinear' in result) {
       trace.push(...result.trace);
-      const note = diagnostic('rate/nonlinear', 'info', `the balance of ${conservation.catalyst} is not linear in its free form, so the rate is solved numerically at each observation with constants`, { path: ['steps', rds.index] });
-      return { law: { method: 'rds', nonlinear: result.nonlinear, absorbed: [], catalystBalances: [], trace }, diagnostics: [note] };
+      const note = diagnostic(
+        'rate/nonlinear',
+        'info',
+        `the balance of ${conservation.catalyst} is not linear in its free form, so the rate is solved numerically at each observation with constants`,
+        { path: ['steps', rds.index] },
+      );
+      return {
+        law: { method: 'rds', nonlinear: result.nonlinear, absorbed: [], catalystBalances: [], trace },
+        diagnostics: [note],
+      };
     }
     if (!result.balance) continue;
     law = result.law;
@@ -84,8 +122,12 @@ export function substitute(p: Polynomial, value: ReadonlyMap<string, Monomial>):
 }
 
 function equilibriumLine(step: Step, fmt: Formatter): TraceLine {
-  const side = (terms: Step['reactants']) => Monomial.fromFactors(terms.map((t): [string, Rational] => [concentration(t.species), t.coefficient]));
-  const quotient = RationalFunction.of(Polynomial.term(Rational.ONE, side(step.products)), Polynomial.term(Rational.ONE, side(step.reactants)));
+  const side = (terms: Step['reactants']) =>
+    Monomial.fromFactors(terms.map((t): [string, Rational] => [concentration(t.species), t.coefficient]));
+  const quotient = RationalFunction.of(
+    Polynomial.term(Rational.ONE, side(step.products)),
+    Polynomial.term(Rational.ONE, side(step.reactants)),
+  );
   const K = equilibriumConstant(step.label);
   return fmt.line(`step ${step.label} at equilibrium`, [K, fmt.style.latex(K)], quotient);
 }
@@ -94,7 +136,9 @@ function notEliminable(rds: Step, stuck: string[], equilibria: Step[], undetermi
   const reasons = stuck.map((sp) => {
     const holding = equilibria.filter((s) => s.change.has(sp));
     if (holding.length === 0) return `no reversible step before the rate-determining step ${rds.label} forms ${sp}`;
-    const others = [...new Set(holding.flatMap((s) => [...s.change.keys()]))].filter((x) => x !== sp && undetermined.includes(x));
+    const others = [...new Set(holding.flatMap((s) => [...s.change.keys()]))].filter(
+      (x) => x !== sp && undetermined.includes(x),
+    );
     const steps = holding.map((s) => s.label).join(', ');
     return others.length > 0
       ? `the equilibrium of step ${steps} ties ${sp} to ${others.join(', ')}, which no other equilibrium or measured concentration fixes`

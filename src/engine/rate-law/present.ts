@@ -24,13 +24,20 @@ export function presentLaw(expression: RationalFunction, solvents: readonly stri
   const shown = expression;
   const solventSymbols = new Set(solvents.map(concentration).filter((s) => shown.symbols().includes(s)));
   for (const symbol of solventSymbols) {
-    trace.push({ say: `${symbol.slice(1, -1)} is the solvent: its concentration is constant and belongs with the constants`, text: `${symbol} = const.`, latex: `${fmt.style.latex(symbol)} = \\text{const.}` });
+    trace.push({
+      say: `${symbol.slice(1, -1)} is the solvent: its concentration is constant and belongs with the constants`,
+      text: `${symbol} = const.`,
+      latex: `${fmt.style.latex(symbol)} = \\text{const.}`,
+    });
   }
   const out: PresentedLaw = { expression: shown, text: fmt.text(shown), latex: fmt.latex(shown), trace };
   const grouped = groupConstants(shown, (symbol) => isConstant(symbol) || solventSymbols.has(symbol));
   if (grouped) {
     const name = 'k_obs';
-    const withName = RationalFunction.of(Polynomial.term(grouped.rest.coefficient, grouped.rest.monomial.mul(Monomial.of(name))), grouped.denominator);
+    const withName = RationalFunction.of(
+      Polynomial.term(grouped.rest.coefficient, grouped.rest.monomial.mul(Monomial.of(name))),
+      grouped.denominator,
+    );
     out.grouped = {
       name,
       text: fmt.text(withName),
@@ -38,7 +45,11 @@ export function presentLaw(expression: RationalFunction, solvents: readonly stri
       valueText: fmt.text(grouped.value),
       valueLatex: fmt.latex(grouped.value),
     };
-    trace.push({ say: 'grouped constant', text: `k_obs = ${out.grouped.valueText}`, latex: `k_\\mathrm{obs} = ${out.grouped.valueLatex}` });
+    trace.push({
+      say: 'grouped constant',
+      text: `k_obs = ${out.grouped.valueText}`,
+      latex: `k_\\mathrm{obs} = ${out.grouped.valueLatex}`,
+    });
   }
   return out;
 }

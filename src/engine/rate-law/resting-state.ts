@@ -12,7 +12,10 @@ export interface RestingState {
 }
 
 /** The dominant form of each conserved catalyst, where every symbol has a value. */
-export function restingStates(balances: readonly CatalystBalance[], values: ReadonlyMap<string, number>): RestingState[] {
+export function restingStates(
+  balances: readonly CatalystBalance[],
+  values: ReadonlyMap<string, number>,
+): RestingState[] {
   const out: RestingState[] = [];
   for (const balance of balances) {
     const shares = balance.forms.map((f) => ({

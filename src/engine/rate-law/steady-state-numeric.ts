@@ -12,7 +12,10 @@ const STARTING_SCALES = [1e-9, 1e-6, 1e-3, 1e-12, 1e-15, 1];
 const MAX_ITERATIONS = 200;
 
 /** The internal concentrations and the overall rate at the given values, or undefined without convergence. */
-export function solveSteadyStateNumeric(system: NonlinearSystem, values: ReadonlyMap<string, number>): { concentrations: Map<string, number>; rate: number } | undefined {
+export function solveSteadyStateNumeric(
+  system: NonlinearSystem,
+  values: ReadonlyMap<string, number>,
+): { concentrations: Map<string, number>; rate: number } | undefined {
   const { unknowns, equations } = system;
   const needed = new Set([...equations.flatMap((e) => e.symbols()), ...system.rate.symbols()]);
   for (const s of needed) if (!unknowns.includes(s) && !values.has(s)) return undefined;
@@ -41,7 +44,13 @@ function jacobianOf(system: NonlinearSystem): Polynomial[][] {
   return jacobian;
 }
 
-function newton(equations: Polynomial[], jacobian: Polynomial[][], unknowns: string[], values: ReadonlyMap<string, number>, z: number[]): boolean {
+function newton(
+  equations: Polynomial[],
+  jacobian: Polynomial[][],
+  unknowns: string[],
+  values: ReadonlyMap<string, number>,
+  z: number[],
+): boolean {
   const at = () => new Map([...values, ...unknowns.map((u, i): [string, number] => [u, Math.exp(z[i]!)])]);
   let point = at();
   let residual = scaledResidual(equations, point);
@@ -49,7 +58,10 @@ function newton(equations: Polynomial[], jacobian: Polynomial[][], unknowns: str
     if (norm(residual.scaled) < 1e-11) return true;
     // d f/d z = d f/d x · x, since x = e^z.
     const J = jacobian.map((row) => row.map((d, j) => d.evaluate(point) * Math.exp(z[j]!)));
-    const step = solveDense(J, residual.raw.map((r) => -r));
+    const step = solveDense(
+      J,
+      residual.raw.map((r) => -r),
+    );
     if (!step) return false;
     let damping = 1;
     const before = norm(residual.scaled);

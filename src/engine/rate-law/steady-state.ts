@@ -16,7 +16,10 @@ import { overallRatePolynomial } from './overall-rate.ts';
 import { concentration } from './symbols.ts';
 
 /** Derives the steady-state rate law exactly, or sets up the nonlinear system for a numeric one. */
-export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { law?: RateLaw; diagnostics: Diagnostic[] } {
+export function steadyStateRateLaw(
+  context: RateLawContext,
+  fmt: Formatter,
+): { law?: RateLaw; diagnostics: Diagnostic[] } {
   const { mechanism, internal } = context;
   const x = internal.map(concentration);
   const balance = internal.map((sp) =>
@@ -31,7 +34,9 @@ export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { l
   for (const c of context.conservations) {
     // The relation makes one balance dependent: replace the equation of its last species.
     const replaced = internal.indexOf(c.species.at(-1)!);
-    const sum = Polynomial.sum(c.species.map((sp, j) => Polynomial.term(c.weights[j]!, Monomial.of(concentration(sp)))));
+    const sum = Polynomial.sum(
+      c.species.map((sp, j) => Polynomial.term(c.weights[j]!, Monomial.of(concentration(sp)))),
+    );
     equations[replaced] = sum.sub(Polynomial.symbol(c.total));
     trace.push({
       say: `conservation of ${c.catalyst} (replaces the balance of ${c.species.at(-1)})`,
@@ -40,17 +45,38 @@ export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { l
     });
   }
   const rate = overallRatePolynomial(context);
-  if (!rate) return { diagnostics: [diagnostic('rate/nonlinear', 'warning', 'the route has no product or reactant whose formation gives the overall rate', { path: ['steps'] })] };
+  if (!rate)
+    return {
+      diagnostics: [
+        diagnostic(
+          'rate/nonlinear',
+          'warning',
+          'the route has no product or reactant whose formation gives the overall rate',
+          { path: ['steps'] },
+        ),
+      ],
+    };
 
   if (!isLinear(context)) {
-    const law: RateLaw = { method: 'steady_state', nonlinear: { unknowns: x, equations, rate: rate.polynomial }, absorbed: [], catalystBalances: [], trace };
+    const law: RateLaw = {
+      method: 'steady_state',
+      nonlinear: { unknowns: x, equations, rate: rate.polynomial },
+      absorbed: [],
+      catalystBalances: [],
+      trace,
+    };
     trace.push(fmt.line(`rate of the overall reaction from ${rate.species}`, ['r', 'r'], rate.polynomial));
     return {
       law,
       diagnostics: [
-        diagnostic('rate/nonlinear', 'info', 'a step brings two intermediates or catalyst forms together (a recombination, say), so the steady-state equations are not linear: they are solved numerically at each observation that gives constants and concentrations, with no closed-form law', {
-          path: ['steps'],
-        }),
+        diagnostic(
+          'rate/nonlinear',
+          'info',
+          'a step brings two intermediates or catalyst forms together (a recombination, say), so the steady-state equations are not linear: they are solved numerically at each observation that gives constants and concentrations, with no closed-form law',
+          {
+            path: ['steps'],
+          },
+        ),
       ],
     };
   }
@@ -58,7 +84,16 @@ export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { l
   const b = equations.map((eq) => x.reduce((p, xi) => p.coefficientIn(xi, 0), eq).neg());
   const solution = internal.length === 0 ? [] : solveLinear(a, b);
   if (!solution) {
-    return { diagnostics: [diagnostic('rate/nonlinear', 'warning', 'the steady-state equations do not fix the internal species (a singular system)', { path: ['steps'] })] };
+    return {
+      diagnostics: [
+        diagnostic(
+          'rate/nonlinear',
+          'warning',
+          'the steady-state equations do not fix the internal species (a singular system)',
+          { path: ['steps'] },
+        ),
+      ],
+    };
   }
   solution.forEach((s, i) => trace.push(fmt.line(`solved for ${internal[i]}`, [x[i]!, fmt.style.latex(x[i]!)], s)));
   const expression = substituteLinear(rate.polynomial, x, solution);
@@ -77,7 +112,8 @@ export function steadyStateRateLaw(context: RateLawContext, fmt: Formatter): { l
 /** Every step at most first order in internal species, on each side. */
 function isLinear(context: RateLawContext): boolean {
   const internal = new Set(context.internal);
-  const order = (terms: { species: string; coefficient: Rational }[]) => terms.filter((t) => internal.has(t.species)).reduce((n, t) => n + t.coefficient.toNumber(), 0);
+  const order = (terms: { species: string; coefficient: Rational }[]) =>
+    terms.filter((t) => internal.has(t.species)).reduce((n, t) => n + t.coefficient.toNumber(), 0);
   return context.mechanism.steps.every((s) => order(s.reactants) <= 1 && (!s.reversible || order(s.products) <= 1));
 }
 
@@ -86,9 +122,10 @@ function substituteLinear(p: Polynomial, symbols: string[], values: RationalFunc
   let out = RationalFunction.ZERO;
   for (const term of p.terms) {
     const which = symbols.findIndex((s) => !term.monomial.exponent(s).isZero());
-    const rest = RationalFunction.of(Polynomial.term(term.coefficient, which < 0 ? term.monomial : term.monomial.without(symbols[which]!)));
+    const rest = RationalFunction.of(
+      Polynomial.term(term.coefficient, which < 0 ? term.monomial : term.monomial.without(symbols[which]!)),
+    );
     out = out.add(which < 0 ? rest : rest.mul(values[which]!));
   }
   return out;
 }
-

@@ -43,7 +43,8 @@ export function rateLawStyle(stepLabels: readonly string[], speciesOrder: readon
   const rank = (symbol: string): [number, number, number] => {
     const m = symbolMeaning(symbol);
     if (!m) return [9, 0, 0];
-    if (m.kind === 'constant') return [0, indexOr(stepLabels, m.label), m.which === 'k' ? 0 : m.which === 'k_rev' ? 1 : 2];
+    if (m.kind === 'constant')
+      return [0, indexOr(stepLabels, m.label), m.which === 'k' ? 0 : m.which === 'k_rev' ? 1 : 2];
     return [1, indexOr(speciesOrder, m.species), m.kind === 'total' ? 1 : 0];
   };
   return {
@@ -54,7 +55,8 @@ export function rateLawStyle(stepLabels: readonly string[], speciesOrder: readon
       return x[0] - y[0] || x[1] - y[1] || x[2] - y[2] || (a < b ? -1 : a > b ? 1 : 0);
     },
     // Sums read from the constant term up: 1 + K_1[S], k_-1 + k_2 + k_1[S].
-    termWeight: (m) => m.factors.reduce((n, [s, e]) => (symbolMeaning(s)?.kind === 'constant' ? n : n + e.toNumber()), 0),
+    termWeight: (m) =>
+      m.factors.reduce((n, [s, e]) => (symbolMeaning(s)?.kind === 'constant' ? n : n + e.toNumber()), 0),
   };
 }
 
@@ -71,7 +73,9 @@ export function symbolLatex(symbol: string): string {
 }
 
 function labelLatex(label: string): string {
-  return /^\d+$/.test(label) ? label : `\\mathrm{${label.replace(/[^A-Za-z0-9]/g, (c) => (c === '-' ? '\\text{-}' : c === '_' ? '\\_' : ''))}}`;
+  return /^\d+$/.test(label)
+    ? label
+    : `\\mathrm{${label.replace(/[^A-Za-z0-9]/g, (c) => (c === '-' ? '\\text{-}' : c === '_' ? '\\_' : ''))}}`;
 }
 
 function indexOr(list: readonly string[], item: string): number {

@@ -24,13 +24,18 @@ export function netOverRoute(mechanism: Mechanism, sigma: readonly number[]): Ma
 }
 
 /** Builds the overall equation from the stoichiometric numbers and the catalysts found by the roles. */
-export function overallEquation(mechanism: Mechanism, sigma: readonly number[], catalysts: readonly string[]): OverallEquation {
+export function overallEquation(
+  mechanism: Mechanism,
+  sigma: readonly number[],
+  catalysts: readonly string[],
+): OverallEquation {
   const reactants = new Map<string, Rational>();
   const products = new Map<string, Rational>();
   for (const [sp, v] of netOverRoute(mechanism, sigma)) {
     if (v.sign() < 0) reactants.set(sp, v.neg());
     if (v.sign() > 0) products.set(sp, v);
   }
-  const side = (m: Map<string, Rational>) => [...m].map(([sp, c]) => (c.equals(Rational.ONE) ? sp : `${c} ${sp}`)).join(' + ') || '(nothing)';
+  const side = (m: Map<string, Rational>) =>
+    [...m].map(([sp, c]) => (c.equals(Rational.ONE) ? sp : `${c} ${sp}`)).join(' + ') || '(nothing)';
   return { reactants, products, catalysts: [...catalysts], text: `${side(reactants)} -> ${side(products)}` };
 }

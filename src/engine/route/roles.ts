@@ -14,7 +14,10 @@ import { netOverRoute } from './overall-equation.ts';
 const NET_ZERO_KINDS: ReadonlySet<Role> = new Set(['intermediate', 'catalyst', 'inhibitor']);
 
 /** Derives the role of every species; `offRoute` lists net-zero species that only occur in steps with σ = 0. */
-export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { roles: Map<string, Role>; offRoute: Set<string>; routeOrder: number[]; diagnostics: Diagnostic[] } {
+export function deriveRoles(
+  mechanism: Mechanism,
+  sigma: readonly number[],
+): { roles: Map<string, Role>; offRoute: Set<string>; routeOrder: number[]; diagnostics: Diagnostic[] } {
   const net = netOverRoute(mechanism, sigma);
   const roles = new Map<string, Role>();
   const offRoute = new Set<string>();
@@ -35,7 +38,15 @@ export function deriveRoles(mechanism: Mechanism, sigma: readonly number[]): { r
       // product); only ever used up, a side reactant; a binder that nothing makes (a free inhibitor)
       // is consumed first; what such binding makes is an intermediate (a dead-end complex).
       if (firstOnRoute === 0 && oneWay !== 0) role = oneWay > 0 ? 'product' : 'reactant';
-      else role = firstOnRoute === 0 ? (firstAnywhere > 0 ? 'intermediate' : 'catalyst') : seeds.has(symbol) ? 'catalyst' : 'intermediate';
+      else
+        role =
+          firstOnRoute === 0
+            ? firstAnywhere > 0
+              ? 'intermediate'
+              : 'catalyst'
+            : seeds.has(symbol)
+              ? 'catalyst'
+              : 'intermediate';
       // The record decides between the net-zero kinds where it says.
       if (species.declaredRole === 'intermediate' || species.declaredRole === 'catalyst') role = species.declaredRole;
     }
@@ -76,11 +87,16 @@ function declaredMismatches(mechanism: Mechanism, roles: Map<string, Role>): Dia
     // An inhibitor is confirmed only by a negative order in the rate law, after the roles.
     if (declared === 'inhibitor' && NET_ZERO_KINDS.has(derived)) continue;
     out.push(
-      diagnostic('roles/declared-mismatch', 'error', `${symbol} is declared ${article(declared)} but the steps make it ${article(derived)}`, {
-        path: ['species', symbol, 'role'],
-        actual: derived,
-        expected: declared,
-      }),
+      diagnostic(
+        'roles/declared-mismatch',
+        'error',
+        `${symbol} is declared ${article(declared)} but the steps make it ${article(derived)}`,
+        {
+          path: ['species', symbol, 'role'],
+          actual: derived,
+          expected: declared,
+        },
+      ),
     );
   }
   return out;

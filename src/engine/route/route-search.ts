@@ -48,19 +48,29 @@ export interface Column {
 
 /** The columns for steps without `times`; the given ones form one block whose multiplicity must be positive. */
 export function routeColumns(steps: readonly RouteStep[], free: number[]): Column[] {
-  const columns: Column[] = free.map((i) => ({ change: new Map(steps[i]!.change), expand: new Map([[i, 1]]), required: false }));
+  const columns: Column[] = free.map((i) => ({
+    change: new Map(steps[i]!.change),
+    expand: new Map([[i, 1]]),
+    required: false,
+  }));
   const block: Column = { change: new Map(), expand: new Map(), required: true };
   steps.forEach((s, i) => {
     if (s.times === undefined || s.times === 0) return;
     block.expand.set(i, s.times);
-    for (const [sp, v] of s.change) block.change.set(sp, (block.change.get(sp) ?? Rational.ZERO).add(v.mul(Rational.of(s.times))));
+    for (const [sp, v] of s.change)
+      block.change.set(sp, (block.change.get(sp) ?? Rational.ZERO).add(v.mul(Rational.of(s.times))));
   });
   if (block.expand.size > 0) columns.push(block);
   return columns;
 }
 
 /** Every candidate route and family over the connected supports. */
-export function searchSupports(steps: readonly RouteStep[], columns: Column[], mustCancel: ReadonlySet<string>, carriers: ReadonlySet<string> = new Set()) {
+export function searchSupports(
+  steps: readonly RouteStep[],
+  columns: Column[],
+  mustCancel: ReadonlySet<string>,
+  carriers: ReadonlySet<string> = new Set(),
+) {
   const routes: Candidate[] = [];
   const families: Family[] = [];
   const made = new Set(steps.flatMap((st) => [...st.change].filter(([, v]) => v.sign() > 0).map(([sp]) => sp)));
@@ -71,7 +81,8 @@ export function searchSupports(steps: readonly RouteStep[], columns: Column[], m
     // A route's steps are linked through shared species; a disconnected set is a sum of separate reactions.
     if (support.length === 0 || !connected(support, columns)) continue;
     const species = [...new Set(support.flatMap((c) => [...columns[c]!.change.keys()]))];
-    const matrixFor = (rows: string[]) => rows.map((sp) => support.map((c) => columns[c]!.change.get(sp) ?? Rational.ZERO));
+    const matrixFor = (rows: string[]) =>
+      rows.map((sp) => support.map((c) => columns[c]!.change.get(sp) ?? Rational.ZERO));
     // A set of steps that together change nothing (a step and its reverse, initiation plus termination) is never part of a route.
     if (hasNonNegativeKernel(matrixFor(species), support.length)) continue;
     const signs = (sp: string) => new Set(support.map((c) => columns[c]!.change.get(sp)?.sign() ?? 0));
@@ -84,14 +95,25 @@ export function searchSupports(steps: readonly RouteStep[], columns: Column[], m
     const subsets = cancelSets(choosable, forced, firstSign);
     let best: [number, number] | undefined;
     for (const cancel of subsets) {
-      if (best && (cancel.species.length < best[0] || (cancel.species.length === best[0] && cancel.intermediates < best[1]))) break;
+      if (
+        best &&
+        (cancel.species.length < best[0] || (cancel.species.length === best[0] && cancel.intermediates < best[1]))
+      )
+        break;
       const kernel = positiveKernel(matrixFor(cancel.species), support.length);
       if (kernel.kind === 'none') continue;
       best = [cancel.species.length, cancel.intermediates];
       if (kernel.kind === 'family') {
         const rays = kernel.rays.map((r) => expandSigma(steps.length, columns, support, r));
-        const used = steps.flatMap((st, i) => (rays.some((r) => r[i]! > 0n) && carriers.size > 0 && isChainEnd(st, carriers) ? [i] : []));
-        families.push({ intermediates: cancel.intermediates, cancelled: cancel.species.length, rays, chainEnds: used.length });
+        const used = steps.flatMap((st, i) =>
+          rays.some((r) => r[i]! > 0n) && carriers.size > 0 && isChainEnd(st, carriers) ? [i] : [],
+        );
+        families.push({
+          intermediates: cancel.intermediates,
+          cancelled: cancel.species.length,
+          rays,
+          chainEnds: used.length,
+        });
         continue;
       }
       const sigma = expandSigma(steps.length, columns, support, kernel.vector);
@@ -105,7 +127,7 @@ export function searchSupports(steps: readonly RouteStep[], columns: Column[], m
 function connected(support: number[], columns: Column[]): boolean {
   const reached = new Set([support[0]!]);
   const species = new Set(columns[support[0]!]!.change.keys());
-  for (let grew = true; grew; ) {
+  for (let grew = true; grew;) {
     grew = false;
     for (const c of support) {
       if (reached.has(c) || ![...columns[c]!.change.keys()].some((sp) => species.has(sp))) continue;
@@ -121,7 +143,11 @@ function connected(support: number[], columns: Column[]): boolean {
  * Subsets of the species that may cancel, best first: most species, then most of the
  * intermediate pattern. Generated lazily, because the first feasible set is almost always the full one.
  */
-function* cancelSets(choosable: string[], forced: string[], firstSign: (sp: string) => number): Generator<{ species: string[]; intermediates: number }> {
+function* cancelSets(
+  choosable: string[],
+  forced: string[],
+  firstSign: (sp: string) => number,
+): Generator<{ species: string[]; intermediates: number }> {
   const forcedIntermediates = forced.filter((sp) => firstSign(sp) > 0).length;
   for (let drop = 0; drop <= choosable.length; drop++) {
     const sets = [...combinationsOf(choosable, choosable.length - drop)].map((kept) => ({
@@ -162,7 +188,12 @@ function expandSigma(n: number, columns: Column[], support: number[], vector: bi
 }
 
 /** Scores a route by what it cancels, from the σ it actually has. */
-function scoreRoute(steps: readonly RouteStep[], sigma: bigint[], carriers: ReadonlySet<string>, made: ReadonlySet<string>): Candidate {
+function scoreRoute(
+  steps: readonly RouteStep[],
+  sigma: bigint[],
+  carriers: ReadonlySet<string>,
+  made: ReadonlySet<string>,
+): Candidate {
   const used = sigma.flatMap((s, i) => (s > 0n ? [i] : []));
   const net = new Map<string, Rational>();
   const seenSigns = new Map<string, Set<number>>();

@@ -29,7 +29,9 @@ export interface Route {
 /** Chooses the route of a mechanism and reads its overall equation and roles. */
 export function deriveRoute(mechanism: Mechanism): { route?: Route; diagnostics: Diagnostic[] } {
   const species = [...mechanism.species.values()];
-  const mustCancel = new Set(species.filter((s) => s.declaredRole === 'intermediate' || s.declaredRole === 'catalyst').map((s) => s.symbol));
+  const mustCancel = new Set(
+    species.filter((s) => s.declaredRole === 'intermediate' || s.declaredRole === 'catalyst').map((s) => s.symbol),
+  );
   const carriers = new Set(species.filter((s) => s.declaredRole === 'intermediate').map((s) => s.symbol));
   const chosen = stoichiometricNumbers(mechanism.steps, mustCancel, carriers);
   const diagnostics = [...chosen.diagnostics];

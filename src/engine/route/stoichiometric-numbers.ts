@@ -20,20 +20,33 @@ export interface RouteResult {
 export const MAX_SEARCHED_STEPS = 16;
 
 /** Chooses the stoichiometric numbers of a mechanism's steps. */
-export function stoichiometricNumbers(steps: readonly RouteStep[], mustCancel: ReadonlySet<string>, carriers: ReadonlySet<string> = new Set()): RouteResult {
+export function stoichiometricNumbers(
+  steps: readonly RouteStep[],
+  mustCancel: ReadonlySet<string>,
+  carriers: ReadonlySet<string> = new Set(),
+): RouteResult {
   if (steps.length > 0 && steps.every((s) => s.times !== undefined)) {
     const numbers = steps.map((s) => s.times!);
     if (numbers.every((x) => x === 0)) {
-      return failed(diagnostic('route/ambiguous', 'error', 'every step has times: 0, so no reaction takes place', { path: ['steps'] }));
+      return failed(
+        diagnostic('route/ambiguous', 'error', 'every step has times: 0, so no reaction takes place', {
+          path: ['steps'],
+        }),
+      );
     }
     return { numbers, source: 'given', diagnostics: [] };
   }
   const free = steps.flatMap((s, i) => (s.times === undefined ? [i] : []));
   if (free.length > MAX_SEARCHED_STEPS) {
     return failed(
-      diagnostic('route/ambiguous', 'error', `${free.length} steps are too many to search for a route; give each step its times`, {
-        path: ['steps'],
-      }),
+      diagnostic(
+        'route/ambiguous',
+        'error',
+        `${free.length} steps are too many to search for a route; give each step its times`,
+        {
+          path: ['steps'],
+        },
+      ),
     );
   }
   const columns = routeColumns(steps, free);
@@ -48,27 +61,49 @@ function separateReactions(steps: readonly RouteStep[], numbers: number[]): Diag
   const onRoute = new Set(steps.flatMap((s, i) => (numbers[i]! > 0 ? [...s.change.keys()] : [])));
   return steps.flatMap((s, i) =>
     numbers[i] === 0 && s.change.size > 0 && ![...s.change.keys()].some((sp) => onRoute.has(sp))
-      ? [diagnostic('route/ambiguous', 'warning', `step ${i + 1} shares no species with the route: it describes a separate reaction and is left off (σ = 0)`, { path: ['steps', i], note: 'give times on each step to include it' })]
+      ? [
+          diagnostic(
+            'route/ambiguous',
+            'warning',
+            `step ${i + 1} shares no species with the route: it describes a separate reaction and is left off (σ = 0)`,
+            { path: ['steps', i], note: 'give times on each step to include it' },
+          ),
+        ]
       : [],
   );
 }
 
-function chooseRoute(routes: Candidate[], families: Family[], mustCancel: ReadonlySet<string>, steps: readonly RouteStep[]): RouteResult {
+function chooseRoute(
+  routes: Candidate[],
+  families: Family[],
+  mustCancel: ReadonlySet<string>,
+  steps: readonly RouteStep[],
+): RouteResult {
   if (routes.length === 0 && families.length === 0) {
     const declared = [...mustCancel].join(', ');
     return failed(
-      diagnostic('route/ambiguous', 'error', declared ? `no route lets every declared intermediate and catalyst cancel (${declared})` : 'no set of steps gives a net reaction', {
-        path: ['steps'],
-        note: 'check the declared roles, or give each step its times',
-      }),
+      diagnostic(
+        'route/ambiguous',
+        'error',
+        declared
+          ? `no route lets every declared intermediate and catalyst cancel (${declared})`
+          : 'no set of steps gives a net reaction',
+        {
+          path: ['steps'],
+          note: 'check the declared roles, or give each step its times',
+        },
+      ),
     );
   }
   const ranked = [...routes].sort(compareCandidates);
   const best = ranked[0];
   // A family (a sum of independent routes) only stands in the way when it cancels strictly more.
-  const better = families.filter((f) => !best || f.chainEnds < best.chainEnds || (f.chainEnds === best.chainEnds && f.cancelled > best.cancelled));
+  const better = families.filter(
+    (f) => !best || f.chainEnds < best.chainEnds || (f.chainEnds === best.chainEnds && f.cancelled > best.cancelled),
+  );
   const ties = best ? ranked.filter((c) => compareCandidates(c, best) === 0) : [];
-  if (best && better.length === 0 && ties.length === 1) return { numbers: best.sigma.map(Number), source: 'derived', diagnostics: [] };
+  if (best && better.length === 0 && ties.length === 1)
+    return { numbers: best.sigma.map(Number), source: 'derived', diagnostics: [] };
   const competing = [...ties.map((c) => c.sigma), ...better.flatMap((f) => f.rays)];
   // Parallel paths to one and the same overall reaction (random-order binding, two colliders) are
   // not a choice between reactions: follow the best-ranked path and say which steps run beside it.
@@ -78,20 +113,30 @@ function chooseRoute(routes: Candidate[], families: Family[], mustCancel: Readon
       numbers: best.sigma.map(Number),
       source: 'derived',
       diagnostics: [
-        diagnostic('route/ambiguous', 'info', `steps ${beside.join(', ')} form a parallel path to the same overall reaction; σ follows the path through steps ${best.sigma.flatMap((x, i) => (x > 0n ? [i + 1] : [])).join(', ')}`, {
-          path: ['steps'],
-          note: 'the steady-state rate law includes every path; give times to choose another',
-        }),
+        diagnostic(
+          'route/ambiguous',
+          'info',
+          `steps ${beside.join(', ')} form a parallel path to the same overall reaction; σ follows the path through steps ${best.sigma.flatMap((x, i) => (x > 0n ? [i + 1] : [])).join(', ')}`,
+          {
+            path: ['steps'],
+            note: 'the steady-state rate law includes every path; give times to choose another',
+          },
+        ),
       ],
     };
   }
   const alternatives = [...new Set(competing.map((a) => `[${a.join(', ')}]`))];
   const listed = alternatives.slice(0, 4).join(' or ');
   return failed(
-    diagnostic('route/ambiguous', 'error', `the steps allow several independent routes (${listed}); say which with times on each step`, {
-      path: ['steps'],
-      expected: 'times on every step',
-    }),
+    diagnostic(
+      'route/ambiguous',
+      'error',
+      `the steps allow several independent routes (${listed}); say which with times on each step`,
+      {
+        path: ['steps'],
+        expected: 'times on every step',
+      },
+    ),
   );
 }
 

@@ -19,7 +19,11 @@ export interface RouteWalk {
 }
 
 /** Walks the route from its starting materials. */
-export function walkRoute(mechanism: Mechanism, sigma: readonly number[], net: ReadonlyMap<string, Rational>): RouteWalk {
+export function walkRoute(
+  mechanism: Mechanism,
+  sigma: readonly number[],
+  net: ReadonlyMap<string, Rational>,
+): RouteWalk {
   const available = new Set<string>();
   for (const s of mechanism.species.values()) {
     if ((net.get(s.symbol)?.sign() ?? 0) < 0 || s.solvent || s.thirdBody) available.add(s.symbol);
@@ -44,8 +48,16 @@ export function walkRoute(mechanism: Mechanism, sigma: readonly number[], net: R
  * most of the route run (fewest catalysts in all), then the one taken up beside a substrate
  * already at hand (E in E + S), then record order.
  */
-function chooseSeed(mechanism: Mechanism, route: Step[], blocked: Step[], available: ReadonlySet<string>, declared: readonly string[]): string {
-  const missing = [...new Set(blocked.flatMap((step) => step.reactants.map((t) => t.species).filter((sp) => !available.has(sp))))];
+function chooseSeed(
+  mechanism: Mechanism,
+  route: Step[],
+  blocked: Step[],
+  available: ReadonlySet<string>,
+  declared: readonly string[],
+): string {
+  const missing = [
+    ...new Set(blocked.flatMap((step) => step.reactants.map((t) => t.species).filter((sp) => !available.has(sp)))),
+  ];
   const wanted = missing.find((sp) => declared.includes(sp));
   if (wanted) return wanted;
   const ready = (step: Step) => step.reactants.filter((t) => available.has(t.species)).length;
@@ -64,7 +76,7 @@ function chooseSeed(mechanism: Mechanism, route: Step[], blocked: Step[], availa
 
 /** Fires steps until nothing new becomes available; route steps get their positions as they first fire. */
 function fire(mechanism: Mechanism, route: Step[], available: Set<string>, order: number[], position: number): number {
-  for (let grew = true; grew; ) {
+  for (let grew = true; grew;) {
     grew = false;
     for (const step of route) {
       if (order[step.index] !== Infinity || !step.reactants.every((t) => available.has(t.species))) continue;
@@ -73,7 +85,12 @@ function fire(mechanism: Mechanism, route: Step[], available: Set<string>, order
       for (const t of step.products) available.add(t.species);
     }
     for (const step of mechanism.steps) {
-      const sides = step.reversible ? [[step.reactants, step.products], [step.products, step.reactants]] : [[step.reactants, step.products]];
+      const sides = step.reversible
+        ? [
+            [step.reactants, step.products],
+            [step.products, step.reactants],
+          ]
+        : [[step.reactants, step.products]];
       for (const [from, to] of sides) {
         if (!from!.every((t) => available.has(t.species))) continue;
         for (const t of to!) {

@@ -50,14 +50,25 @@ export function checkApproximations(
       const message = result.status === 'ok' ? 'the simulated rate is not positive' : result.message;
       checks.push({ ...base, status: 'failed', message });
       diagnostics.push(
-        diagnostic('simulation/failed', 'warning', `the simulation of observation ${observation.id} gave no initial rate: ${message}`, {
-          path: ['observations', index],
-          note: 'the approximations could not be checked against it; look at the constants and concentrations',
-        }),
+        diagnostic(
+          'simulation/failed',
+          'warning',
+          `the simulation of observation ${observation.id} gave no initial rate: ${message}`,
+          {
+            path: ['observations', index],
+            note: 'the approximations could not be checked against it; look at the constants and concentrations',
+          },
+        ),
       );
       return;
     }
-    const check: SimulationCheck = { ...base, status: 'ok', initialRate: result.rate, time: result.time, orders: simulatedOrders(basis, setup, Object.keys(observation.orders ?? {})) };
+    const check: SimulationCheck = {
+      ...base,
+      status: 'ok',
+      initialRate: result.rate,
+      time: result.time,
+      orders: simulatedOrders(basis, setup, Object.keys(observation.orders ?? {})),
+    };
     for (const derived of basis.rateLaws) {
       const approx = lawRateAt(derived, setup, result.state, constants);
       if (approx === undefined) continue;
@@ -65,11 +76,16 @@ export function checkApproximations(
       check.approximationError[derived.law.method] = Math.round(error * 1e4) / 1e4;
       if (error > threshold) {
         diagnostics.push(
-          diagnostic('approximation/invalid', 'warning', `${describe(derived)} is off by ${(error * 100).toFixed(0)} % at observation ${observation.id}: ${explainFailure(derived, basis, setup, result.state)}`, {
-            path: ['observations', index],
-            actual: error,
-            expected: `≤ ${threshold}`,
-          }),
+          diagnostic(
+            'approximation/invalid',
+            'warning',
+            `${describe(derived)} is off by ${(error * 100).toFixed(0)} % at observation ${observation.id}: ${explainFailure(derived, basis, setup, result.state)}`,
+            {
+              path: ['observations', index],
+              actual: error,
+              expected: `≤ ${threshold}`,
+            },
+          ),
         );
       }
     }
@@ -103,12 +119,21 @@ function simulatedOrders(basis: SimulationBasis, setup: SimulationSetup, species
 }
 
 /** The rate law's value at the simulated state (external concentrations, pool totals from the start). */
-export function lawRateAt(derived: DerivedRateLaw, setup: SimulationSetup, state: Float64Array, constants: ReadonlyMap<string, number>): number | undefined {
+export function lawRateAt(
+  derived: DerivedRateLaw,
+  setup: SimulationSetup,
+  state: Float64Array,
+  constants: ReadonlyMap<string, number>,
+): number | undefined {
   const values = new Map(constants);
   const at = (sp: string, y: Float64Array) => y[setup.model.species.indexOf(sp)] ?? 0;
   setup.model.species.forEach((sp, i) => values.set(concentration(sp), state[i]!));
   // A pool's total is conserved: what the starting mixture put into it.
-  for (const pool of derived.law.pools ?? []) values.set(pool.total, pool.species.reduce((sum, sp, i) => sum + pool.weights[i]! * at(sp, setup.y0), 0));
+  for (const pool of derived.law.pools ?? [])
+    values.set(
+      pool.total,
+      pool.species.reduce((sum, sp, i) => sum + pool.weights[i]! * at(sp, setup.y0), 0),
+    );
   if (derived.law.expression) {
     const e = derived.law.expression;
     if (!e.symbols().every((s) => values.has(s))) return undefined;

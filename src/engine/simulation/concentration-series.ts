@@ -49,13 +49,31 @@ const LAST_TIME = 1e12;
 const MAX_DECADES = 9;
 
 /** Simulates one observation from t = 0 until the reaction is ~99 % complete. */
-export function concentrationSeries(basis: SimulationBasis, constants: ReadonlyMap<string, number>, observation: Observation, options: SeriesOptions = {}): ConcentrationSeries {
-  const base = { observation: observation.id, unit: 'M' as const, times: [], species: [], roles: [], held: [], values: [] };
+export function concentrationSeries(
+  basis: SimulationBasis,
+  constants: ReadonlyMap<string, number>,
+  observation: Observation,
+  options: SeriesOptions = {},
+): ConcentrationSeries {
+  const base = {
+    observation: observation.id,
+    unit: 'M' as const,
+    times: [],
+    species: [],
+    roles: [],
+    held: [],
+    values: [],
+  };
   const setup = simulationSetup(basis, constants, observation);
   if ('missing' in setup) return { ...base, status: 'skipped', message: `not simulated: needs ${setup.missing}` };
   const { model, y0, probe } = setup;
   const initial = simulatedInitialRate(model, y0, probe);
-  if (initial.status !== 'ok' || !(initial.rate > 0)) return { ...base, status: 'failed', message: initial.status === 'ok' ? 'the simulated rate is not positive' : initial.message };
+  if (initial.status !== 'ok' || !(initial.rate > 0))
+    return {
+      ...base,
+      status: 'failed',
+      message: initial.status === 'ok' ? 'the simulated rate is not positive' : initial.message,
+    };
   const timescale = probe.maxExtent / initial.rate;
   const cap = Math.min(LAST_TIME, SPAN_IN_TIMESCALES * timescale);
   const fastest = fastestRate(model, [y0, initial.state]);
@@ -63,7 +81,11 @@ export function concentrationSeries(basis: SimulationBasis, constants: ReadonlyM
   const tolerances = { rtol: 1e-6, atol: 1e-14 * Math.max(1, probe.maxExtent), nonNegative: true, maxSteps: 50_000 };
 
   const coarseStart = firstTime(fastest, cap);
-  const coarse = integrateStiff(model.system, y0, { tEnd: cap, outputTimes: logTimes(coarseStart, cap, 8), ...tolerances });
+  const coarse = integrateStiff(model.system, y0, {
+    tEnd: cap,
+    outputTimes: logTimes(coarseStart, cap, 8),
+    ...tolerances,
+  });
   if (coarse.status !== 'ok') return { ...base, status: 'failed', message: coarse.message ?? coarse.status };
   const goal = (options.completion ?? 0.99) * Math.min(probe.maxExtent, extent(coarse.y[coarse.y.length - 1]!));
   const reached = coarse.t[coarse.y.findIndex((y) => extent(y) >= goal)] ?? cap;

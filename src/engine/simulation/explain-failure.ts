@@ -8,7 +8,12 @@ import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
 import type { SimulationBasis, SimulationSetup } from './simulation-setup.ts';
 
 /** One sentence naming the failing assumption. */
-export function explainFailure(derived: DerivedRateLaw, basis: SimulationBasis, setup: SimulationSetup, state: Float64Array): string {
+export function explainFailure(
+  derived: DerivedRateLaw,
+  basis: SimulationBasis,
+  setup: SimulationSetup,
+  state: Float64Array,
+): string {
   return derived.law.method === 'rds' ? explainRds(basis, setup, state) : explainSteadyState(basis, setup, state);
 }
 
@@ -19,7 +24,8 @@ function explainRds({ mechanism, route }: SimulationBasis, setup: SimulationSetu
   const at = (sp: string) => state[setup.model.species.indexOf(sp)]!;
   const fluxes = setup.model.stepFluxes(state);
   for (const step of mechanism.steps) {
-    const preEquilibrium = step !== rds && step.reversible && (rank(step.index) < rank(rds.index) || sigma[step.index] === 0);
+    const preEquilibrium =
+      step !== rds && step.reversible && (rank(step.index) < rank(rds.index) || sigma[step.index] === 0);
     if (!preEquilibrium) continue;
     // The net flux through a step at equilibrium is a vanishing share of its one-way fluxes.
     const { forward, reverse } = fluxes[step.index]!;
@@ -29,18 +35,25 @@ function explainRds({ mechanism, route }: SimulationBasis, setup: SimulationSetu
     }
   }
   const after = mechanism.steps.filter((s) => rank(s.index) > rank(rds.index)).flatMap((s) => [...s.change.keys()]);
-  const internal = [...route.roles].filter(([sp, role]) => role === 'intermediate' && after.includes(sp) && !rds.reactants.some((t) => t.species === sp));
+  const internal = [...route.roles].filter(
+    ([sp, role]) => role === 'intermediate' && after.includes(sp) && !rds.reactants.some((t) => t.species === sp),
+  );
   const piled = internal.filter(([sp]) => at(sp) > 0).sort(([a], [b]) => at(b) - at(a))[0];
-  if (piled) return `species formed after the rate-determining step are not negligible (${piled[0]} builds up to ${at(piled[0]).toExponential(2)} M): step ${rds.label} is not the slowest`;
+  if (piled)
+    return `species formed after the rate-determining step are not negligible (${piled[0]} builds up to ${at(piled[0]).toExponential(2)} M): step ${rds.label} is not the slowest`;
   return `step ${rds.label} does not control the rate at these constants`;
 }
 
 function explainSteadyState({ route }: SimulationBasis, setup: SimulationSetup, state: Float64Array): string {
   const roles = route.roles;
   const species = setup.model.species;
-  const internal = species.filter((sp) => roles.get(sp) === 'intermediate' || (roles.get(sp) === 'catalyst' && !setup.held.has(sp)));
+  const internal = species.filter(
+    (sp) => roles.get(sp) === 'intermediate' || (roles.get(sp) === 'catalyst' && !setup.held.has(sp)),
+  );
   const reactants = [...route.overall.reactants.keys()].filter((sp) => !setup.held.has(sp));
-  const bound = internal.filter((sp) => roles.get(sp) === 'intermediate').reduce((s, sp) => s + state[species.indexOf(sp)]!, 0);
+  const bound = internal
+    .filter((sp) => roles.get(sp) === 'intermediate')
+    .reduce((s, sp) => s + state[species.indexOf(sp)]!, 0);
   const smallest = Math.min(...reactants.map((sp) => setup.y0[species.indexOf(sp)]!));
   if (smallest > 0 && bound / smallest > 0.05) {
     return `the intermediates are not dilute: they hold ${((bound / smallest) * 100).toFixed(0)} % as much material as the scarcest reactant (the catalyst or intermediates must be far below the substrate)`;

@@ -28,15 +28,21 @@ export interface RateProbe {
 }
 
 export type InitialRate =
-  | { status: 'ok'; rate: number; time: number; state: Float64Array }
-  | { status: 'failed'; message: string };
+  { status: 'ok'; rate: number; time: number; state: Float64Array } | { status: 'failed'; message: string };
 
 /** Simulates until 1 % conversion and returns the rate and the state there. */
 export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, probe: RateProbe): InitialRate {
   const target = CONVERSION_FOR_INITIAL_RATE * probe.maxExtent;
   const extent = (y: Float64Array) => (y[probe.product]! - y0[probe.product]!) / probe.coefficient;
   const times = logTimes(1e-9, LAST_TIME);
-  const coarse = integrateStiff(model.system, y0, { tEnd: LAST_TIME, outputTimes: times, rtol: 1e-7, atol: COARSE_ABSOLUTE_TOLERANCE * Math.max(1, probe.maxExtent), nonNegative: true, maxSteps: 50_000 });
+  const coarse = integrateStiff(model.system, y0, {
+    tEnd: LAST_TIME,
+    outputTimes: times,
+    rtol: 1e-7,
+    atol: COARSE_ABSOLUTE_TOLERANCE * Math.max(1, probe.maxExtent),
+    nonNegative: true,
+    maxSteps: 50_000,
+  });
   const hit = coarse.y.findIndex((y) => extent(y) >= target);
   if (hit < 0) {
     if (coarse.status !== 'ok') return { status: 'failed', message: coarse.message ?? coarse.status };
@@ -51,7 +57,15 @@ export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, p
   const start = hit === 0 ? y0 : coarse.y[hit - 1]!;
   const fine = Array.from({ length: 40 }, (_, i) => t0 + ((coarse.t[hit]! - t0) * (i + 1)) / 40);
   const atol = ownScaleTolerance([y0, ...coarse.y.slice(0, hit + 1)], probe.maxExtent);
-  const refined = integrateStiff(model.system, start, { t0, tEnd: fine.at(-1)!, outputTimes: fine, rtol: 1e-8, atol, nonNegative: true, maxSteps: 50_000 });
+  const refined = integrateStiff(model.system, start, {
+    t0,
+    tEnd: fine.at(-1)!,
+    outputTimes: fine,
+    rtol: 1e-8,
+    atol,
+    nonNegative: true,
+    maxSteps: 50_000,
+  });
   const at = refined.y.findIndex((y) => extent(y) >= target);
   const index = at < 0 ? refined.y.length - 1 : at;
   const state = refined.y[index] ?? coarse.y[hit]!;

@@ -27,18 +27,27 @@ export interface MassActionModel {
 }
 
 /** Builds the ODE system; `held` species keep their initial concentration. */
-export function massActionModel(mechanism: Mechanism, constants: RateConstants, held: ReadonlySet<string>): MassActionModel {
+export function massActionModel(
+  mechanism: Mechanism,
+  constants: RateConstants,
+  held: ReadonlySet<string>,
+): MassActionModel {
   const species = [...mechanism.species.keys()];
   const index = new Map(species.map((s, i) => [s, i]));
-  const side = (terms: { species: string; coefficient: { toNumber(): number } }[]): Side => ({ factors: terms.map((t) => [index.get(t.species)!, t.coefficient.toNumber()]) });
+  const side = (terms: { species: string; coefficient: { toNumber(): number } }[]): Side => ({
+    factors: terms.map((t) => [index.get(t.species)!, t.coefficient.toNumber()]),
+  });
   const steps = mechanism.steps.map((step, i) => ({
     left: side(step.reactants),
     right: side(step.products),
     kf: constants.forward[i] ?? 0,
     kr: step.reversible ? (constants.reverse[i] ?? 0) : 0,
-    change: [...step.change].filter(([sp]) => !held.has(sp)).map(([sp, v]): [number, number] => [index.get(sp)!, v.toNumber()]),
+    change: [...step.change]
+      .filter(([sp]) => !held.has(sp))
+      .map(([sp, v]): [number, number] => [index.get(sp)!, v.toNumber()]),
   }));
-  const stepFluxes = (y: Float64Array) => steps.map((s) => ({ forward: s.kf * product(s.left, y), reverse: s.kr * product(s.right, y) }));
+  const stepFluxes = (y: Float64Array) =>
+    steps.map((s) => ({ forward: s.kf * product(s.left, y), reverse: s.kr * product(s.right, y) }));
   const n = species.length;
   const system: OdeSystem = {
     size: n,
@@ -52,7 +61,10 @@ export function massActionModel(mechanism: Mechanism, constants: RateConstants, 
     jacobian(_t, y, J) {
       J.fill(0);
       for (const s of steps) {
-        for (const [k, sign, side] of [[s.kf, 1, s.left], [s.kr, -1, s.right]] as const) {
+        for (const [k, sign, side] of [
+          [s.kf, 1, s.left],
+          [s.kr, -1, s.right],
+        ] as const) {
           if (k === 0) continue;
           for (const [j, order] of side.factors) {
             const d = sign * k * order * product(side, y, j);

@@ -30,7 +30,11 @@ export interface SimulationSetup {
 }
 
 /** Builds the simulation of one observation from the mechanism, its route and the numeric constants by symbol. */
-export function simulationSetup(basis: SimulationBasis, constants: ReadonlyMap<string, number>, observation: Observation): SimulationSetup | { missing: string } {
+export function simulationSetup(
+  basis: SimulationBasis,
+  constants: ReadonlyMap<string, number>,
+  observation: Observation,
+): SimulationSetup | { missing: string } {
   const { mechanism } = basis;
   const forward: number[] = [];
   const reverse: number[] = [];
@@ -56,22 +60,31 @@ export function simulationSetup(basis: SimulationBasis, constants: ReadonlyMap<s
     if (i < 0 || 'error' in q || !sameDimension(q.quantity.unit.dimension, CONCENTRATION)) continue;
     y0[i] = toCanonical(q.quantity);
   }
-  for (const sp of held) if (y0[model.species.indexOf(sp)] === 0) return { missing: `the concentration of ${sp}, which is held constant` };
+  for (const sp of held)
+    if (y0[model.species.indexOf(sp)] === 0) return { missing: `the concentration of ${sp}, which is held constant` };
   const probe = rateProbe(basis, model.species, y0, held);
   return 'missing' in probe ? probe : { model, y0, probe, held };
 }
 
 /** The product that measures the overall rate, and the largest extent the starting mixture `y0` allows. */
-export function rateProbe(basis: SimulationBasis, species: string[], y0: Float64Array, held: ReadonlySet<string>): RateProbe | { missing: string } {
+export function rateProbe(
+  basis: SimulationBasis,
+  species: string[],
+  y0: Float64Array,
+  held: ReadonlySet<string>,
+): RateProbe | { missing: string } {
   const overall = basis.route.overall;
   const steps = basis.mechanism.steps;
   const products = [...overall.products].filter(([sp]) => !held.has(sp));
-  products.sort(([a], [b]) => steps.filter((s) => s.change.has(a)).length - steps.filter((s) => s.change.has(b)).length);
+  products.sort(
+    ([a], [b]) => steps.filter((s) => s.change.has(a)).length - steps.filter((s) => s.change.has(b)).length,
+  );
   const chosen = products[0];
   if (!chosen) return { missing: 'a product to follow' };
   const reactants = [...overall.reactants].filter(([sp]) => !held.has(sp));
   const extents = reactants.map(([sp, nu]) => y0[species.indexOf(sp)]! / nu.toNumber());
   const maxExtent = Math.min(...extents);
-  if (!(maxExtent > 0) || !Number.isFinite(maxExtent)) return { missing: 'a starting concentration for every reactant' };
+  if (!(maxExtent > 0) || !Number.isFinite(maxExtent))
+    return { missing: 'a starting concentration for every reactant' };
   return { product: species.indexOf(chosen[0]), coefficient: chosen[1].toNumber(), maxExtent };
 }

@@ -93,5 +93,11 @@ function formatExponent(e: Rational): string {
 }
 
 function mapBases(f: (k: BaseDimension) => Rational): Dimension {
-  return { amount: f('amount'), length: f('length'), time: f('time'), energy: f('energy'), temperature: f('temperature') };
+  return {
+    amount: f('amount'),
+    length: f('length'),
+    time: f('time'),
+    energy: f('energy'),
+    temperature: f('temperature'),
+  };
 }

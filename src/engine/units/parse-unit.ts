@@ -44,7 +44,18 @@ type Token =
 const MAX_EXPONENT = 12;
 const MAX_DEPTH = 3;
 const SUPERSCRIPTS: Readonly<Record<string, string>> = {
-  '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-', '⁺': '+',
+  '⁰': '0',
+  '¹': '1',
+  '²': '2',
+  '³': '3',
+  '⁴': '4',
+  '⁵': '5',
+  '⁶': '6',
+  '⁷': '7',
+  '⁸': '8',
+  '⁹': '9',
+  '⁻': '-',
+  '⁺': '+',
 };
 const NUMBER = String.raw`[+-]?\d+(?:\.\d+)?(?:/\d+)?`;
 const EXPONENT = String.raw`(?:\^\((${NUMBER})\)|\^(${NUMBER})|([+-]?\d+)|([⁺⁻]?[⁰¹²³⁴⁵⁶⁷⁸⁹]+))?`;
@@ -78,14 +89,23 @@ function tokenize(text: string): Token[] | { error: string } {
       i = CLOSE.lastIndex;
     } else {
       const m = TERM.exec(t);
-      if (!m) return { error: c === '^' ? `'^' must be followed by an exponent in unit '${text}'` : `unexpected '${c}' in unit '${text}'` };
+      if (!m)
+        return {
+          error:
+            c === '^' ? `'^' must be followed by an exponent in unit '${text}'` : `unexpected '${c}' in unit '${text}'`,
+        };
       const name = m[1]!;
-      if (CELSIUS.has(name)) return { error: `°C is an offset scale, not a unit factor: give temperatures in kelvin (add 273.15)` };
+      if (CELSIUS.has(name))
+        return { error: `°C is an offset scale, not a unit factor: give temperatures in kelvin (add 273.15)` };
       const symbol = lookUpSymbol(name);
       if (!symbol) return { error: `unknown unit '${name}'` };
       const exponent = readExponent(m, t);
       if ('error' in exponent) return exponent;
-      tokens.push({ kind: 'term', scaled: { dimension: symbol.dimension, exact: symbol.factor, approx: 1 }, exponent: exponent.value });
+      tokens.push({
+        kind: 'term',
+        scaled: { dimension: symbol.dimension, exact: symbol.factor, approx: 1 },
+        exponent: exponent.value,
+      });
       i = TERM.lastIndex;
     }
   }
@@ -102,7 +122,8 @@ function readExponent(m: RegExpExecArray, text: string): { value: Rational } | {
   if (raw === undefined) return { value: Rational.ONE };
   const value = Rational.parse(raw);
   if (!value) return { error: `'${raw}' is not an exponent in unit '${text}'` };
-  if (value.abs().compare(Rational.of(MAX_EXPONENT)) > 0) return { error: `exponent ${raw} is too large in unit '${text}'` };
+  if (value.abs().compare(Rational.of(MAX_EXPONENT)) > 0)
+    return { error: `exponent ${raw} is too large in unit '${text}'` };
   return { value };
 }
 
@@ -137,7 +158,11 @@ function parseItem(tokens: readonly Token[], i: number, depth: number): Parsed {
 }
 
 function times(a: Scaled, b: Scaled): Scaled {
-  return { dimension: multiplyDimensions(a.dimension, b.dimension), exact: a.exact.mul(b.exact), approx: a.approx * b.approx };
+  return {
+    dimension: multiplyDimensions(a.dimension, b.dimension),
+    exact: a.exact.mul(b.exact),
+    approx: a.approx * b.approx,
+  };
 }
 
 function power(a: Scaled, p: Rational): Scaled {

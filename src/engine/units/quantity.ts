@@ -33,7 +33,9 @@ const PLUS_MINUS = /\s*(?:±|\+\/-|\+-)\s*/y;
 /** Reads a number, optional `± u` or `+/- u`, and a unit; a bare number is dimensionless. */
 export function parseQuantity(input: string | number): { quantity: Quantity } | { error: string } {
   if (typeof input === 'number') {
-    return Number.isFinite(input) ? { quantity: { value: input, unit: DIMENSIONLESS_UNIT } } : { error: `${input} is not a finite number` };
+    return Number.isFinite(input)
+      ? { quantity: { value: input, unit: DIMENSIONLESS_UNIT } }
+      : { error: `${input} is not a finite number` };
   }
   const text = input.trim().replaceAll('\u2212', '-');
   if (text === '') return { error: 'no value given' };
@@ -58,7 +60,8 @@ export function parseQuantity(input: string | number): { quantity: Quantity } | 
   const next = rest.trimStart();
   if (/^,\d/.test(rest)) return { error: `use a decimal point, not a comma, in '${text}'` };
   if (/^[\d.,^]/.test(next)) return notAQuantity;
-  if (/[±]|\+\/-/.test(rest)) return { error: `write the uncertainty before the unit, as in '1.2 ± 0.1 M', not '${text}'` };
+  if (/[±]|\+\/-/.test(rest))
+    return { error: `write the uncertainty before the unit, as in '1.2 ± 0.1 M', not '${text}'` };
   const unit = parseUnit(rest);
   if ('error' in unit) return unit;
   const v = toDouble(value);

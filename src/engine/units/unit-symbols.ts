@@ -25,7 +25,11 @@ export interface UnitSymbol {
   prefixable: boolean;
 }
 
-const sym = (dimension: Dimension, factor: Rational, prefixable = true): UnitSymbol => ({ dimension, factor, prefixable });
+const sym = (dimension: Dimension, factor: Rational, prefixable = true): UnitSymbol => ({
+  dimension,
+  factor,
+  prefixable,
+});
 const tenTo = (n: number) => Rational.of(10n ** BigInt(Math.max(n, 0)), 10n ** BigInt(Math.max(-n, 0)));
 const molecule = sym(AMOUNT, AVOGADRO_EXACT.inverse(), false);
 
@@ -59,8 +63,19 @@ export const UNIT_SYMBOLS: ReadonlyMap<string, UnitSymbol> = new Map([
 
 /** SI prefixes by power of ten; µ (micro sign), μ (Greek mu) and u all mean micro. */
 export const PREFIXES: ReadonlyMap<string, number> = new Map([
-  ['f', -15], ['p', -12], ['n', -9], ['µ', -6], ['μ', -6], ['u', -6], ['m', -3],
-  ['c', -2], ['d', -1], ['h', 2], ['k', 3], ['M', 6], ['G', 9],
+  ['f', -15],
+  ['p', -12],
+  ['n', -9],
+  ['µ', -6],
+  ['μ', -6],
+  ['u', -6],
+  ['m', -3],
+  ['c', -2],
+  ['d', -1],
+  ['h', 2],
+  ['k', 3],
+  ['M', 6],
+  ['G', 9],
 ]);
 
 /** A symbol such as `kJ` or `µM`, unprefixed names first; undefined if unknown. */

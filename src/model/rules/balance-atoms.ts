@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const balanceAtoms = {
   id: 'balance/atoms',
-  summary: "a step does not conserve atoms",
+  summary: 'a step does not conserve atoms',
 } as const satisfies RuleDefinition;

@@ -6,5 +6,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const balanceCharge = {
   id: 'balance/charge',
-  summary: "a step does not conserve charge",
+  summary: 'a step does not conserve charge',
 } as const satisfies RuleDefinition;

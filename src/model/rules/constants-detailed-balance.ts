@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const constantsDetailedBalance = {
   id: 'constants/detailed-balance',
-  summary: "the constants around a cycle break detailed balance",
+  summary: 'the constants around a cycle break detailed balance',
 } as const satisfies RuleDefinition;

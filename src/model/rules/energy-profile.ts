@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const energyProfile = {
   id: 'energy/profile',
-  summary: "the energy profile is inconsistent or incomplete",
+  summary: 'the energy profile is inconsistent or incomplete',
 } as const satisfies RuleDefinition;

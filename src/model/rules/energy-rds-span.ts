@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const energyRdsSpan = {
   id: 'energy/rds-span',
-  summary: "the declared rate-determining step disagrees with the energetic span",
+  summary: 'the declared rate-determining step disagrees with the energetic span',
 } as const satisfies RuleDefinition;

@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const formulaSyntax = {
   id: 'formula/syntax',
-  summary: "a species symbol is not a chemical formula",
+  summary: 'a species symbol is not a chemical formula',
 } as const satisfies RuleDefinition;

@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const observationOrder = {
   id: 'observation/order',
-  summary: "an observed order contradicts the rate law",
+  summary: 'an observed order contradicts the rate law',
 } as const satisfies RuleDefinition;

@@ -5,5 +5,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const observationSpecies = {
   id: 'observation/species',
-  summary: "an observation names a species the mechanism lacks",
+  summary: 'an observation names a species the mechanism lacks',
 } as const satisfies RuleDefinition;

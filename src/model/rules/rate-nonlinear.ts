@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const rateNonlinear = {
   id: 'rate/nonlinear',
-  summary: "the steady state has no closed-form solution here",
+  summary: 'the steady state has no closed-form solution here',
 } as const satisfies RuleDefinition;

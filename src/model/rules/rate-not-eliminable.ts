@@ -8,5 +8,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const rateNotEliminable = {
   id: 'rate/not-eliminable',
-  summary: "an intermediate cannot be eliminated",
+  summary: 'an intermediate cannot be eliminated',
 } as const satisfies RuleDefinition;

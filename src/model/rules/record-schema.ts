@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const recordSchema = {
   id: 'record/schema',
-  summary: "the record does not match the record format",
+  summary: 'the record does not match the record format',
 } as const satisfies RuleDefinition;

@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const recordYaml = {
   id: 'record/yaml',
-  summary: "the file is not well-formed YAML",
+  summary: 'the file is not well-formed YAML',
 } as const satisfies RuleDefinition;

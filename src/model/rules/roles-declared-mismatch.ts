@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const rolesDeclaredMismatch = {
   id: 'roles/declared-mismatch',
-  summary: "a declared role disagrees with the derived one",
+  summary: 'a declared role disagrees with the derived one',
 } as const satisfies RuleDefinition;

@@ -8,5 +8,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const routeAmbiguous = {
   id: 'route/ambiguous',
-  summary: "no single route could be chosen",
+  summary: 'no single route could be chosen',
 } as const satisfies RuleDefinition;

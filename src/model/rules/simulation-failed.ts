@@ -6,5 +6,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const simulationFailed = {
   id: 'simulation/failed',
-  summary: "a simulation gave no initial rate",
+  summary: 'a simulation gave no initial rate',
 } as const satisfies RuleDefinition;

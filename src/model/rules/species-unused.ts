@@ -6,5 +6,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const speciesUnused = {
   id: 'species/unused',
-  summary: "a declared species occurs in no step",
+  summary: 'a declared species occurs in no step',
 } as const satisfies RuleDefinition;

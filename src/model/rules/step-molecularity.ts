@@ -7,5 +7,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const stepMolecularity = {
   id: 'step/molecularity',
-  summary: "a step has more reactant molecules than an elementary step can",
+  summary: 'a step has more reactant molecules than an elementary step can',
 } as const satisfies RuleDefinition;

@@ -6,5 +6,5 @@ import type { RuleDefinition } from './rule-definition.ts';
 
 export const stepRds = {
   id: 'step/rds',
-  summary: "the rate-determining step is missing, doubled or off the route",
+  summary: 'the rate-determining step is missing, doubled or off the route',
 } as const satisfies RuleDefinition;

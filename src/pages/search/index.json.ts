@@ -7,5 +7,7 @@ export async function GET(): Promise<Response> {
   const byId = (a: { id: string }, b: { id: string }) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
   const mechanisms: MechanismInput[] = (await entries('mechanisms')).sort(byId).map((e) => e.data);
   const species: SpeciesInput[] = (await entries('species')).sort(byId).map((e) => e.data);
-  return new Response(JSON.stringify(buildSearchIndex(mechanisms, species)), { headers: { 'Content-Type': 'application/json; charset=utf-8' } });
+  return new Response(JSON.stringify(buildSearchIndex(mechanisms, species)), {
+    headers: { 'Content-Type': 'application/json; charset=utf-8' },
+  });
 }

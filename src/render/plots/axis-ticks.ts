@@ -8,6 +8,7 @@ export function niceTicks(lo: number, hi: number, target = 5): number[] {
   const step = [1, 2, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? 10 * power;
   const ticks: number[] = [];
   // Counting in whole steps keeps ticks free of accumulated rounding (0.30000000000000004).
-  for (let k = Math.ceil(lo / step - 1e-9); k * step <= hi + step * 1e-9; k++) ticks.push(Number((k * step).toPrecision(12)));
+  for (let k = Math.ceil(lo / step - 1e-9); k * step <= hi + step * 1e-9; k++)
+    ticks.push(Number((k * step).toPrecision(12)));
   return ticks;
 }

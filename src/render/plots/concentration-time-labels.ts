@@ -23,7 +23,12 @@ export function curveName(curve: PlottedCurve, maxChars: number): { text: string
 }
 
 /** Legend entries flowed into rows between `left` and `right`; returns the drawing and the row count. */
-export function legend(curves: readonly PlottedCurve[], left: number, right: number, firstBaseline: number): { svg: string[]; rows: number } {
+export function legend(
+  curves: readonly PlottedCurve[],
+  left: number,
+  right: number,
+  firstBaseline: number,
+): { svg: string[]; rows: number } {
   const svg: string[] = [];
   let x = left;
   let row = 0;
@@ -85,9 +90,13 @@ export function spreadApart(wanted: readonly number[], gap: number, lo: number, 
 /** The caption: the observation simulated, how far it ran, magnified curves, and species not drawn. */
 export function captionLines(series: ConcentrationSeries, layout: TimePlotLayout, maxChars: number): string[] {
   const parts: string[] = [];
-  const conversion = series.conversion !== undefined ? ` to ${(series.conversion * 100).toFixed(series.conversion > 0.999 ? 2 : 1)} % conversion` : '';
+  const conversion =
+    series.conversion !== undefined
+      ? ` to ${(series.conversion * 100).toFixed(series.conversion > 0.999 ? 2 : 1)} % conversion`
+      : '';
   parts.push(`mass-action simulation of observation ${series.observation ?? '?'}${conversion}`);
-  if (layout.curves.some((c) => c.exponent > 0)) parts.push('a curve marked ×10ⁿ is drawn 10ⁿ times larger than the axis reads');
+  if (layout.curves.some((c) => c.exponent > 0))
+    parts.push('a curve marked ×10ⁿ is drawn 10ⁿ times larger than the axis reads');
   if (layout.constant.length > 0) parts.push(`constant, not drawn: ${layout.constant.join(', ')}`);
   if (layout.absent.length > 0) parts.push(`absent throughout: ${layout.absent.join(', ')}`);
   return joinWrapped(parts, maxChars);

@@ -42,10 +42,20 @@ export interface TimePlotLayout {
   unit: ConcentrationUnit;
 }
 
-const ROLE_ORDER: Partial<Record<Role, number>> = { reactant: 0, catalyst: 1, intermediate: 2, inhibitor: 3, product: 4 };
+const ROLE_ORDER: Partial<Record<Role, number>> = {
+  reactant: 0,
+  catalyst: 1,
+  intermediate: 2,
+  inhibitor: 3,
+  product: 4,
+};
 
 /** Chooses the curves of a series; the frame's top and bottom come from the legend and caption sizes. */
-export function selectCurves(series: ConcentrationSeries): { curves: PlottedCurve[]; constant: string[]; absent: string[] } {
+export function selectCurves(series: ConcentrationSeries): {
+  curves: PlottedCurve[];
+  constant: string[];
+  absent: string[];
+} {
   const constant: string[] = [];
   const absent: string[] = [];
   const kept: Omit<PlottedCurve, 'exponent' | 'style'>[] = [];
@@ -60,20 +70,38 @@ export function selectCurves(series: ConcentrationSeries): { curves: PlottedCurv
   const rank = (c: { role?: Role }) => (c.role ? (ROLE_ORDER[c.role] ?? 5) : 5);
   kept.sort((a, b) => rank(a) - rank(b));
   const tallest = Math.max(0, ...kept.map((c) => Math.max(...c.values)));
-  const curves = kept.map((c, i) => ({ ...c, exponent: magnificationExponent(Math.max(...c.values), tallest), style: curveStyle(i) }));
+  const curves = kept.map((c, i) => ({
+    ...c,
+    exponent: magnificationExponent(Math.max(...c.values), tallest),
+    style: curveStyle(i),
+  }));
   return { curves, constant, absent };
 }
 
 /** Lays out the axes for the chosen curves inside the given frame. */
-export function layoutTimePlot(series: ConcentrationSeries, chosen: ReturnType<typeof selectCurves>, frame: TimePlotLayout['frame'], logTime: boolean): TimePlotLayout {
+export function layoutTimePlot(
+  series: ConcentrationSeries,
+  chosen: ReturnType<typeof selectCurves>,
+  frame: TimePlotLayout['frame'],
+  logTime: boolean,
+): TimePlotLayout {
   const { times } = series;
   const end = times[times.length - 1] ?? 1;
-  const firstIndex = logTime ? Math.max(0, times.findIndex((t) => t > 0)) : 0;
+  const firstIndex = logTime
+    ? Math.max(
+        0,
+        times.findIndex((t) => t > 0),
+      )
+    : 0;
   const start = logTime ? (times[firstIndex] ?? end / 1e3) : 0;
   const span = frame.right - frame.left;
-  const x = logTime ? (t: number) => frame.left + (Math.log10(Math.max(t, start) / start) / Math.log10(end / start)) * span : (t: number) => frame.left + (t / end) * span;
+  const x = logTime
+    ? (t: number) => frame.left + (Math.log10(Math.max(t, start) / start) / Math.log10(end / start)) * span
+    : (t: number) => frame.left + (t / end) * span;
   const unitOfTime = timeUnit(end);
-  const timeTicks = logTime ? logTicks(start, end) : scaleTicks(linearTicks(end / unitOfTime.seconds), unitOfTime.seconds);
+  const timeTicks = logTime
+    ? logTicks(start, end)
+    : scaleTicks(linearTicks(end / unitOfTime.seconds), unitOfTime.seconds);
 
   const tallest = Math.max(0, ...chosen.curves.map((c) => Math.max(...c.values) * 10 ** c.exponent));
   const unit = concentrationUnit(tallest);
@@ -98,5 +126,8 @@ export function layoutTimePlot(series: ConcentrationSeries, chosen: ReturnType<t
 }
 
 function scaleTicks(ticks: AxisTicks, seconds: number): AxisTicks {
-  return { major: ticks.major.map((t) => ({ value: t.value * seconds, label: t.label })), minor: ticks.minor.map((v) => v * seconds) };
+  return {
+    major: ticks.major.map((t) => ({ value: t.value * seconds, label: t.label })),
+    minor: ticks.minor.map((v) => v * seconds),
+  };
 }

@@ -36,12 +36,24 @@ export function concentrationTimeSvg(series: ConcentrationSeries, options: Conce
   const top = 18 + drawnLegend.rows * 16 + 4;
   const layout0 = layoutTimePlot(series, chosen, { left, right, top, bottom: height - 44 }, logTime);
   const caption = captionLines(series, layout0, Math.floor((width - left) / 5.4));
-  const layout = layoutTimePlot(series, chosen, { left, right, top, bottom: height - 44 - 13 * caption.length }, logTime);
+  const layout = layoutTimePlot(
+    series,
+    chosen,
+    { left, right, top, bottom: height - 44 - 13 * caption.length },
+    logTime,
+  );
   const title = options.title ?? describe(series, layout, logTime);
   const open = `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" role="img" aria-label="${escapeXml(title)}" font-family="Helvetica, Arial, sans-serif" font-size="11" fill="#111">`;
   if (series.status !== 'ok' || series.times.length < 2 || layout.curves.length === 0) {
-    const why = series.message ?? (series.status === 'ok' ? 'nothing changes in this simulation' : `simulation ${series.status}`);
-    return [open, `<title>${escapeXml(title)}</title>`, frameBox(layout), `<text x="${c((left + right) / 2)}" y="${c((layout.frame.top + layout.frame.bottom) / 2)}" text-anchor="middle" font-style="italic">${escapeXml(why)}</text>`, '</svg>'].join('\n');
+    const why =
+      series.message ?? (series.status === 'ok' ? 'nothing changes in this simulation' : `simulation ${series.status}`);
+    return [
+      open,
+      `<title>${escapeXml(title)}</title>`,
+      frameBox(layout),
+      `<text x="${c((left + right) / 2)}" y="${c((layout.frame.top + layout.frame.bottom) / 2)}" text-anchor="middle" font-style="italic">${escapeXml(why)}</text>`,
+      '</svg>',
+    ].join('\n');
   }
   const { frame } = layout;
   const clip = `${id}-frame`;
@@ -55,9 +67,15 @@ export function concentrationTimeSvg(series: ConcentrationSeries, options: Conce
     `<g clip-path="url(#${clip})">`,
     ...layout.curves.map((curve, i) => curveGroup(curve, paths[i]!, i, layout)),
     '</g>',
-    ...endLabels(layout, paths.map((p) => p[p.length - 1]?.[1] ?? frame.bottom)),
+    ...endLabels(
+      layout,
+      paths.map((p) => p[p.length - 1]?.[1] ?? frame.bottom),
+    ),
     ...drawnLegend.svg,
-    ...caption.map((line, k) => `<text x="${c(left)}" y="${c(frame.bottom + 46 + 13 * k)}" font-size="10" font-style="italic">${escapeXml(line)}</text>`),
+    ...caption.map(
+      (line, k) =>
+        `<text x="${c(left)}" y="${c(frame.bottom + 46 + 13 * k)}" font-size="10" font-style="italic">${escapeXml(line)}</text>`,
+    ),
     '</svg>',
   ].join('\n');
 }
@@ -69,7 +87,8 @@ function pixelPoints(layout: TimePlotLayout, times: readonly number[], curve: Pl
   for (let k = layout.firstIndex; k < times.length; k++) {
     const point: [number, number] = [layout.x(times[k]!), layout.y(curve.values[k]! * scale)];
     const last = out[out.length - 1];
-    if (last && k < times.length - 1 && Math.abs(point[0] - last[0]) < 0.7 && Math.abs(point[1] - last[1]) < 0.7) continue;
+    if (last && k < times.length - 1 && Math.abs(point[0] - last[0]) < 0.7 && Math.abs(point[1] - last[1]) < 0.7)
+      continue;
     out.push(point);
   }
   return out;
@@ -80,7 +99,10 @@ function curveGroup(curve: PlottedCurve, points: [number, number][], index: numb
   const { left, right } = layout.frame;
   // Markers staggered between curves, so that curves lying on top of each other still show theirs.
   const n = layout.curves.length;
-  const marks = Array.from({ length: MARKERS_PER_CURVE }, (_, k) => left + ((k + (index + 1) / (n + 1)) / MARKERS_PER_CURVE) * (right - left)).map((x) => markerSvg(curve.style.marker, x, yAt(points, x)));
+  const marks = Array.from(
+    { length: MARKERS_PER_CURVE },
+    (_, k) => left + ((k + (index + 1) / (n + 1)) / MARKERS_PER_CURVE) * (right - left),
+  ).map((x) => markerSvg(curve.style.marker, x, yAt(points, x)));
   const name = `${curveName(curve, 200).text}${curve.role ? ` (${curve.role.replace('_', ' ')})` : ''}`;
   return `<g data-species="${escapeXml(curve.species)}"><title>${escapeXml(name)}</title><path d="${d}" ${strokeAttributes(curve.style)}/>${marks.join('')}</g>`;
 }
@@ -101,19 +123,30 @@ function frameBox(layout: TimePlotLayout): string {
 
 function grid(layout: TimePlotLayout): string[] {
   const { left, right, top, bottom } = layout.frame;
-  const line = (x1: number, y1: number, x2: number, y2: number) => `<line x1="${c(x1)}" y1="${c(y1)}" x2="${c(x2)}" y2="${c(y2)}" stroke="#ddd" stroke-width="0.8"/>`;
-  return [...layout.timeTicks.major.map((t) => line(layout.x(t.value), top, layout.x(t.value), bottom)), ...layout.concentrationTicks.slice(1).map((t) => line(left, layout.y(t.value), right, layout.y(t.value)))];
+  const line = (x1: number, y1: number, x2: number, y2: number) =>
+    `<line x1="${c(x1)}" y1="${c(y1)}" x2="${c(x2)}" y2="${c(y2)}" stroke="#ddd" stroke-width="0.8"/>`;
+  return [
+    ...layout.timeTicks.major.map((t) => line(layout.x(t.value), top, layout.x(t.value), bottom)),
+    ...layout.concentrationTicks.slice(1).map((t) => line(left, layout.y(t.value), right, layout.y(t.value))),
+  ];
 }
 
 function axes(layout: TimePlotLayout): string[] {
   const { left, right, top, bottom } = layout.frame;
   const mid = (top + bottom) / 2;
-  const tick = (x1: number, y1: number, x2: number, y2: number) => `<line x1="${c(x1)}" y1="${c(y1)}" x2="${c(x2)}" y2="${c(y2)}" stroke="#000" stroke-width="1"/>`;
+  const tick = (x1: number, y1: number, x2: number, y2: number) =>
+    `<line x1="${c(x1)}" y1="${c(y1)}" x2="${c(x2)}" y2="${c(y2)}" stroke="#000" stroke-width="1"/>`;
   return [
     frameBox(layout),
-    ...layout.timeTicks.major.flatMap((t) => [tick(layout.x(t.value), bottom, layout.x(t.value), bottom + 5), `<text x="${c(layout.x(t.value))}" y="${c(bottom + 17)}" text-anchor="middle" font-size="10">${escapeXml(t.label)}</text>`]),
+    ...layout.timeTicks.major.flatMap((t) => [
+      tick(layout.x(t.value), bottom, layout.x(t.value), bottom + 5),
+      `<text x="${c(layout.x(t.value))}" y="${c(bottom + 17)}" text-anchor="middle" font-size="10">${escapeXml(t.label)}</text>`,
+    ]),
     ...layout.timeTicks.minor.map((v) => tick(layout.x(v), bottom, layout.x(v), bottom + 3)),
-    ...layout.concentrationTicks.flatMap((t) => [tick(left - 5, layout.y(t.value), left, layout.y(t.value)), `<text x="${c(left - 8)}" y="${c(layout.y(t.value) + 3.5)}" text-anchor="end" font-size="10">${escapeXml(t.label)}</text>`]),
+    ...layout.concentrationTicks.flatMap((t) => [
+      tick(left - 5, layout.y(t.value), left, layout.y(t.value)),
+      `<text x="${c(left - 8)}" y="${c(layout.y(t.value) + 3.5)}" text-anchor="end" font-size="10">${escapeXml(t.label)}</text>`,
+    ]),
     `<text x="18" y="${c(mid)}" text-anchor="middle" font-size="12" transform="rotate(-90 18 ${c(mid)})">${escapeXml(layout.concentrationLabel)}</text>`,
     `<text x="${c((left + right) / 2)}" y="${c(bottom + 32)}" text-anchor="middle" font-size="12">${escapeXml(layout.timeLabel)}</text>`,
   ];

@@ -14,10 +14,36 @@ export interface CurveStyle {
 }
 
 /** A marker's outline, and whether it is filled black or white. */
-export type MarkerShape = 'circle' | 'square' | 'triangle' | 'diamond' | 'circle-filled' | 'square-filled' | 'triangle-filled' | 'diamond-filled';
+export type MarkerShape =
+  | 'circle'
+  | 'square'
+  | 'triangle'
+  | 'diamond'
+  | 'circle-filled'
+  | 'square-filled'
+  | 'triangle-filled'
+  | 'diamond-filled';
 
-const DASHES: readonly (string | undefined)[] = [undefined, '8 4', '2 3', '10 3 2 3', '4 2', '14 4', '1.5 2.5 1.5 6', '6 2 1 2 1 2'];
-const MARKERS: readonly MarkerShape[] = ['circle', 'square-filled', 'triangle', 'diamond-filled', 'circle-filled', 'square', 'triangle-filled', 'diamond'];
+const DASHES: readonly (string | undefined)[] = [
+  undefined,
+  '8 4',
+  '2 3',
+  '10 3 2 3',
+  '4 2',
+  '14 4',
+  '1.5 2.5 1.5 6',
+  '6 2 1 2 1 2',
+];
+const MARKERS: readonly MarkerShape[] = [
+  'circle',
+  'square-filled',
+  'triangle',
+  'diamond-filled',
+  'circle-filled',
+  'square',
+  'triangle-filled',
+  'diamond',
+];
 
 /** The style of the i-th curve (0-based). */
 export function curveStyle(i: number): CurveStyle {

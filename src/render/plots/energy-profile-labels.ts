@@ -27,19 +27,28 @@ export function stateLabels(layout: ProfileLayout, marks: SpanMarks, withValues:
     const { lines, cut } = wrapTerms(speciesTerms(m.state.species), chars, 3);
     const full = speciesTerms(m.state.species).join(' + ');
     const tip = cut ? `<title>${escapeXml(full)}</title>` : '';
-    const spans = lines.map((line, k) => `<tspan x="${c(m.x)}" dy="${k === 0 ? 0 : LINE}">${escapeXml(line)}</tspan>`).join('');
+    const spans = lines
+      .map((line, k) => `<tspan x="${c(m.x)}" dy="${k === 0 ? 0 : LINE}">${escapeXml(line)}</tspan>`)
+      .join('');
     out.push(`<text x="${c(m.x)}" y="${c(m.y + 15)}" text-anchor="middle" ${HALO}>${tip}${spans}</text>`);
     if (withValues) {
       const tag = marks.tdi_state === m.state.index ? ' · TDI' : '';
-      out.push(`<text x="${c(m.x)}" y="${c(m.y - 6)}" text-anchor="middle" font-size="10" ${HALO}>${signedValue(m.value)}${tag}</text>`);
+      out.push(
+        `<text x="${c(m.x)}" y="${c(m.y - 6)}" text-anchor="middle" font-size="10" ${HALO}>${signedValue(m.value)}${tag}</text>`,
+      );
     }
   }
   for (const t of layout.transitions) {
     const tag = marks.tdts_state === t.state.index ? ' · TDTS' : '';
     const name = `‡ ${stepName(t.state.step)}${tag}`;
     const nameY = withValues ? t.y - 20 : t.y - 8;
-    out.push(`<text x="${c(t.x)}" y="${c(nameY)}" text-anchor="middle" font-style="italic" ${HALO}>${escapeXml(name)}</text>`);
-    if (withValues) out.push(`<text x="${c(t.x)}" y="${c(t.y - 7)}" text-anchor="middle" font-size="10" ${HALO}>${signedValue(t.value)}</text>`);
+    out.push(
+      `<text x="${c(t.x)}" y="${c(nameY)}" text-anchor="middle" font-style="italic" ${HALO}>${escapeXml(name)}</text>`,
+    );
+    if (withValues)
+      out.push(
+        `<text x="${c(t.x)}" y="${c(t.y - 7)}" text-anchor="middle" font-size="10" ${HALO}>${signedValue(t.value)}</text>`,
+      );
   }
   return out;
 }
@@ -71,10 +80,14 @@ export function overallChange(layout: ProfileLayout, profile: EnergyProfile, arr
   const x = last.x + layout.plateau / 2 + 20;
   // The starting level is carried only across the last step, to where the arrow needs it.
   const from = layout.transitions[layout.transitions.length - 1]?.x ?? first.x;
-  const out = [`<line x1="${c(from)}" y1="${c(first.y)}" x2="${c(x + 6)}" y2="${c(first.y)}" stroke="#555" stroke-width="0.8" stroke-dasharray="1 3"/>`];
+  const out = [
+    `<line x1="${c(from)}" y1="${c(first.y)}" x2="${c(x + 6)}" y2="${c(first.y)}" stroke="#555" stroke-width="0.8" stroke-dasharray="1 3"/>`,
+  ];
   if (Math.abs(last.y - first.y) >= 12) {
     const end = last.y + (last.y > first.y ? -4 : 4);
-    out.push(`<line x1="${c(x)}" y1="${c(first.y)}" x2="${c(x)}" y2="${c(end)}" stroke="#000" stroke-width="1.2" marker-end="url(#${arrowId})"/>`);
+    out.push(
+      `<line x1="${c(x)}" y1="${c(first.y)}" x2="${c(x)}" y2="${c(end)}" stroke="#000" stroke-width="1.2" marker-end="url(#${arrowId})"/>`,
+    );
   }
   const mid = (first.y + last.y) / 2;
   out.push(

@@ -97,8 +97,11 @@ function caption(layout: ProfileLayout, profile: PlottedProfile, schematic: bool
 
 function describe(profile: PlottedProfile, schematic: boolean): string {
   const steps = profile.states.filter((s) => s.kind === 'transition').length;
-  const parts = [`${BASIS_NAME[profile.basis]} profile of ${steps} elementary step${steps === 1 ? '' : 's'}${schematic ? `, ${schematicNote(profile)}` : ''}`];
-  if (!schematic && profile.overall_change !== undefined) parts.push(`overall change ${signedValue(profile.overall_change)} kJ/mol (${profile.direction})`);
+  const parts = [
+    `${BASIS_NAME[profile.basis]} profile of ${steps} elementary step${steps === 1 ? '' : 's'}${schematic ? `, ${schematicNote(profile)}` : ''}`,
+  ];
+  if (!schematic && profile.overall_change !== undefined)
+    parts.push(`overall change ${signedValue(profile.overall_change)} kJ/mol (${profile.direction})`);
   if (!schematic && profile.span !== undefined) parts.push(`energetic span ${signedValue(profile.span)} kJ/mol`);
   return parts.join('; ');
 }

@@ -19,7 +19,11 @@ export function coordinate(x: number): string {
  * Wraps terms into lines of at most `maxChars`, breaking only between terms (continuation lines
  * start with "+ "); a term too long for a line, or lines beyond `maxLines`, are cut with "…".
  */
-export function wrapTerms(terms: readonly string[], maxChars: number, maxLines: number): { lines: string[]; cut: boolean } {
+export function wrapTerms(
+  terms: readonly string[],
+  maxChars: number,
+  maxLines: number,
+): { lines: string[]; cut: boolean } {
   const width = Math.max(4, Math.floor(maxChars));
   const lines: string[] = [];
   let cut = false;

@@ -21,7 +21,9 @@ export function derivationText(checked: DerivedRecord): string {
   const mechanism = derivation?.mechanism;
   if (!mechanism) return lines.join('\n') + '\nThe steps could not be read; see the problems below.\n';
   const sigma = derivation.stoichiometricNumbers;
-  lines.push(`Steps${sigma ? ` and stoichiometric numbers σ (${derivation.routeSource === 'given' ? 'given' : 'derived'})` : ''}:`);
+  lines.push(
+    `Steps${sigma ? ` and stoichiometric numbers σ (${derivation.routeSource === 'given' ? 'given' : 'derived'})` : ''}:`,
+  );
   const width = Math.max(...mechanism.steps.map((s) => s.text.length));
   for (const step of mechanism.steps) {
     const mark = step.rds ? '  rate-determining' : '';
@@ -30,7 +32,10 @@ export function derivationText(checked: DerivedRecord): string {
   }
   if (derivation.overall) {
     const { overall } = derivation;
-    const over = overall.catalysts.length > 0 ? `   (catalyst${overall.catalysts.length > 1 ? 's' : ''}: ${overall.catalysts.join(', ')})` : '';
+    const over =
+      overall.catalysts.length > 0
+        ? `   (catalyst${overall.catalysts.length > 1 ? 's' : ''}: ${overall.catalysts.join(', ')})`
+        : '';
     lines.push('', `Overall: ${overall.text}${over}`);
   }
   if (derivation.roles) {
@@ -41,6 +46,10 @@ export function derivationText(checked: DerivedRecord): string {
     }
   }
   lines.push(...rateLawLines(derivation), ...energyLines(derivation), ...simulationLines(derivation));
-  lines.push('', 'Derived rate laws are models; decisions on scale-up, thermal hazards or exposure rest with', 'calorimetry, local codes and licensed practice.');
+  lines.push(
+    '',
+    'Derived rate laws are models; decisions on scale-up, thermal hazards or exposure rest with',
+    'calorimetry, local codes and licensed practice.',
+  );
   return lines.join('\n') + '\n';
 }

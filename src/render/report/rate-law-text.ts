@@ -11,7 +11,10 @@ export function rateLawLines(derivation: Derivation): string[] {
     for (const step of derived.presented?.trace ?? []) lines.push(`  · ${step.say}:`, `      ${step.text}`);
     if (derived.presented) {
       lines.push(`  r = ${derived.presented.text}`);
-      if (derived.presented.grouped) lines.push(`    = ${derived.presented.grouped.text}   with ${derived.presented.grouped.name} = ${derived.presented.grouped.valueText}`);
+      if (derived.presented.grouped)
+        lines.push(
+          `    = ${derived.presented.grouped.text}   with ${derived.presented.grouped.name} = ${derived.presented.grouped.valueText}`,
+        );
     } else {
       lines.push('  no closed form: the steady state is solved numerically at each observation with constants');
     }
@@ -21,8 +24,15 @@ export function rateLawLines(derivation: Derivation): string[] {
   if (checks.length > 0) {
     lines.push('', 'Observations:');
     for (const c of checks) {
-      const predicted = c.predicted !== undefined ? `predicted ${c.predicted}${c.basis === 'conditions' ? ' at its conditions' : ''}` : c.range ? `predicted between ${c.range[0]} and ${c.range[1]} (consistent for some constants if inside)` : 'no prediction';
-      lines.push(`  ${c.status.padEnd(7)} ${c.observation}  order in ${c.species} ${c.observed} ± ${c.tolerance}; ${predicted}  [${c.method}]`);
+      const predicted =
+        c.predicted !== undefined
+          ? `predicted ${c.predicted}${c.basis === 'conditions' ? ' at its conditions' : ''}`
+          : c.range
+            ? `predicted between ${c.range[0]} and ${c.range[1]} (consistent for some constants if inside)`
+            : 'no prediction';
+      lines.push(
+        `  ${c.status.padEnd(7)} ${c.observation}  order in ${c.species} ${c.observed} ± ${c.tolerance}; ${predicted}  [${c.method}]`,
+      );
     }
   }
   return lines;
@@ -30,12 +40,15 @@ export function rateLawLines(derivation: Derivation): string[] {
 
 function orderLines(derived: DerivedRateLaw): string[] {
   if (derived.orders.size === 0) return [];
-  const rows = [...derived.orders].map(([sp, o]) => (o.low.equals(o.high) ? `${sp} ${o.low}` : `${sp} ${o.low} → ${o.high}`));
+  const rows = [...derived.orders].map(([sp, o]) =>
+    o.low.equals(o.high) ? `${sp} ${o.low}` : `${sp} ${o.low} → ${o.high}`,
+  );
   return [`  orders (low → high concentration): ${rows.join('; ')}`];
 }
 
 function restingLines(derived: DerivedRateLaw): string[] {
   return derived.restingStates.map(
-    (r) => `  resting state at ${r.observation}: ${r.species === r.catalyst ? `free ${r.species}` : r.species} holds ${(r.fraction * 100).toFixed(0)} % of all ${r.catalyst}`,
+    (r) =>
+      `  resting state at ${r.observation}: ${r.species === r.catalyst ? `free ${r.species}` : r.species} holds ${(r.fraction * 100).toFixed(0)} % of all ${r.catalyst}`,
   );
 }

@@ -2,8 +2,23 @@
  * The JSON report of one record (DESIGN.md "Contracts"): snake_case keys, additive only.
  * Pure: built from a loaded record and its derivation; the CLI and the site both use it.
  */
-import type { Derivation, DerivedRateLaw, ObservationCheck, Polynomial, Rational, SimulationCheck } from '../../engine/index.ts';
-import type { Diagnostic, DiagnosticJson, ObservationJson, RateLawJson, RecordReport, SimulationJson, TermJson } from '../../model/index.ts';
+import type {
+  Derivation,
+  DerivedRateLaw,
+  ObservationCheck,
+  Polynomial,
+  Rational,
+  SimulationCheck,
+} from '../../engine/index.ts';
+import type {
+  Diagnostic,
+  DiagnosticJson,
+  ObservationJson,
+  RateLawJson,
+  RecordReport,
+  SimulationJson,
+  TermJson,
+} from '../../model/index.ts';
 
 export interface RecordInput {
   id: string;
@@ -21,7 +36,12 @@ export function recordReport(input: RecordInput): RecordReport {
   if (record) Object.assign(out, { title: record.title, system: record.system, status: record.status });
   if (derivation?.overall) {
     const { overall } = derivation;
-    out.overall = { reactants: coefficients(overall.reactants), products: coefficients(overall.products), catalysts: overall.catalysts, text: overall.text };
+    out.overall = {
+      reactants: coefficients(overall.reactants),
+      products: coefficients(overall.products),
+      catalysts: overall.catalysts,
+      text: overall.text,
+    };
   }
   if (derivation?.stoichiometricNumbers) {
     out.stoichiometric_numbers = derivation.stoichiometricNumbers;
@@ -56,12 +76,17 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
   const { law, presented } = derived;
   const out: RateLawJson = {
     method: law.method,
-    orders: Object.fromEntries([...derived.orders].map(([sp, o]) => [sp, { low: o.low.toJSON(), high: o.high.toJSON() }])),
+    orders: Object.fromEntries(
+      [...derived.orders].map(([sp, o]) => [sp, { low: o.low.toJSON(), high: o.high.toJSON() }]),
+    ),
     derivation: [...law.trace, ...(presented?.trace ?? [])],
   };
   if (presented) {
     Object.assign(out, { text: presented.text, latex: presented.latex });
-    out.structure = { numerator: termsJson(presented.expression.numerator), denominator: termsJson(presented.expression.denominator) };
+    out.structure = {
+      numerator: termsJson(presented.expression.numerator),
+      denominator: termsJson(presented.expression.denominator),
+    };
   }
   if (presented?.grouped) {
     const g = presented.grouped;
@@ -69,7 +94,11 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
   }
   if (law.absorbed.length > 0) out.absorbed = law.absorbed;
   if (law.catalystBalances.length > 0) {
-    out.catalyst_balances = law.catalystBalances.map((b) => ({ catalyst: b.catalyst, total: b.total, forms: b.forms.map((f) => ({ species: f.species, fraction: f.text, fraction_latex: f.latex })) }));
+    out.catalyst_balances = law.catalystBalances.map((b) => ({
+      catalyst: b.catalyst,
+      total: b.total,
+      forms: b.forms.map((f) => ({ species: f.species, fraction: f.text, fraction_latex: f.latex })),
+    }));
   }
   if (derived.restingStates.length > 0) out.resting_states = derived.restingStates;
   if (!law.expression) out.numeric_only = true;
@@ -77,19 +106,35 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
 }
 
 function termsJson(p: Polynomial): TermJson[] {
-  return p.terms.map((t) => ({ coefficient: t.coefficient.toJSON(), factors: Object.fromEntries(t.monomial.factors.map(([symbol, e]) => [symbol, e.toJSON()])) }));
+  return p.terms.map((t) => ({
+    coefficient: t.coefficient.toJSON(),
+    factors: Object.fromEntries(t.monomial.factors.map(([symbol, e]) => [symbol, e.toJSON()])),
+  }));
 }
 
 /** An observation check in the report's shape. */
 export function observationJson(check: ObservationCheck): ObservationJson {
-  const out: ObservationJson = { id: check.observation, species: check.species, method: check.method, observed: check.observed, tolerance: check.tolerance, basis: check.basis, status: check.status };
+  const out: ObservationJson = {
+    id: check.observation,
+    species: check.species,
+    method: check.method,
+    observed: check.observed,
+    tolerance: check.tolerance,
+    basis: check.basis,
+    status: check.status,
+  };
   if (check.predicted !== undefined) out.predicted = check.predicted;
   if (check.range) out.range = check.range;
   return out;
 }
 
 function simulationJson(check: SimulationCheck): SimulationJson {
-  const out: SimulationJson = { observation: check.observation, status: check.status, orders: check.orders, approximation_error: check.approximationError };
+  const out: SimulationJson = {
+    observation: check.observation,
+    status: check.status,
+    orders: check.orders,
+    approximation_error: check.approximationError,
+  };
   if (check.message !== undefined) out.message = check.message;
   if (check.initialRate !== undefined) out.initial_rate = Number(check.initialRate.toPrecision(6));
   if (check.time !== undefined) out.time_s = Number(check.time.toPrecision(4));

@@ -15,7 +15,12 @@ export function sarifReport(report: CatalogueReport): string {
         {
           physicalLocation: {
             artifactLocation: { uri: d.file ?? r.file },
-            region: { startLine: d.line ?? 1, startColumn: d.column ?? 1, ...(d.end_line && { endLine: d.end_line }), ...(d.end_column && { endColumn: d.end_column }) },
+            region: {
+              startLine: d.line ?? 1,
+              startColumn: d.column ?? 1,
+              ...(d.end_line && { endLine: d.end_line }),
+              ...(d.end_column && { endColumn: d.end_column }),
+            },
           },
         },
       ],
@@ -24,7 +29,12 @@ export function sarifReport(report: CatalogueReport): string {
   const log = {
     version: '2.1.0',
     $schema: 'https://json.schemastore.org/sarif-2.1.0.json',
-    runs: [{ tool: { driver: { name: 'mechatlas', version: report.tool.version, rules: RULE_IDS.map((id) => ({ id })) } }, results }],
+    runs: [
+      {
+        tool: { driver: { name: 'mechatlas', version: report.tool.version, rules: RULE_IDS.map((id) => ({ id })) } },
+        results,
+      },
+    ],
   };
   return JSON.stringify(log, null, 2) + '\n';
 }

@@ -3,7 +3,14 @@
  * for each observation the simulated initial rate and when it was read, the apparent orders by
  * simulation, each rate law's relative error, and why an approximation fails where it does.
  */
-import { CONVERSION_FOR_INITIAL_RATE, DEFAULT_APPROXIMATION_THRESHOLD, forwardConstant, reverseConstant, type Derivation, type Mechanism } from '../../engine/index.ts';
+import {
+  CONVERSION_FOR_INITIAL_RATE,
+  DEFAULT_APPROXIMATION_THRESHOLD,
+  forwardConstant,
+  reverseConstant,
+  type Derivation,
+  type Mechanism,
+} from '../../engine/index.ts';
 import { methodLaw, percentText, plainNumber, rateConstantUnit } from '../words/index.ts';
 
 const WIDTH = 100;
@@ -13,10 +20,22 @@ export function simulationLines(derivation: Derivation): string[] {
   const checks = derivation.simulation ?? [];
   const mechanism = derivation.mechanism;
   if (checks.length === 0 || !mechanism) return [];
-  const lines = ['', `Simulation (full mass-action kinetics; the initial rate is read at ${CONVERSION_FOR_INITIAL_RATE * 100} % conversion):`];
+  const lines = [
+    '',
+    `Simulation (full mass-action kinetics; the initial rate is read at ${CONVERSION_FOR_INITIAL_RATE * 100} % conversion):`,
+  ];
   lines.push(...wrap(['rate constants:', ...constantList(mechanism, derivation.constants ?? new Map())], '  ', '    '));
   const fromEnergies = derivation.constantsFromEnergies ?? [];
-  if (fromEnergies.length > 0) lines.push(...wrap(words(`from the step energies by the Eyring equation: step${fromEnergies.length > 1 ? 's' : ''} ${fromEnergies.join(', ')}`), '  ', '    '));
+  if (fromEnergies.length > 0)
+    lines.push(
+      ...wrap(
+        words(
+          `from the step energies by the Eyring equation: step${fromEnergies.length > 1 ? 's' : ''} ${fromEnergies.join(', ')}`,
+        ),
+        '  ',
+        '    ',
+      ),
+    );
   checks.forEach((check, index) => {
     lines.push(`  observation ${check.observation}:`);
     if (check.status !== 'ok') {
@@ -28,9 +47,13 @@ export function simulationLines(derivation: Derivation): string[] {
     if (orders.length > 0) lines.push(`    orders by simulation: ${orders.join(', ')}`);
     for (const [method, error] of Object.entries(check.approximationError)) {
       const verdict = error > DEFAULT_APPROXIMATION_THRESHOLD ? 'beyond' : 'within';
-      lines.push(`    ${methodLaw(method)}: off by ${percentText(error)} (${verdict} ${percentText(DEFAULT_APPROXIMATION_THRESHOLD)})`);
+      lines.push(
+        `    ${methodLaw(method)}: off by ${percentText(error)} (${verdict} ${percentText(DEFAULT_APPROXIMATION_THRESHOLD)})`,
+      );
     }
-    const invalid = derivation.diagnostics.filter((d) => d.rule === 'approximation/invalid' && d.path?.[0] === 'observations' && d.path[1] === index);
+    const invalid = derivation.diagnostics.filter(
+      (d) => d.rule === 'approximation/invalid' && d.path?.[0] === 'observations' && d.path[1] === index,
+    );
     for (const d of invalid) lines.push(...wrap(words(`approximation/invalid: ${d.message}`), '    ', '      '));
   });
   return lines;
@@ -43,8 +66,13 @@ function constantList(mechanism: Mechanism, values: ReadonlyMap<string, number>)
     const order = (side: typeof step.reactants) => side.reduce((n, t) => n + t.coefficient.toNumber(), 0);
     const k = values.get(forwardConstant(step.label));
     const kRev = values.get(reverseConstant(step.label));
-    parts.push(`${forwardConstant(step.label)} = ${k === undefined ? '?' : `${plainNumber(k)} ${rateConstantUnit(order(step.reactants))}`}`);
-    if (step.reversible) parts.push(`${reverseConstant(step.label)} = ${kRev === undefined ? '?' : `${plainNumber(kRev)} ${rateConstantUnit(order(step.products))}`}`);
+    parts.push(
+      `${forwardConstant(step.label)} = ${k === undefined ? '?' : `${plainNumber(k)} ${rateConstantUnit(order(step.reactants))}`}`,
+    );
+    if (step.reversible)
+      parts.push(
+        `${reverseConstant(step.label)} = ${kRev === undefined ? '?' : `${plainNumber(kRev)} ${rateConstantUnit(order(step.products))}`}`,
+      );
   }
   return parts.map((p, i) => (i < parts.length - 1 ? `${p};` : p));
 }

@@ -6,7 +6,9 @@ import type { DiagnosticJson } from '../../model/index.ts';
 export function textReport(report: CatalogueReport): string {
   const rows = report.records.flatMap((r) => r.diagnostics.map((d) => ({ ...d, file: d.file ?? r.file })));
   rows.sort(byPosition);
-  const lines = rows.map((d) => [`${d.file}:${d.line ?? 1}:${d.column ?? 1}`, d.severity, d.message, d.rule].join('  '));
+  const lines = rows.map((d) =>
+    [`${d.file}:${d.line ?? 1}:${d.column ?? 1}`, d.severity, d.message, d.rule].join('  '),
+  );
   lines.push(summaryLine(report));
   return lines.join('\n') + '\n';
 }
@@ -20,5 +22,7 @@ export function summaryLine(report: CatalogueReport): string {
 
 /** Orders diagnostics by file, then line, then column. */
 export function byPosition(a: DiagnosticJson, b: DiagnosticJson): number {
-  return (a.file ?? '').localeCompare(b.file ?? '') || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0);
+  return (
+    (a.file ?? '').localeCompare(b.file ?? '') || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0)
+  );
 }

@@ -5,12 +5,24 @@
  * every step a reaction whose kinetic law (in extent per time: the compartment size times the
  * mass-action rate) is written in MathML.
  */
-import { CONCENTRATION, parseQuantity, sameDimension, toCanonical, type Mechanism, type Step } from '../../engine/index.ts';
+import {
+  CONCENTRATION,
+  parseQuantity,
+  sameDimension,
+  toCanonical,
+  type Mechanism,
+  type Step,
+} from '../../engine/index.ts';
 import type { MechanismRecord } from '../../model/index.ts';
 import { sbmlIds } from './sbml-ids.ts';
 
 /** The SBML document as a string; constants given or from energies, by symbol (k_1, k_-1). */
-export function sbmlDocument(id: string, record: MechanismRecord, mechanism: Mechanism, constants: ReadonlyMap<string, number>): string {
+export function sbmlDocument(
+  id: string,
+  record: MechanismRecord,
+  mechanism: Mechanism,
+  constants: ReadonlyMap<string, number>,
+): string {
   const ids = sbmlIds([...mechanism.species.keys()]);
   const start = startingConcentrations(record, [...mechanism.species.keys()]);
   const species = [...mechanism.species.values()].map((s) => {
@@ -49,11 +61,22 @@ export function sbmlDocument(id: string, record: MechanismRecord, mechanism: Mec
 }
 
 function reaction(step: Step, ids: ReadonlyMap<string, string>): string {
-  const refs = (terms: Step['reactants']) => terms.map((t) => `          <speciesReference species="${ids.get(t.species)}" stoichiometry="${t.coefficient.toNumber()}" constant="true"/>`);
+  const refs = (terms: Step['reactants']) =>
+    terms.map(
+      (t) =>
+        `          <speciesReference species="${ids.get(t.species)}" stoichiometry="${t.coefficient.toNumber()}" constant="true"/>`,
+    );
   const side = (name: string, terms: Step['reactants']) =>
-    [`          <ci> ${parameterId(name)} </ci>`, ...terms.flatMap((t) => Array.from({ length: t.coefficient.toNumber() }, () => `          <ci> ${ids.get(t.species)} </ci>`))].join('\n');
+    [
+      `          <ci> ${parameterId(name)} </ci>`,
+      ...terms.flatMap((t) =>
+        Array.from({ length: t.coefficient.toNumber() }, () => `          <ci> ${ids.get(t.species)} </ci>`),
+      ),
+    ].join('\n');
   const forward = `<apply><times/>\n${side(`k_${step.label}`, step.reactants)}\n        </apply>`;
-  const rate = step.reversible ? `<apply><minus/>\n        ${forward}\n        <apply><times/>\n${side(`k_-${step.label}`, step.products)}\n        </apply></apply>` : forward;
+  const rate = step.reversible
+    ? `<apply><minus/>\n        ${forward}\n        <apply><times/>\n${side(`k_-${step.label}`, step.products)}\n        </apply></apply>`
+    : forward;
   return [
     `      <reaction id="r_${parameterId(step.label)}" name="step ${xml(step.label)}: ${xml(step.text)}" reversible="${step.reversible}">`,
     '        <listOfReactants>',
@@ -82,7 +105,8 @@ function startingConcentrations(record: MechanismRecord, symbols: string[]): Map
   const first = (record.observations ?? []).find((o) => o.concentrations);
   for (const [sp, text] of Object.entries(first?.concentrations ?? {})) {
     const q = parseQuantity(text);
-    if (symbols.includes(sp) && !('error' in q) && sameDimension(q.quantity.unit.dimension, CONCENTRATION)) out.set(sp, toCanonical(q.quantity));
+    if (symbols.includes(sp) && !('error' in q) && sameDimension(q.quantity.unit.dimension, CONCENTRATION))
+      out.set(sp, toCanonical(q.quantity));
   }
   return out;
 }
@@ -98,5 +122,10 @@ function num(x: number): string {
 }
 
 function xml(text: string): string {
-  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&apos;');
+  return text
+    .replace(/&/g, '&amp;')
+    .replace(/</g, '&lt;')
+    .replace(/>/g, '&gt;')
+    .replace(/"/g, '&quot;')
+    .replace(/'/g, '&apos;');
 }

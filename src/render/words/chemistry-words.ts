@@ -9,13 +9,15 @@ const METHODS: Readonly<Record<string, { name: string; short: string; law: strin
     name: 'rate-determining step with fast pre-equilibria',
     short: 'pre-equilibrium',
     law: 'rate-determining-step law',
-    about: 'The rate is that of the rate-determining step; each intermediate before it is eliminated through the reversible steps treated as equilibria.',
+    about:
+      'The rate is that of the rate-determining step; each intermediate before it is eliminated through the reversible steps treated as equilibria.',
   },
   steady_state: {
     name: 'steady-state approximation',
     short: 'steady state',
     law: 'steady-state law',
-    about: 'Every intermediate is taken to be at steady state (its net rate of formation is zero); conserved catalysts enter through their total concentration.',
+    about:
+      'Every intermediate is taken to be at steady state (its net rate of formation is zero); conserved catalysts enter through their total concentration.',
   },
 };
 
@@ -46,7 +48,15 @@ export function capitalised(text: string): string {
 }
 
 /** Roles in the order a reader looks for them: what goes in, what comes out, what carries the reaction, the rest. */
-export const ROLE_ORDER = ['reactant', 'product', 'catalyst', 'intermediate', 'inhibitor', 'third_body', 'solvent'] as const;
+export const ROLE_ORDER = [
+  'reactant',
+  'product',
+  'catalyst',
+  'intermediate',
+  'inhibitor',
+  'third_body',
+  'solvent',
+] as const;
 
 /** A role in words (`third_body` → "third body"); `fallback` where no role was derived. */
 export function roleWords(role: string | undefined, fallback = 'no role derived'): string {

@@ -18,14 +18,23 @@ export function equationLatex(equation: string): string | undefined {
 }
 
 /** `2\,\mathrm{H_2O_2} \xrightarrow{\mathrm{I^-}} 2\,\mathrm{H_2O} + \mathrm{O_2}`: catalysts over the arrow. */
-export function overallLatex(reactants: ReadonlyMap<string, Rational>, products: ReadonlyMap<string, Rational>, catalysts: readonly string[]): string {
-  const arrow = catalysts.length > 0 ? `\\xrightarrow{${catalysts.map(speciesLatex).join(',\\,')}}` : '\\longrightarrow';
+export function overallLatex(
+  reactants: ReadonlyMap<string, Rational>,
+  products: ReadonlyMap<string, Rational>,
+  catalysts: readonly string[],
+): string {
+  const arrow =
+    catalysts.length > 0 ? `\\xrightarrow{${catalysts.map(speciesLatex).join(',\\,')}}` : '\\longrightarrow';
   return `${sideLatex([...reactants].map(([species, coefficient]) => ({ species, coefficient })))} ${arrow} ${sideLatex([...products].map(([species, coefficient]) => ({ species, coefficient })))}`;
 }
 
 function sideLatex(terms: readonly Pick<Term, 'species' | 'coefficient'>[]): string {
   if (terms.length === 0) return '\\varnothing';
-  return terms.map((t) => `${t.coefficient.equals(Rational.ONE) ? '' : `${t.coefficient.toString()}\\,`}${speciesLatex(t.species)}`).join(' + ');
+  return terms
+    .map(
+      (t) => `${t.coefficient.equals(Rational.ONE) ? '' : `${t.coefficient.toString()}\\,`}${speciesLatex(t.species)}`,
+    )
+    .join(' + ');
 }
 
 /** The LaTeX of a grouped constant's name (`k_obs` → `k_\mathrm{obs}`). */

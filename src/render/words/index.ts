@@ -1,7 +1,33 @@
 /** Display words and number formats: what the terminal, the pull-request report, the figures and the pages call things. */
-export { ROLE_ORDER, SEVERITIES, capitalised, methodAbout, methodLaw, methodName, methodShort, molecularityText, plural, roleRank, roleWords, severityCount, severityWord, verdictMark } from './chemistry-words.ts';
+export {
+  ROLE_ORDER,
+  SEVERITIES,
+  capitalised,
+  methodAbout,
+  methodLaw,
+  methodName,
+  methodShort,
+  molecularityText,
+  plural,
+  roleRank,
+  roleWords,
+  severityCount,
+  severityWord,
+  verdictMark,
+} from './chemistry-words.ts';
 export { constantNameLatex, equationLatex, overallLatex } from './equation-latex.ts';
-export { limitsText, numberText, orderText, percentText, plainNumber, quantityText, rateConstantUnit, signedValue, superscript, trueMinus } from './numbers.ts';
+export {
+  limitsText,
+  numberText,
+  orderText,
+  percentText,
+  plainNumber,
+  quantityText,
+  rateConstantUnit,
+  signedValue,
+  superscript,
+  trueMinus,
+} from './numbers.ts';
 export { predictionText } from './predictions.ts';
 export { speciesTerms } from './species-terms.ts';
 export { speciesLatex, symbolLatex } from '../../engine/index.ts';

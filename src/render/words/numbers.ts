@@ -75,7 +75,10 @@ export function limitsText(low: number | string, high: number | string): string 
 export function quantityText(text: string): string {
   return text
     .replace(/\+\/-/g, '±')
-    .replace(/^([+-]?(?:\d+\.?\d*|\.\d+))[eE]([+-]?\d+)/, (_, m: string, e: string) => `${m} × 10${superscript(String(Number(e)))}`)
+    .replace(
+      /^([+-]?(?:\d+\.?\d*|\.\d+))[eE]([+-]?\d+)/,
+      (_, m: string, e: string) => `${m} × 10${superscript(String(Number(e)))}`,
+    )
     .replace(/\^\(?([+-]?\d+)\)?/g, (_, e: string) => superscript(e));
 }
 

@@ -6,5 +6,7 @@ import { orderText } from './numbers.ts';
 export function predictionText(check: ObservationJson): string {
   if (check.range) return `${orderText(check.range[0])} to ${orderText(check.range[1])} (depends on the constants)`;
   if (check.predicted === undefined) return '—';
-  return check.basis === 'limits' ? `${orderText(check.predicted)} (at any conditions)` : `${orderText(check.predicted)} at these conditions`;
+  return check.basis === 'limits'
+    ? `${orderText(check.predicted)} (at any conditions)`
+    : `${orderText(check.predicted)} at these conditions`;
 }

@@ -16,11 +16,47 @@ describe('determinant (Bareiss)', () => {
   it.each([
     ['0×0', [], '1'],
     ['1×1', [['x + 1']], 'x + 1'],
-    ['2×2 symbolic', [['a', 'b'], ['c', 'd']], 'a*d - b*c'],
-    ['zero first pivot (one swap)', [['0', 'x'], ['y', '0']], '-x*y'],
-    ['zero pivot in the middle', [['1', '1', '1'], ['1', '1', '2'], ['1', '2', '3']], '-1'],
-    ['singular', [['x', 'y'], ['2*x', '2*y']], '0'],
-    ['zero column', [['0', 'x'], ['0', 'y']], '0'],
+    [
+      '2×2 symbolic',
+      [
+        ['a', 'b'],
+        ['c', 'd'],
+      ],
+      'a*d - b*c',
+    ],
+    [
+      'zero first pivot (one swap)',
+      [
+        ['0', 'x'],
+        ['y', '0'],
+      ],
+      '-x*y',
+    ],
+    [
+      'zero pivot in the middle',
+      [
+        ['1', '1', '1'],
+        ['1', '1', '2'],
+        ['1', '2', '3'],
+      ],
+      '-1',
+    ],
+    [
+      'singular',
+      [
+        ['x', 'y'],
+        ['2*x', '2*y'],
+      ],
+      '0',
+    ],
+    [
+      'zero column',
+      [
+        ['0', 'x'],
+        ['0', 'y'],
+      ],
+      '0',
+    ],
     // Vandermonde determinant: Π_{i<j} (x_j − x_i), a standard identity.
     ['3×3 Vandermonde', vandermondeText(['x', 'y', 'z']), '(y - x)*(z - x)*(z - y)'],
   ] as [string, string[][], string][])('%s', (_, rows, expected) => {
@@ -41,14 +77,25 @@ describe('solveLinear (Cramer with Bareiss determinants)', () => {
   it('gives the Briggs–Haldane steady state of E + S ⇌ ES → E + P', () => {
     // Unknowns [E], [ES]: d[ES]/dt = k1[S][E] − (k_-1 + k2)[ES] = 0 and [E] + [ES] = [E]_T.
     // Briggs & Haldane (1925): [ES] = k1[S][E]_T / (k_-1 + k2 + k1[S]).
-    const a = matrix([['k1*S', '-(km1 + k2)'], ['1', '1']]);
+    const a = matrix([
+      ['k1*S', '-(km1 + k2)'],
+      ['1', '1'],
+    ]);
     const [e, es] = solveLinear(a, [poly('0'), poly('ET')])!;
     expect(es!.equals(rf('k1*S*ET/(km1 + k2 + k1*S)'))).toBe(true);
     expect(e!.equals(rf('(km1 + k2)*ET/(km1 + k2 + k1*S)'))).toBe(true);
   });
 
   it('is undefined for a singular system', () => {
-    expect(solveLinear(matrix([['x', 'y'], ['2*x', '2*y']]), [poly('1'), poly('2')])).toBeUndefined();
+    expect(
+      solveLinear(
+        matrix([
+          ['x', 'y'],
+          ['2*x', '2*y'],
+        ]),
+        [poly('1'), poly('2')],
+      ),
+    ).toBeUndefined();
   });
 });
 
@@ -63,9 +110,12 @@ describe('Bareiss properties (random small polynomial matrices)', () => {
 
   it('det(A·B) = det(A)·det(B)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 3 }).chain((n) => fc.tuple(arbMatrix(n), arbMatrix(n))), ([a, b]) => {
-        expect(determinant(times(a, b)).equals(determinant(a).mul(determinant(b)))).toBe(true);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 3 }).chain((n) => fc.tuple(arbMatrix(n), arbMatrix(n))),
+        ([a, b]) => {
+          expect(determinant(times(a, b)).equals(determinant(a).mul(determinant(b)))).toBe(true);
+        },
+      ),
       { numRuns: 25 },
     );
   });

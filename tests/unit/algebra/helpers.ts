@@ -97,9 +97,13 @@ export const arbCoefficient = fc
   .map(([n, d]) => Rational.of(n, d));
 
 /** Ordinary monomials in x, y, z of degree at most 2 in each. */
-export const arbMonomial = fc
-  .tuple(fc.nat(2), fc.nat(2), fc.nat(2))
-  .map(([a, b, c]) => Monomial.fromFactors([['x', a], ['y', b], ['z', c]]));
+export const arbMonomial = fc.tuple(fc.nat(2), fc.nat(2), fc.nat(2)).map(([a, b, c]) =>
+  Monomial.fromFactors([
+    ['x', a],
+    ['y', b],
+    ['z', c],
+  ]),
+);
 
 /** Monomials with negative and fractional exponents, for the generalised (Laurent–Puiseux) ring. */
 export const arbGeneralMonomial = fc

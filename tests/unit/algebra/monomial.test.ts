@@ -45,7 +45,11 @@ describe('Monomial', () => {
   });
 
   it('raises to rational powers and tests divisibility', () => {
-    expect(m(['O2', 1], ['k', 2]).pow(q(1, 2)).equals(m(['O2', q(1, 2)], ['k', 1]))).toBe(true);
+    expect(
+      m(['O2', 1], ['k', 2])
+        .pow(q(1, 2))
+        .equals(m(['O2', q(1, 2)], ['k', 1])),
+    ).toBe(true);
     expect(m(['x', 1]).divides(m(['x', 2], ['y', 1]))).toBe(true);
     expect(m(['x', 1], ['z', 1]).divides(m(['x', 2], ['y', 1]))).toBe(false);
   });
@@ -65,10 +69,30 @@ describe('Monomial', () => {
 
   it('evaluates numerically and exactly', () => {
     const a = m(['x', 2], ['y', q(1, 2)], ['z', -1]);
-    expect(a.evaluate(new Map([['x', 3], ['y', 4], ['z', 2]]))).toBeCloseTo(9, 12);
-    const exact = new Map([['x', q(3)], ['y', q(9, 4)], ['z', q(2)]]);
+    expect(
+      a.evaluate(
+        new Map([
+          ['x', 3],
+          ['y', 4],
+          ['z', 2],
+        ]),
+      ),
+    ).toBeCloseTo(9, 12);
+    const exact = new Map([
+      ['x', q(3)],
+      ['y', q(9, 4)],
+      ['z', q(2)],
+    ]);
     expect(a.evaluateExact(exact)?.toString()).toBe('27/4');
-    expect(a.evaluateExact(new Map([['x', q(3)], ['y', q(2)], ['z', q(2)]]))).toBeUndefined();
+    expect(
+      a.evaluateExact(
+        new Map([
+          ['x', q(3)],
+          ['y', q(2)],
+          ['z', q(2)],
+        ]),
+      ),
+    ).toBeUndefined();
     expect(() => a.evaluate(new Map([['x', 1]]))).toThrow(/y/);
   });
 });

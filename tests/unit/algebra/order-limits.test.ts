@@ -34,7 +34,14 @@ describe('orderLimits', () => {
 
   it('the apparent order tends to the limits at extreme concentrations', () => {
     const order = rf('V*S/(K + S)').logDerivative('S')!;
-    const at = (s: number) => order.evaluate(new Map([['V', 2], ['K', 0.5], ['S', s]]));
+    const at = (s: number) =>
+      order.evaluate(
+        new Map([
+          ['V', 2],
+          ['K', 0.5],
+          ['S', s],
+        ]),
+      );
     expect(at(1e-9)).toBeCloseTo(1, 6);
     expect(at(1e9)).toBeCloseTo(0, 6);
   });

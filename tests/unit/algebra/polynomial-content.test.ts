@@ -1,12 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  content,
-  formatText,
-  monomialContent,
-  Polynomial,
-  primitivePart,
-} from '../../../src/engine/exact/index.ts';
+import { content, formatText, monomialContent, Polynomial, primitivePart } from '../../../src/engine/exact/index.ts';
 import { arbGeneralPolynomial, poly } from './helpers.ts';
 
 describe('contents and primitive part', () => {

@@ -18,8 +18,18 @@ describe('polynomial ring axioms (random small polynomials)', () => {
       fc.property(arbGeneralPolynomial, arbGeneralPolynomial, arbGeneralPolynomial, (p, q, r) => {
         expect(p.add(q).equals(q.add(p))).toBe(true);
         expect(p.mul(q).equals(q.mul(p))).toBe(true);
-        expect(p.add(q).add(r).equals(p.add(q.add(r)))).toBe(true);
-        expect(p.mul(q).mul(r).equals(p.mul(q.mul(r)))).toBe(true);
+        expect(
+          p
+            .add(q)
+            .add(r)
+            .equals(p.add(q.add(r))),
+        ).toBe(true);
+        expect(
+          p
+            .mul(q)
+            .mul(r)
+            .equals(p.mul(q.mul(r))),
+        ).toBe(true);
       }),
       runs,
     );
@@ -54,9 +64,13 @@ describe('polynomial ring axioms (random small polynomials)', () => {
       runs,
     );
     fc.assert(
-      fc.property(arbGeneralPolynomial, arbGeneralPolynomial.filter((q) => !q.isZero()), (p, q) => {
-        expect(divideExact(p.mul(q), q)?.equals(p)).toBe(true);
-      }),
+      fc.property(
+        arbGeneralPolynomial,
+        arbGeneralPolynomial.filter((q) => !q.isZero()),
+        (p, q) => {
+          expect(divideExact(p.mul(q), q)?.equals(p)).toBe(true);
+        },
+      ),
       runs,
     );
   });
@@ -81,7 +95,12 @@ describe('polynomial ring axioms (random small polynomials)', () => {
     );
     fc.assert(
       fc.property(arbPolynomial, arbPolynomial, arbExactPoint, (p, q, at) => {
-        expect(p.mul(q).evaluateExact(at)!.equals(p.evaluateExact(at)!.mul(q.evaluateExact(at)!))).toBe(true);
+        expect(
+          p
+            .mul(q)
+            .evaluateExact(at)!
+            .equals(p.evaluateExact(at)!.mul(q.evaluateExact(at)!)),
+        ).toBe(true);
       }),
       runs,
     );
@@ -91,7 +110,14 @@ describe('polynomial ring axioms (random small polynomials)', () => {
     fc.assert(
       fc.property(arbGeneralPolynomial, arbGeneralPolynomial, (p, q) => {
         const lhs = p.mul(q).derivative('x');
-        expect(lhs.equals(p.derivative('x').mul(q).add(p.mul(q.derivative('x'))))).toBe(true);
+        expect(
+          lhs.equals(
+            p
+              .derivative('x')
+              .mul(q)
+              .add(p.mul(q.derivative('x'))),
+          ),
+        ).toBe(true);
       }),
       runs,
     );

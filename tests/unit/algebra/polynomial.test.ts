@@ -78,8 +78,24 @@ describe('Polynomial', () => {
 
   it('evaluates numerically and exactly', () => {
     const p = poly('x^2*y - 3/2*x + 1');
-    expect(p.evaluate(new Map([['x', 2], ['y', 0.5]]))).toBeCloseTo(0, 12);
-    expect(p.evaluateExact(new Map([['x', q(1, 3)], ['y', q(9)]]))?.toString()).toBe('3/2');
+    expect(
+      p.evaluate(
+        new Map([
+          ['x', 2],
+          ['y', 0.5],
+        ]),
+      ),
+    ).toBeCloseTo(0, 12);
+    expect(
+      p
+        .evaluateExact(
+          new Map([
+            ['x', q(1, 3)],
+            ['y', q(9)],
+          ]),
+        )
+        ?.toString(),
+    ).toBe('3/2');
     expect(poly('x^(1/2)').evaluateExact(new Map([['x', q(2)]]))).toBeUndefined();
     expect(() => p.evaluate(new Map([['x', 1]]))).toThrow(RangeError);
   });

@@ -66,8 +66,26 @@ describe('RationalFunction arithmetic', () => {
 
   it('evaluates', () => {
     const f = rf('V*S/(K + S)');
-    expect(f.evaluate(new Map([['V', 2], ['S', 3], ['K', 1]]))).toBeCloseTo(1.5, 12);
-    expect(f.evaluateExact(new Map([['V', q(2)], ['S', q(3)], ['K', q(1)]]))?.toString()).toBe('3/2');
+    expect(
+      f.evaluate(
+        new Map([
+          ['V', 2],
+          ['S', 3],
+          ['K', 1],
+        ]),
+      ),
+    ).toBeCloseTo(1.5, 12);
+    expect(
+      f
+        .evaluateExact(
+          new Map([
+            ['V', q(2)],
+            ['S', q(3)],
+            ['K', q(1)],
+          ]),
+        )
+        ?.toString(),
+    ).toBe('3/2');
     expect(rf('1/(x - 1)').evaluateExact(new Map([['x', q(1)]]))).toBeUndefined();
   });
 });
@@ -110,13 +128,17 @@ describe('RationalFunction field properties', () => {
 
   it('normal form has non-negative exponents and a positive leading denominator coefficient', () => {
     fc.assert(
-      fc.property(arbGeneralPolynomial, arbGeneralPolynomial.filter((p) => !p.isZero()), (n, d) => {
-        const f = RationalFunction.of(n, d);
-        expect(f.numerator.terms.every((t) => t.monomial.hasNonNegativeExponents())).toBe(true);
-        expect(f.denominator.terms.every((t) => t.monomial.hasNonNegativeExponents())).toBe(true);
-        expect(f.denominator.leadingTerm()!.coefficient.sign()).toBe(1);
-        expect(f.equals(RationalFunction.of(n).div(RationalFunction.of(d)))).toBe(true);
-      }),
+      fc.property(
+        arbGeneralPolynomial,
+        arbGeneralPolynomial.filter((p) => !p.isZero()),
+        (n, d) => {
+          const f = RationalFunction.of(n, d);
+          expect(f.numerator.terms.every((t) => t.monomial.hasNonNegativeExponents())).toBe(true);
+          expect(f.denominator.terms.every((t) => t.monomial.hasNonNegativeExponents())).toBe(true);
+          expect(f.denominator.leadingTerm()!.coefficient.sign()).toBe(1);
+          expect(f.equals(RationalFunction.of(n).div(RationalFunction.of(d)))).toBe(true);
+        },
+      ),
       runs,
     );
   });

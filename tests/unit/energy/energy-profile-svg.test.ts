@@ -32,7 +32,9 @@ describe('energy profile SVG', () => {
     const energy = energyOf(yaml, 'kx7-hydroarylation-alkene-first');
     const svg = energyProfileSvg(energy, { idPrefix: 'kx7' });
     save('energy-profile-kx7-alkene-first.svg', svg);
-    expect(svg).toMatch(/^<svg [^>]*role="img" aria-label="Gibbs energy profile of 2 elementary steps; overall change −56\.0 kJ\/mol \(exergonic\); energetic span 80\.0 kJ\/mol"/);
+    expect(svg).toMatch(
+      /^<svg [^>]*role="img" aria-label="Gibbs energy profile of 2 elementary steps; overall change −56\.0 kJ\/mol \(exergonic\); energetic span 80\.0 kJ\/mol"/,
+    );
     expect(svg).toContain('<title>Gibbs energy profile of 2 elementary steps;');
     const all = texts(svg);
     expect(all).toEqual(
@@ -65,10 +67,13 @@ describe('energy profile SVG', () => {
 `);
     const svg = energyProfileSvg(energy, { idPrefix: 'schematic' });
     save('energy-profile-schematic.svg', svg);
-    expect(texts(svg)).toEqual(expect.arrayContaining(['schematic (no energies recorded)', 'Gibbs energy', '‡ chem', 'E + S', 'E + P']));
+    expect(texts(svg)).toEqual(
+      expect.arrayContaining(['schematic (no energies recorded)', 'Gibbs energy', '‡ chem', 'E + S', 'E + P']),
+    );
     expect(svg).toContain('stroke-dasharray="7 4"');
     expect(svg).not.toMatch(/ΔG‡/);
-    const peak = (label: string) => Number(new RegExp(`<text x="[\\d.]+" y="([\\d.]+)"[^>]*>‡ ${label}<`).exec(svg)?.[1]);
+    const peak = (label: string) =>
+      Number(new RegExp(`<text x="[\\d.]+" y="([\\d.]+)"[^>]*>‡ ${label}<`).exec(svg)?.[1]);
     expect(peak('chem')).toBeLessThan(peak('bind'));
     expect(peak('chem')).toBeLessThan(peak('release'));
   });

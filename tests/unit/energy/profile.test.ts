@@ -76,30 +76,47 @@ steps:
       ['min', -56, { Cat: 1, P: 1 }],
     ]);
     // Energetic span by hand: TDTS ‡ar at 74, TDI the adduct at −6 before it, δE = 80 kJ/mol.
-    expect(energy).toMatchObject({ kind: 'cycle', carriers: ['Cat'], overall_change: -56, tdts_step: 'ar', tdi_state: 1, span: 80 });
+    expect(energy).toMatchObject({
+      kind: 'cycle',
+      carriers: ['Cat'],
+      overall_change: -56,
+      tdts_step: 'ar',
+      tdi_state: 1,
+      span: 80,
+    });
     expect(derivation.diagnostics.filter((d) => d.rule.startsWith('energy/'))).toEqual([]);
   });
 
   it('needs two NO2 at the start of NO2 + CO, though only one is consumed overall', () => {
     // Source: Atkins & de Paula, Physical Chemistry, reaction mechanisms (from memory).
-    const { energy } = analyse(`steps:
+    const { energy } = analyse(
+      `steps:
   - equation: NO2 + NO2 -> NO3 + NO
   - equation: NO3 + CO -> NO2 + CO2
-`, 'formulas');
+`,
+      'formulas',
+    );
     const minima = energy!.states.filter((s) => s.kind === 'minimum').map((s) => s.species);
-    expect(minima).toEqual([{ NO2: 2, CO: 1 }, { NO3: 1, NO: 1, CO: 1 }, { NO2: 1, NO: 1, CO2: 1 }]);
+    expect(minima).toEqual([
+      { NO2: 2, CO: 1 },
+      { NO3: 1, NO: 1, CO: 1 },
+      { NO2: 1, NO: 1, CO2: 1 },
+    ]);
     expect(energy).toMatchObject({ kind: 'sequence', schematic: true });
   });
 
   it('treats a chain carrier like a catalyst: the propagation cycle returns Cl•', () => {
-    const { energy } = analyse(`steps:
+    const { energy } = analyse(
+      `steps:
   - { equation: Cl2 + M -> 2 Cl• + M, label: init }
   - { equation: Cl• + CHF3 -> HCl + CF3•, label: p1 }
   - { equation: CF3• + Cl2 -> CF3Cl + Cl•, label: p2 }
   - { equation: 2 Cl• + M -> Cl2 + M, label: term }
 species:
   M: { third_body: true }
-`, 'formulas');
+`,
+      'formulas',
+    );
     expect(energy!.carriers).toEqual(['Cl•']);
     expect(energy!.states.filter((s) => s.kind === 'minimum').map((s) => s.species)).toEqual([
       { Cl2: 1, 'Cl•': 1, CHF3: 1 },
@@ -150,7 +167,10 @@ species:
   });
 
   it('returns nothing without a route', () => {
-    const loaded = loadRecordSource('profile.yaml', `title: t\nsystem: s\nstatus: proposed\nnotation: labels\nsteps:\n  - equation: A <=> B\n  - equation: B <=> A\n`);
+    const loaded = loadRecordSource(
+      'profile.yaml',
+      `title: t\nsystem: s\nstatus: proposed\nnotation: labels\nsteps:\n  - equation: A <=> B\n  - equation: B <=> A\n`,
+    );
     const derivation = deriveMechanism(loaded.record!);
     expect(derivation.route).toBeUndefined();
     expect(derivation.energy).toBeUndefined();

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { createExtendedLuWorkspace, extendedLuFactor, extendedLuSolve, setShiftedNegative } from '../../../src/engine/numeric/extended-lu.ts';
+import {
+  createExtendedLuWorkspace,
+  extendedLuFactor,
+  extendedLuSolve,
+  setShiftedNegative,
+} from '../../../src/engine/numeric/extended-lu.ts';
 
 /** Solves (d·I − J) x = b in double-double; undefined when the factorisation fails. */
 const solveShifted = (d: number, jacobian: number[][], b: number[]) => {
@@ -15,20 +20,74 @@ const solveShifted = (d: number, jacobian: number[][], b: number[]) => {
 describe('LU in double-double', () => {
   it.each([
     ['1×1', [[-4]], [2], [0.5]],
-    ['zero leading pivot needs a row swap', [[0, -1], [-1, 0]], [3, 5], [5, 3]],
-    ['3×3', [[-2, -1, -1], [-4, 6, 0], [2, -7, -2]], [5, -2, 9], [1, 1, 2]],
+    [
+      'zero leading pivot needs a row swap',
+      [
+        [0, -1],
+        [-1, 0],
+      ],
+      [3, 5],
+      [5, 3],
+    ],
+    [
+      '3×3',
+      [
+        [-2, -1, -1],
+        [-4, 6, 0],
+        [2, -7, -2],
+      ],
+      [5, -2, 9],
+      [1, 1, 2],
+    ],
     // x_S = 1e-20 beside 2 x_S + x_B = 1: the small equation must survive elimination by the large one.
-    ['a radical beside a reactant', [[-1, 0], [-2, -1]], [1e-20, 1], [1e-20, 1]],
+    [
+      'a radical beside a reactant',
+      [
+        [-1, 0],
+        [-2, -1],
+      ],
+      [1e-20, 1],
+      [1e-20, 1],
+    ],
     // Column 1 swaps rows 1 and 2, whose column-0 multipliers differ.
-    ['a later row swap carries its multipliers', [[-4, -1, -1], [-2, -0.5, -3], [-1, -5, -1]], [6, 5.5, 7], [1, 1, 1]],
+    [
+      'a later row swap carries its multipliers',
+      [
+        [-4, -1, -1],
+        [-2, -0.5, -3],
+        [-1, -5, -1],
+      ],
+      [6, 5.5, 7],
+      [1, 1, 1],
+    ],
   ])('%s (d = 0)', (_, jacobian, b, expected) => {
     const x = solveShifted(0, jacobian, b)!;
-    x.forEach((v, i) => expect(Math.abs(v - expected[i]!)).toBeLessThanOrEqual(Number.EPSILON * Math.abs(expected[i]!)));
+    x.forEach((v, i) =>
+      expect(Math.abs(v - expected[i]!)).toBeLessThanOrEqual(Number.EPSILON * Math.abs(expected[i]!)),
+    );
   });
 
   it('reports a singular matrix instead of dividing by zero', () => {
-    expect(solveShifted(0, [[1, 2], [2, 4]], [1, 2])).toBeUndefined();
-    expect(solveShifted(0, [[0, 0], [0, 0]], [0, 0])).toBeUndefined();
+    expect(
+      solveShifted(
+        0,
+        [
+          [1, 2],
+          [2, 4],
+        ],
+        [1, 2],
+      ),
+    ).toBeUndefined();
+    expect(
+      solveShifted(
+        0,
+        [
+          [0, 0],
+          [0, 0],
+        ],
+        [0, 0],
+      ),
+    ).toBeUndefined();
   });
 
   it('keeps the conservation laws of a fast pre-equilibrium however long the step (E + S ⇌ ES → E + P)', () => {

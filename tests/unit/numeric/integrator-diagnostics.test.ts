@@ -42,7 +42,9 @@ describe('integrateStiff diagnostics', () => {
   });
 
   it("reports a non-finite Jacobian or initial value as 'non-finite'", () => {
-    expect(integrateStiff(constant(0, Number.POSITIVE_INFINITY), Float64Array.of(1), { tEnd: 1 }).status).toBe('non-finite');
+    expect(integrateStiff(constant(0, Number.POSITIVE_INFINITY), Float64Array.of(1), { tEnd: 1 }).status).toBe(
+      'non-finite',
+    );
     expect(integrateStiff(constant(0), Float64Array.of(Number.NaN), { tEnd: 1 }).status).toBe('non-finite');
   });
 
@@ -69,6 +71,8 @@ describe('integrateStiff diagnostics', () => {
 
   it('throws only on API misuse (sizes that do not match)', () => {
     expect(() => integrateStiff(stiffPair, Float64Array.of(1), { tEnd: 1 })).toThrow(RangeError);
-    expect(() => integrateStiff(stiffPair, Float64Array.of(1, 0, 0), { tEnd: 1, atol: Float64Array.of(1) })).toThrow(RangeError);
+    expect(() => integrateStiff(stiffPair, Float64Array.of(1, 0, 0), { tEnd: 1, atol: Float64Array.of(1) })).toThrow(
+      RangeError,
+    );
   });
 });

@@ -14,21 +14,71 @@ const solve = (rows: number[][], b: number[]) => {
 describe('LU with partial pivoting', () => {
   it.each([
     ['1×1', [[4]], [2], [0.5]],
-    ['zero leading pivot needs a row swap', [[0, 1], [1, 0]], [3, 5], [5, 3]],
-    ['3×3', [[2, 1, 1], [4, -6, 0], [-2, 7, 2]], [5, -2, 9], [1, 1, 2]],
+    [
+      'zero leading pivot needs a row swap',
+      [
+        [0, 1],
+        [1, 0],
+      ],
+      [3, 5],
+      [5, 3],
+    ],
+    [
+      '3×3',
+      [
+        [2, 1, 1],
+        [4, -6, 0],
+        [-2, 7, 2],
+      ],
+      [5, -2, 9],
+      [1, 1, 2],
+    ],
     // Without pivoting the 1e-20 pivot would wipe out the second equation.
-    ['tiny pivot', [[1e-20, 1], [1, 1]], [1, 2], [1, 1]],
+    [
+      'tiny pivot',
+      [
+        [1e-20, 1],
+        [1, 1],
+      ],
+      [1, 2],
+      [1, 1],
+    ],
     // Column 1 swaps rows 1 and 2, whose column-0 multipliers (0.5 and 0.25) differ: the
     // right-hand side must be permuted before any elimination, not between them.
-    ['a later row swap carries its multipliers', [[4, 1, 1], [2, 0.5, 3], [1, 5, 1]], [6, 5.5, 7], [1, 1, 1]],
+    [
+      'a later row swap carries its multipliers',
+      [
+        [4, 1, 1],
+        [2, 0.5, 3],
+        [1, 5, 1],
+      ],
+      [6, 5.5, 7],
+      [1, 1, 1],
+    ],
   ])('%s', (_, rows, b, expected) => {
     const x = solve(rows, b)!;
     x.forEach((v, i) => expect(v).toBeCloseTo(expected[i]!, 12));
   });
 
   it('reports a singular matrix instead of dividing by zero', () => {
-    expect(solve([[1, 2], [2, 4]], [1, 2])).toBeUndefined();
-    expect(solve([[0, 0], [0, 0]], [0, 0])).toBeUndefined();
+    expect(
+      solve(
+        [
+          [1, 2],
+          [2, 4],
+        ],
+        [1, 2],
+      ),
+    ).toBeUndefined();
+    expect(
+      solve(
+        [
+          [0, 0],
+          [0, 0],
+        ],
+        [0, 0],
+      ),
+    ).toBeUndefined();
   });
 });
 
@@ -62,11 +112,37 @@ describe('LU with iterative refinement', () => {
   });
 
   it.each([
-    ['3×3', [[2, 1, 1], [4, -6, 0], [-2, 7, 2]], [5, -2, 9], [1, 1, 2]],
-    ['tiny pivot', [[1e-20, 1], [1, 1]], [1, 2], [1, 1]],
+    [
+      '3×3',
+      [
+        [2, 1, 1],
+        [4, -6, 0],
+        [-2, 7, 2],
+      ],
+      [5, -2, 9],
+      [1, 1, 2],
+    ],
+    [
+      'tiny pivot',
+      [
+        [1e-20, 1],
+        [1, 1],
+      ],
+      [1, 2],
+      [1, 1],
+    ],
     // Column 1 swaps rows 1 and 2, whose column-0 multipliers (0.5 and 0.25) differ: the
     // right-hand side must be permuted before any elimination, not between them.
-    ['a later row swap carries its multipliers', [[4, 1, 1], [2, 0.5, 3], [1, 5, 1]], [6, 5.5, 7], [1, 1, 1]],
+    [
+      'a later row swap carries its multipliers',
+      [
+        [4, 1, 1],
+        [2, 0.5, 3],
+        [1, 5, 1],
+      ],
+      [6, 5.5, 7],
+      [1, 1, 1],
+    ],
   ])('agrees with the plain solve on a well-scaled system: %s', (_, rows, rhs, expected) => {
     const n = rows.length;
     const matrix = Float64Array.from(rows.flat());

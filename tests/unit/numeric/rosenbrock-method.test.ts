@@ -26,7 +26,10 @@ describe('order conditions (Hairer & Wanner II, Table IV.7.1, from memory)', () 
 
   it('order 3 for the main formula: Σ bᵢ αᵢ² = 1/3 and Σ bᵢ βᵢⱼ βⱼ′ = 1/6 − γ + γ²', () => {
     expect(sum((i) => T.b[i]! * alphaI(i) ** 2)).toBeCloseTo(1 / 3, 15);
-    expect(sum((i) => T.b[i]! * sum((j) => (j < i ? beta(i, j) * betaPrime(j) : 0)))).toBeCloseTo(1 / 6 - g + g * g, 15);
+    expect(sum((i) => T.b[i]! * sum((j) => (j < i ? beta(i, j) * betaPrime(j) : 0)))).toBeCloseTo(
+      1 / 6 - g + g * g,
+      15,
+    );
   });
 
   it('is stiffly accurate in both formulas (β_4j = b_j, α_4j = β_3j), so the error estimate is the last stage', () => {
@@ -53,7 +56,10 @@ describe('observed convergence order of the fixed method (halving the step)', ()
   it("y' = −y: order 3, embedded order 2", () => {
     const exact = Math.exp(-1);
     const main = observedOrders((n) => Math.abs(fixedSteps(decay, Float64Array.of(1), 1, n)[0]! - exact), steps);
-    const embedded = observedOrders((n) => Math.abs(fixedSteps(decay, Float64Array.of(1), 1, n, 'embedded')[0]! - exact), steps);
+    const embedded = observedOrders(
+      (n) => Math.abs(fixedSteps(decay, Float64Array.of(1), 1, n, 'embedded')[0]! - exact),
+      steps,
+    );
     for (const p of main) expect(p).toBeCloseTo(3, 1);
     for (const p of embedded) expect(p).toBeCloseTo(2, 1);
   });
@@ -81,7 +87,15 @@ describe('stability', () => {
   it('is A-stable: one step of a rotation never grows the norm, for hω up to 1e8', () => {
     for (let e = -2; e <= 8; e += 0.25) {
       const w = 10 ** e;
-      const y = fixedSteps(linearSystem([[0, -w], [w, 0]]), Float64Array.of(1, 0), 1, 1);
+      const y = fixedSteps(
+        linearSystem([
+          [0, -w],
+          [w, 0],
+        ]),
+        Float64Array.of(1, 0),
+        1,
+        1,
+      );
       expect(Math.hypot(y[0]!, y[1]!)).toBeLessThanOrEqual(1 + 1e-14);
     }
   });

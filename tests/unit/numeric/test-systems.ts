@@ -25,7 +25,13 @@ export function linearSystem(k: readonly (readonly number[])[]): OdeSystem {
  * Integrates with n equal steps (no error control), advancing with the main formula or with the
  * embedded one (ŷ₁ = y₁ − err), for measuring the observed order of each.
  */
-export function fixedSteps(system: OdeSystem, y0: Float64Array, tEnd: number, n: number, formula: 'main' | 'embedded' = 'main'): Float64Array {
+export function fixedSteps(
+  system: OdeSystem,
+  y0: Float64Array,
+  tEnd: number,
+  n: number,
+  formula: 'main' | 'embedded' = 'main',
+): Float64Array {
   const size = system.size;
   const h = tEnd / n;
   const ws = createWorkspace(size, ROSENBROCK_METHOD);

@@ -7,11 +7,17 @@ import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { deriveMechanism, simulationBasis } from '../../../src/engine/derive.ts';
 import { concentrationTimeSvg } from '../../../src/render/plots/concentration-time-svg.ts';
-import { firstObservationSeries, type ConcentrationSeries } from '../../../src/engine/simulation/concentration-series.ts';
+import {
+  firstObservationSeries,
+  type ConcentrationSeries,
+} from '../../../src/engine/simulation/concentration-series.ts';
 import type { Role } from '../../../src/model/mechanism-record.ts';
 import { loadRecordSource } from '../../../src/records/index.ts';
 
-const texts = (svg: string) => [...svg.matchAll(/<text[^>]*>(.*?)<\/text>/g)].map((m) => m[1]!.replace(/<title>.*?<\/title>/g, '').replace(/<[^>]+>/g, ''));
+const texts = (svg: string) =>
+  [...svg.matchAll(/<text[^>]*>(.*?)<\/text>/g)].map((m) =>
+    m[1]!.replace(/<title>.*?<\/title>/g, '').replace(/<[^>]+>/g, ''),
+  );
 const curves = (svg: string) => [...svg.matchAll(/<g data-species="([^"]*)">/g)].map((m) => m[1]);
 
 function save(name: string, svg: string): void {
@@ -20,7 +26,10 @@ function save(name: string, svg: string): void {
 }
 
 /** A → I → P with first-order constants, sampled analytically: a hand-made series, no engine needed. */
-function handSeries(names: [string, string, string], options: { k1?: number; k2?: number; extra?: { species: string; role?: Role; held: boolean; value: number }[] } = {}): ConcentrationSeries {
+function handSeries(
+  names: [string, string, string],
+  options: { k1?: number; k2?: number; extra?: { species: string; role?: Role; held: boolean; value: number }[] } = {},
+): ConcentrationSeries {
   const k1 = options.k1 ?? 1;
   const k2 = options.k2 ?? 1e3;
   const a0 = 2e-3;
@@ -45,13 +54,28 @@ describe('concentration–time SVG', () => {
   it('draws axes with units, a legend entry, a curve and an end label for every species', () => {
     const svg = concentrationTimeSvg(handSeries(['A', 'I', 'P']), { logTime: true, idPrefix: 'hand' });
     save('concentration-time-hand-log.svg', svg);
-    expect(svg).toMatch(/^<svg [^>]*role="img" aria-label="Simulated concentrations against time \(log time axis\) for observation run-1: A, I ×10³, P"/);
+    expect(svg).toMatch(
+      /^<svg [^>]*role="img" aria-label="Simulated concentrations against time \(log time axis\) for observation run-1: A, I ×10³, P"/,
+    );
     expect(svg).toContain('<title>Simulated concentrations against time (log time axis)');
     const all = texts(svg);
-    expect(all).toEqual(expect.arrayContaining(['time / s', 'concentration / mM', 'A (reactant)', 'I ×10³ (intermediate)', 'P (product)', 'A', 'I ×10³', 'P']));
+    expect(all).toEqual(
+      expect.arrayContaining([
+        'time / s',
+        'concentration / mM',
+        'A (reactant)',
+        'I ×10³ (intermediate)',
+        'P (product)',
+        'A',
+        'I ×10³',
+        'P',
+      ]),
+    );
     expect(curves(svg)).toEqual(['A', 'I', 'P']);
     // One path per curve inside its group, each with its own dash pattern (the first solid).
-    const dashes = [...svg.matchAll(/<g data-species="[^"]*"><title>[^<]*<\/title><path d="M[^"]+" ([^/]*)\/>/g)].map((m) => /stroke-dasharray="([^"]+)"/.exec(m[1]!)?.[1] ?? 'solid');
+    const dashes = [...svg.matchAll(/<g data-species="[^"]*"><title>[^<]*<\/title><path d="M[^"]+" ([^/]*)\/>/g)].map(
+      (m) => /stroke-dasharray="([^"]+)"/.exec(m[1]!)?.[1] ?? 'solid',
+    );
     expect(dashes).toEqual(['solid', '8 4', '2 3']);
     expect(svg).toContain('a curve marked ×10ⁿ is drawn 10ⁿ times larger than the axis reads');
     expect(concentrationTimeSvg(handSeries(['A', 'I', 'P']), { logTime: true, idPrefix: 'hand' })).toBe(svg);
@@ -80,7 +104,9 @@ describe('concentration–time SVG', () => {
     expect(svg).toContain('aria-label="Tom &amp; &quot;Jerry&quot; &lt;plot&gt;"');
     expect(svg).toContain('<clipPath id="a_b_c-frame">');
     // Long names are cut at the curve end, and the full name stays as a tooltip.
-    expect(svg).toMatch(/<text [^>]*><title>&lt;script&gt;alert\(1\)&lt;\/script&gt;<\/title>&lt;script&gt;ale…<\/text>/);
+    expect(svg).toMatch(
+      /<text [^>]*><title>&lt;script&gt;alert\(1\)&lt;\/script&gt;<\/title>&lt;script&gt;ale…<\/text>/,
+    );
   });
 
   it('leaves out species held constant or absent, and says so', () => {
@@ -99,8 +125,19 @@ describe('concentration–time SVG', () => {
   });
 
   it('draws a frame with the reason when there is nothing to plot', () => {
-    const svg = concentrationTimeSvg({ status: 'skipped', message: 'not simulated: needs the rate constant of step 2', unit: 'M', times: [], species: [], roles: [], held: [], values: [] });
-    expect(svg).toMatch(/role="img" aria-label="No concentration–time curves: not simulated: needs the rate constant of step 2"/);
+    const svg = concentrationTimeSvg({
+      status: 'skipped',
+      message: 'not simulated: needs the rate constant of step 2',
+      unit: 'M',
+      times: [],
+      species: [],
+      roles: [],
+      held: [],
+      values: [],
+    });
+    expect(svg).toMatch(
+      /role="img" aria-label="No concentration–time curves: not simulated: needs the rate constant of step 2"/,
+    );
     expect(texts(svg)).toEqual(['not simulated: needs the rate constant of step 2']);
     expect(curves(svg)).toEqual([]);
   });
@@ -109,12 +146,25 @@ describe('concentration–time SVG', () => {
     const id = 'kx7-hydroarylation-ternary-adduct';
     const loaded = loadRecordSource(`${id}.yaml`, readFileSync(`content/mechanisms/${id}.yaml`, 'utf8'));
     const derivation = deriveMechanism(loaded.record!);
-    const series = firstObservationSeries(loaded.record!.observations!, simulationBasis(derivation)!, derivation.constants!)!;
+    const series = firstObservationSeries(
+      loaded.record!.observations!,
+      simulationBasis(derivation)!,
+      derivation.constants!,
+    )!;
     const svg = concentrationTimeSvg(series, { logTime: true, idPrefix: id });
     save('concentration-time-kx7-ternary-log.svg', svg);
     save('concentration-time-kx7-ternary-linear.svg', concentrationTimeSvg(series, { idPrefix: id }));
     expect(series.status).toBe('ok');
     expect(curves(svg)).toEqual(['A', 'B', 'Cat', 'CatA', 'CatAB', 'P']);
-    expect(texts(svg)).toEqual(expect.arrayContaining(['A (reactant)', 'Cat ×10² (catalyst)', 'CatAB ×10⁵ (intermediate)', 'P (product)', 'concentration / M', 'time / s']));
+    expect(texts(svg)).toEqual(
+      expect.arrayContaining([
+        'A (reactant)',
+        'Cat ×10² (catalyst)',
+        'CatAB ×10⁵ (intermediate)',
+        'P (product)',
+        'concentration / M',
+        'time / s',
+      ]),
+    );
   });
 });

@@ -36,14 +36,26 @@ describe('log time ticks', () => {
 
 describe('linear time axis', () => {
   it('picks s, min, h or d so that tick numbers stay short', () => {
-    expect([timeUnit(500), timeUnit(2000), timeUnit(2e5), timeUnit(1e7)].map((u) => u.unit)).toEqual(['s', 'min', 'h', 'd']);
+    expect([timeUnit(500), timeUnit(2000), timeUnit(2e5), timeUnit(1e7)].map((u) => u.unit)).toEqual([
+      's',
+      'min',
+      'h',
+      'd',
+    ]);
     expect(linearTicks(2.5).major.map((t) => t.label)).toEqual(['0.0', '0.5', '1.0', '1.5', '2.0', '2.5']);
   });
 });
 
 describe('concentration scale', () => {
   it('chooses the unit that keeps the largest value at 0.1 or above', () => {
-    expect([0.5, 0.08, 2e-4, 3e-5, 1e-8, 1e-15].map((c) => concentrationUnit(c).symbol)).toEqual(['M', 'mM', 'mM', 'µM', 'nM', 'pM']);
+    expect([0.5, 0.08, 2e-4, 3e-5, 1e-8, 1e-15].map((c) => concentrationUnit(c).symbol)).toEqual([
+      'M',
+      'mM',
+      'mM',
+      'µM',
+      'nM',
+      'pM',
+    ]);
   });
 
   it('magnifies a curve below 1/20 of the tallest by the power of ten that brings it within a decade', () => {
@@ -56,7 +68,9 @@ describe('concentration scale', () => {
 
 describe('curve styles', () => {
   it('gives 64 curves distinct pairs of dash pattern and marker', () => {
-    const pairs = new Set(Array.from({ length: 64 }, (_, i) => `${curveStyle(i).dash ?? 'solid'}|${curveStyle(i).marker}`));
+    const pairs = new Set(
+      Array.from({ length: 64 }, (_, i) => `${curveStyle(i).dash ?? 'solid'}|${curveStyle(i).marker}`),
+    );
     expect(pairs.size).toBe(64);
     expect(curveStyle(0)).toEqual({ marker: 'circle' });
   });

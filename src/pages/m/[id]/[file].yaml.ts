@@ -3,7 +3,10 @@ import type { GetStaticPaths } from 'astro';
 import { atlasRecords } from '../../../components/content-entries.ts';
 
 export const getStaticPaths = (async () => {
-  return (await atlasRecords()).map((view) => ({ params: { id: view.id, file: view.id }, props: { source: view.source } }));
+  return (await atlasRecords()).map((view) => ({
+    params: { id: view.id, file: view.id },
+    props: { source: view.source },
+  }));
 }) satisfies GetStaticPaths;
 
 /** The YAML source. */
