@@ -18,4 +18,36 @@ export { byPosition, summaryLine, textReport } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
 export { sbmlDocument } from './sbml/sbml.ts';
-export * from './words/index.ts';
+export {
+  ROLE_ORDER,
+  SEVERITIES,
+  capitalised,
+  constantNameLatex,
+  equationLatex,
+  limitsText,
+  methodAbout,
+  methodLaw,
+  methodName,
+  methodShort,
+  molecularityText,
+  numberText,
+  orderText,
+  overallLatex,
+  percentText,
+  plainNumber,
+  plural,
+  predictionText,
+  quantityText,
+  rateConstantUnit,
+  roleRank,
+  roleWords,
+  severityCount,
+  severityWord,
+  signedValue,
+  speciesLatex,
+  speciesTerms,
+  superscript,
+  symbolLatex,
+  trueMinus,
+  verdictMark,
+} from './words/index.ts';
