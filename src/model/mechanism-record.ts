@@ -40,7 +40,7 @@ export type Approximation = 'auto' | 'rds' | 'steady_state' | 'both';
  */
 export type QuantityText = string | number;
 /**
- * An identifier made of lower-case letters, digits and single hyphens, e.g. peroxide-disproportionation.
+ * An identifier made of lower-case letters, digits and single hyphens, at most 100 characters, e.g. peroxide-disproportionation.
  *
  * This interface was referenced by `MechanismRecord`'s JSON-Schema
  * via the `definition` "Slug".
