@@ -2,7 +2,7 @@
  * Reads a record's YAML text into plain data, keeping the document (with ranges) for positions.
  * Nothing here throws: YAML problems become `record/yaml` diagnostics with line and column.
  */
-import { LineCounter, isNode, parseDocument, visit } from 'yaml';
+import { LineCounter, isAlias, isNode, parseDocument, visit } from 'yaml';
 import type { Document, YAMLError } from 'yaml';
 import { findAliasProblems } from './alias-problems.ts';
 import { diagnostic } from '../model/index.ts';
@@ -58,6 +58,30 @@ function pointedAt(doc: Document.Parsed, problem: YAMLError, source: string): Po
   return pointed;
 }
 
+// The tags whose values read as the plain JSON data a record is: anything else (!!omap, !!set,
+// !!binary, !!timestamp, !!pairs) becomes a Map, Set, byte array or Date, whose contents the
+// schema check cannot see, so what is declared under it would be dropped without a word.
+const PLAIN_TAGS = new Set(['str', 'int', 'float', 'bool', 'null', 'map', 'seq'].map((t) => `tag:yaml.org,2002:${t}`));
+
+/** A `record/yaml` error for each node under a tag that does not read as plain data. */
+function unusualTags(doc: Document.Parsed, locator: RecordLocator): Diagnostic[] {
+  const diagnostics: Diagnostic[] = [];
+  visit(doc, {
+    Node(_key, node) {
+      if (isAlias(node) || node.tag === undefined || PLAIN_TAGS.has(node.tag)) return;
+      // A tag yaml does not know is already a warning, and its value is read as plain data.
+      if (!doc.schema.tags.some((t) => t.tag === node.tag)) return;
+      const range = node.range ?? [0, 0];
+      const short = node.tag.replace('tag:yaml.org,2002:', '!!');
+      const message = `the YAML tag ${short} makes a value a record cannot hold; remove the tag and write plain YAML`;
+      diagnostics.push(
+        diagnostic('record/yaml', 'error', message, { ...locator.span(range[0], range[1]), actual: short }),
+      );
+    },
+  });
+  return diagnostics;
+}
+
 function yamlDiagnostics(doc: Document.Parsed, source: string, locator: RecordLocator): Diagnostic[] {
   const diagnostics: Diagnostic[] = [];
   const linesWithErrors = new Set<number>();
@@ -88,7 +112,7 @@ export function parseRecordYaml(source: string): ParsedYaml {
   const locator = createLocator(doc, lineCounter, source);
   const diagnostics = yamlDiagnostics(doc, source, locator);
   const { aliases, diagnostics: aliasDiagnostics } = findAliasProblems(doc, locator);
-  diagnostics.push(...aliasDiagnostics);
+  diagnostics.push(...aliasDiagnostics, ...unusualTags(doc, locator));
   if (diagnostics.some((d) => d.severity === 'error')) return { doc, locator, diagnostics };
   try {
     const data: unknown = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
