@@ -33,7 +33,7 @@ export function markdownReport(report: CatalogueReport): string {
 }
 
 // What GitHub would turn into a notification or a link: @-mentions, web addresses, issue numbers.
-const LIVE = /(@[A-Za-z0-9][\w.-]*|(?:https?|ftp|mailto|file|data|javascript):\S*|www\.\S+|#\d+)/i;
+const LIVE = /(@[A-Za-z0-9][\w./-]*|(?:https?|ftp|mailto|file|data|javascript):\S*|www\.\S+|#\d+)/i;
 
 /**
  * Record text made inert for a table cell of a pull-request comment: markdown punctuation and
