@@ -105,20 +105,33 @@ describe('a build swaps the new site in only when it is complete', () => {
 
   it('runs two builds at once one after the other: both sites whole and byte-identical, --force replaces', async () => {
     const work = mkdtempSync(join(tmpdir(), 'mechatlas-twice-'));
+    // The records, and files whose names cannot be pages: left out of the site, and said so.
+    const content = join(work, 'content');
+    cpSync(CONTENT, content, { recursive: true });
+    const record = readFileSync(join(CONTENT, 'record-minimal.yaml'));
+    for (const name of ['...yaml', '.yaml', `${'a'.repeat(250)}.yaml`, 'twin.yaml', 'twin.yml'])
+      writeFileSync(join(content, name), record);
     const forced = join(work, 'forced');
     mkdirSync(forced);
     writeFileSync(join(forced, 'old.txt'), 'replace me\n');
     const [a, b] = await Promise.all([
-      build(['--content', CONTENT, '--out', join(work, 'a')]).done,
-      build(['--content', CONTENT, '--out', forced, '--force']).done,
+      build(['--content', content, '--out', join(work, 'a'), '--strict']).done,
+      build(['--content', content, '--out', forced, '--force']).done,
     ]);
-    expect(a.code, a.output).toBe(0);
+    expect(a.code, a.output).toBe(1);
     expect(b.code, b.output).toBe(0);
+    expect(b.output.match(/left out of the site/g)).toHaveLength(5);
+    expect(readdirSync(join(work, 'a', 'm')).sort()).toEqual(
+      readdirSync(CONTENT)
+        .map((f) => f.slice(0, -5))
+        .sort(),
+    );
+    expect(readFileSync(join(work, 'a', 'index.html'), 'utf8')).toContain('role="search"');
     const siteA = tree(join(work, 'a'));
     expect(tree(forced)).toEqual(siteA);
     expect(Object.keys(siteA)).toContain('index.html');
     // No server chunk or Astro working file reached either site.
     expect(Object.keys(siteA).filter((f) => /\.mjs$|^chunks\/|^\.prerender|manifest/.test(f))).toEqual([]);
-    expect(readdirSync(work).sort()).toEqual(['a', 'forced']);
+    expect(readdirSync(work).sort()).toEqual(['a', 'content', 'forced']);
   }, 300_000);
 });
