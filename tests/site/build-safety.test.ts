@@ -26,12 +26,15 @@ function tree(dir: string): Record<string, string> {
   return out;
 }
 
-/** Runs a build as a child process; resolves with its exit code and output. */
-function build(args: string[]): {
+/** Runs a build as a child process from `cwd`; resolves with its exit code and output. */
+function build(
+  args: string[],
+  cwd = ROOT,
+): {
   child: ReturnType<typeof spawn>;
   done: Promise<{ code: number | null; output: string }>;
 } {
-  const child = spawn(process.execPath, [BIN, 'build', ...args], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, [BIN, 'build', ...args], { cwd, stdio: ['ignore', 'pipe', 'pipe'] });
   let output = '';
   child.stdout.on('data', (d: Buffer) => void (output += d.toString()));
   child.stderr.on('data', (d: Buffer) => void (output += d.toString()));
@@ -115,8 +118,9 @@ describe('a build swaps the new site in only when it is complete', () => {
     mkdirSync(forced);
     writeFileSync(join(forced, 'old.txt'), 'replace me\n');
     const [a, b] = await Promise.all([
-      build(['--content', content, '--out', join(work, 'a'), '--strict']).done,
-      build(['--content', content, '--out', forced, '--force']).done,
+      // From a folder with no node_modules above it, with relative paths, as a catalogue repository runs it.
+      build(['--content', 'content', '--out', 'a', '--strict'], work).done,
+      build(['--content', 'content', '--out', 'forced', '--force'], work).done,
     ]);
     expect(a.code, a.output).toBe(1);
     expect(b.code, b.output).toBe(0);
@@ -127,6 +131,10 @@ describe('a build swaps the new site in only when it is complete', () => {
         .sort(),
     );
     expect(readFileSync(join(work, 'a', 'index.html'), 'utf8')).toContain('role="search"');
+    const api = JSON.parse(readFileSync(join(work, 'a', 'api', 'mechanisms.json'), 'utf8')) as {
+      records: { file: string }[];
+    };
+    expect(api.records.map((r) => r.file)).toContain('content/record-minimal.yaml');
     const siteA = tree(join(work, 'a'));
     expect(tree(forced)).toEqual(siteA);
     expect(Object.keys(siteA)).toContain('index.html');
