@@ -7,7 +7,7 @@
  */
 import { existsSync, statSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
-import { dirname, join, resolve } from 'node:path';
+import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { findRecordFiles, recordFileProblems } from '../catalogue/index.ts';
 import type { CatalogueReport } from '../model/index.ts';
@@ -59,7 +59,14 @@ export async function buildCommand(options: BuildOptions, out: Output): Promise<
     return built;
   });
   out.stdout(`built the catalogue of ${options.content} into ${options.out}/ — ${summaryLine(report)}\n`);
-  for (const d of leftOut) out.stderr(`${diagnosticRow({ ...d, message: `${d.message} (left out of the site)` })}\n`);
+  for (const d of leftOut) {
+    const row = {
+      ...d,
+      file: relative(cwd, d.file ?? '') || (d.file ?? ''),
+      message: `${d.message} (left out of the site)`,
+    };
+    out.stderr(`${diagnosticRow(row)}\n`);
+  }
   const errors = report.summary.errors + leftOut.length;
   if (errors > 0) out.stderr(`${errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
   return options.strict && errors > 0 ? EXIT.findings : EXIT.clean;
