@@ -41,10 +41,14 @@ describe('public API', () => {
 
   it('catalogue', () => {
     expect(Object.keys(catalogue).sort()).toEqual([
+      'MAX_ID_LENGTH',
       'checkRecordFile',
       'checkRecordFiles',
       'findRecordFiles',
+      'isPublishable',
       'loadCatalogue',
+      'recordFileProblems',
+      'recordIdProblem',
       'toolVersion',
     ]);
   });

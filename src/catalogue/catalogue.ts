@@ -4,7 +4,6 @@
  * the species as they occur across the catalogue. The site and the CLI render from this; neither
  * derives again.
  */
-import { readFile } from 'node:fs/promises';
 import { relative } from 'node:path';
 import {
   firstObservationSeries,
@@ -14,7 +13,7 @@ import {
   type ObservationCheck,
 } from '../engine/index.ts';
 import type { Observation } from '../model/index.ts';
-import { findRecordFiles } from '../records/index.ts';
+import { findRecordFiles, isPublishable } from '../records/index.ts';
 import { checkRecordFile, type CheckedRecord } from './check-records.ts';
 
 /** One record of the catalogue: checked and derived, with its source text and its simulated series. */
@@ -43,15 +42,19 @@ export interface Catalogue {
   systems: CatalogueSystem[];
 }
 
-/** Loads, checks and derives every record of a folder, then judges the rivals of each system. */
+/** Loads, checks and derives every publishable record of a folder, then judges the rivals of each system. */
 export async function loadCatalogue(folder: string): Promise<Catalogue> {
   const { files } = await findRecordFiles([folder]);
   const records: CatalogueRecord[] = [];
   for (const file of files) {
     const checked = await checkRecordFile(file);
-    const named = relative(process.cwd(), file) || file;
+    // A file name that cannot be a page (unsafe, too long, an id given twice) stays out; `build` reports it.
+    if (!isPublishable(checked)) continue;
+    // Names relative to where the command ran (`build` runs Astro from the package folder).
+    const named = relative(process.env['MECHATLAS_CWD'] ?? process.cwd(), file) || file;
     const diagnostics = checked.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: named }));
-    const record: CatalogueRecord = { ...checked, file: named, diagnostics, source: await readFile(file, 'utf8') };
+    // The text the loader read (never a second read: the file may have changed, or be a pipe).
+    const record: CatalogueRecord = { ...checked, file: named, diagnostics, source: checked.loaded.source };
     const basis = checked.derivation && simulationBasis(checked.derivation);
     const series =
       checked.record && basis

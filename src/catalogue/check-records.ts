@@ -3,8 +3,8 @@
  * site build. Every file is checked even when others fail.
  */
 import { deriveMechanism, type Derivation, type DeriveOptions } from '../engine/index.ts';
-import type { Diagnostic, MechanismRecord } from '../model/index.ts';
-import { loadRecordFile, placeDiagnostics, type LoadedRecord } from '../records/index.ts';
+import { diagnostic, type Diagnostic, type MechanismRecord } from '../model/index.ts';
+import { loadRecordFile, placeDiagnostics, recordId, type LoadedRecord } from '../records/index.ts';
 
 /** One record file as checked: what was loaded, the record where it is valid, its derivation and every diagnostic placed. */
 export interface CheckedRecord {
@@ -19,12 +19,31 @@ export interface CheckedRecord {
 
 /** Loads, validates and derives one record file; engine diagnostics get file, line and column. */
 export async function checkRecordFile(path: string, options: DeriveOptions = {}): Promise<CheckedRecord> {
-  const loaded = await loadRecordFile(path);
-  const base = { id: loaded.id, file: loaded.file, loaded };
-  if (!loaded.record) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
-  const derivation = deriveMechanism(loaded.record, options);
-  const diagnostics = placeDiagnostics(loaded, [...loaded.diagnostics, ...derivation.diagnostics]);
-  return { ...base, record: loaded.record, derivation, diagnostics };
+  let loaded: LoadedRecord | undefined;
+  try {
+    loaded = await loadRecordFile(path);
+    const base = { id: loaded.id, file: loaded.file, loaded };
+    if (!loaded.record) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
+    const derivation = deriveMechanism(loaded.record, options);
+    const diagnostics = placeDiagnostics(loaded, [...loaded.diagnostics, ...derivation.diagnostics]);
+    return { ...base, record: loaded.record, derivation, diagnostics };
+  } catch (error) {
+    return internalFailure(path, loaded, error);
+  }
+}
+
+/**
+ * A failure of mechatlas itself on one record (an exception, where every problem should be a
+ * diagnostic): an `internal/failure` error on that record, so the rest are still checked.
+ */
+function internalFailure(path: string, loaded: LoadedRecord | undefined, error: unknown): CheckedRecord {
+  const what = error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+  const message = `mechatlas failed while checking this record (${what.split('\n')[0]!.slice(0, 200)})`;
+  const note = 'a fault in mechatlas, not in the record: please report it to the mechatlas maintainers with this file';
+  const failure = diagnostic('internal/failure', 'error', message, { file: path, line: 1, column: 1, note });
+  const read = loaded ?? { id: recordId(path), file: path, source: '', diagnostics: [], locate: () => undefined };
+  const diagnostics = [...placeDiagnostics(read, read.diagnostics), failure];
+  return { id: read.id, file: path, loaded: { ...read, diagnostics }, diagnostics };
 }
 
 /** Checks files one after another (the engine is CPU-bound; order stays stable). */

@@ -6,4 +6,10 @@
 export { loadCatalogue, type Catalogue, type CatalogueRecord, type CatalogueSystem } from './catalogue.ts';
 export { checkRecordFile, checkRecordFiles, type CheckedRecord } from './check-records.ts';
 export { toolVersion } from './tool-version.ts';
-export { findRecordFiles } from '../records/index.ts';
+export {
+  findRecordFiles,
+  isPublishable,
+  MAX_ID_LENGTH,
+  recordFileProblems,
+  recordIdProblem,
+} from '../records/index.ts';

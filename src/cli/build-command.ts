@@ -1,24 +1,29 @@
 /**
- * `mechatlas build [--content DIR] [--out DIR] [--strict]`: builds the catalogue site from a
- * folder of records (the same Astro build, pointed elsewhere). Records with errors get pages that
- * show their diagnostics; the build reports them and only fails on them with --strict.
+ * `mechatlas build [--content DIR] [--out DIR] [--strict] [--force]`: builds the catalogue site
+ * from a folder of records. Records with errors get pages that show their diagnostics; the build
+ * reports them and only fails on them with --strict. The site is built in a folder of its own and
+ * swapped in at the end, so nothing in the out folder changes unless the build succeeds, and the
+ * out folder is checked first (out-folder.ts): a build never replaces what it did not make.
  */
-import { createHash } from 'node:crypto';
-import { existsSync } from 'node:fs';
+import { existsSync, statSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { dirname, join, resolve } from 'node:path';
+import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { UsageError, type Output } from './output.ts';
+import { findRecordFiles, recordFileProblems } from '../catalogue/index.ts';
 import type { CatalogueReport } from '../model/index.ts';
-import { summaryLine } from '../render/index.ts';
+import { diagnosticRow, summaryLine } from '../render/index.ts';
+import { withBuildWorkspace } from './build-workspace.ts';
+import { EXIT } from './exit-status.ts';
+import { checkOutFolder } from './out-folder.ts';
+import { PathError, UsageError, type Output } from './output.ts';
+import { clearStaleSiblings, swapSiteInto } from './swap-site.ts';
 
 /** The package's own folder (where astro.config.mjs is), from this file's place in src/cli/ or lib/. */
 function packageRoot(): string {
   let dir = dirname(fileURLToPath(import.meta.url));
   while (!existsSync(join(dir, 'astro.config.mjs'))) {
     const parent = dirname(dir);
-    if (parent === dir) throw new Error('mechatlas: cannot find the package folder (astro.config.mjs)');
+    if (parent === dir) throw new Error('cannot find the package folder (astro.config.mjs)');
     dir = parent;
   }
   return dir;
@@ -28,30 +33,60 @@ export interface BuildOptions {
   content: string;
   out: string;
   strict: boolean;
+  /** replace a non-empty out folder that no earlier build made */
+  force: boolean;
 }
 
 /** Builds the site; exit 1 only with --strict and errors in some record. */
 export async function buildCommand(options: BuildOptions, out: Output): Promise<number> {
+  const cwd = process.cwd();
   const content = resolve(options.content);
-  const outDir = resolve(options.out);
-  if (!existsSync(content)) throw new UsageError(`no such folder: ${options.content}`);
+  if (!existsSync(content) || !statSync(content).isDirectory())
+    throw new UsageError(`no such folder: ${options.content}`);
+  const { files } = await findRecordFiles([content]);
+  if (files.length === 0)
+    throw new PathError(`${options.content} holds no records (*.yaml or *.yml files); is it the right folder?`);
+  const root = packageRoot();
+  const target = checkOutFolder(options.out, { content, packageRoot: root, cwd, force: options.force });
+  // Files whose name cannot be a page (an unsafe or doubled id) are left out of the site; say so here.
+  const leftOut = (await Promise.all(files.map(recordFileProblems))).flat();
+  const report = await withBuildWorkspace(root, out, async (work) => {
+    await clearStaleSiblings(target);
+    const site = await astroBuild(root, work, content, cwd);
+    // The site's own API holds the report the build derived; the records are not derived twice.
+    const built = JSON.parse(await readFile(join(site, 'api', 'mechanisms.json'), 'utf8')) as CatalogueReport;
+    await swapSiteInto(site, target);
+    return built;
+  });
+  out.stdout(`built the catalogue of ${options.content} into ${options.out}/ — ${summaryLine(report)}\n`);
+  for (const d of leftOut) {
+    const row = {
+      ...d,
+      file: relative(cwd, d.file ?? '') || (d.file ?? ''),
+      message: `${d.message} (left out of the site)`,
+    };
+    out.stderr(`${diagnosticRow(row)}\n`);
+  }
+  const errors = report.summary.errors + leftOut.length;
+  if (errors > 0) out.stderr(`${errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
+  return options.strict && errors > 0 ? EXIT.findings : EXIT.clean;
+}
+
+/** Runs Astro's build of the package's site over `content` into `<work>/site`, from the package folder. */
+async function astroBuild(root: string, work: string, content: string, cwd: string): Promise<string> {
+  const site = join(work, 'site');
   process.env['MECHATLAS_CONTENT'] = content;
+  process.env['MECHATLAS_OUT'] = site;
+  // File names in the site stay relative to where the command was run, not to the package.
+  process.env['MECHATLAS_CWD'] = cwd;
   // Astro's anonymous usage reporting stays off: a catalogue build sends nothing anywhere.
   process.env['ASTRO_TELEMETRY_DISABLED'] = '1';
-  process.env['MECHATLAS_OUT'] = outDir;
   const { build } = await import('astro');
-  // Astro keeps the content data store in its cache folder and reads it back during the build, so
-  // builds into different folders (parallel test files) each get their own cache, outside the tree.
-  const cacheDir = join(
-    tmpdir(),
-    'mechatlas-astro-cache',
-    createHash('sha256').update(outDir).digest('hex').slice(0, 12),
-  );
-  await build({ root: packageRoot(), outDir, cacheDir, logLevel: 'warn' });
-  // The site's own API holds the report the build derived; the records are not derived twice.
-  const report = JSON.parse(await readFile(join(outDir, 'api', 'mechanisms.json'), 'utf8')) as CatalogueReport;
-  out.stdout(`built the catalogue of ${options.content} into ${options.out}/ — ${summaryLine(report)}\n`);
-  if (report.summary.errors > 0)
-    out.stderr(`${report.summary.errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
-  return options.strict && report.summary.errors > 0 ? 1 : 0;
+  process.chdir(root);
+  try {
+    await build({ root, outDir: site, cacheDir: join(work, 'astro-cache'), logLevel: 'warn' });
+  } finally {
+    process.chdir(cwd);
+  }
+  return site;
 }

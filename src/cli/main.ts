@@ -1,12 +1,18 @@
-/** The `mechatlas` command: parses the command line and dispatches; exit 0 ok, 1 errors found, 2 bad usage. */
+/**
+ * The `mechatlas` command: parses the command line and dispatches. Exit 0 clean, 1 errors found,
+ * 2 bad usage (or a path that cannot be used), 3 an internal failure (exit-status.ts).
+ */
 import { parseArgs } from 'node:util';
 import { buildCommand } from './build-command.ts';
 import { checkCommand } from './check-command.ts';
 import { deriveCommand } from './derive-command.ts';
 import { exportCommand } from './export-command.ts';
 import { newCommand } from './new-command.ts';
-import { processOutput, UsageError, type Output } from './output.ts';
+import { EXIT } from './exit-status.ts';
+import { describeFileSystemError } from './file-system-error.ts';
+import { PathError, processOutput, UsageError, type Output } from './output.ts';
 import { toolVersion } from '../catalogue/index.ts';
+import { escapeControlCharacters } from '../render/index.ts';
 
 const USAGE = `usage: mechatlas <command> [options]
 
@@ -20,13 +26,17 @@ commands:
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
                       write the record's mass-action model as SBML Level 3 Version 2
-  build [--content DIR] [--out DIR] [--strict]
+  build [--content DIR] [--out DIR] [--strict] [--force]
                       build the catalogue site (default content/mechanisms into dist);
-                      --strict fails when a record has errors
+                      --strict fails when a record has errors; --force replaces a
+                      non-empty folder that an earlier build did not make
 
 options:
   -h, --help          this text
   -v, --version       the version
+
+exit status: 0 clean, 1 errors in the records, 2 bad usage or a path that cannot
+be used, 3 an internal failure of mechatlas (please report it)
 `;
 
 /** Runs the command line and returns the exit code. */
@@ -35,11 +45,34 @@ export async function main(argv: readonly string[], out: Output = processOutput)
     return await dispatch(argv, out);
   } catch (error) {
     if (error instanceof UsageError || isParseArgsError(error)) {
-      out.stderr(`mechatlas: ${(error as Error).message}\n\n${USAGE}`);
-      return 2;
+      out.stderr(`mechatlas: ${oneLine((error as Error).message)}\n\n${USAGE}`);
+      return EXIT.usage;
     }
-    throw error;
+    const problem = error instanceof PathError ? error.message : describeFileSystemError(error);
+    if (problem !== undefined) {
+      out.stderr(`mechatlas: ${oneLine(problem)}\n`);
+      return EXIT.usage;
+    }
+    out.stderr(internalFailure(error));
+    return EXIT.internal;
   }
+}
+
+/** A message as one printable line: control characters (a newline, an escape sequence) escaped. */
+function oneLine(text: string): string {
+  return escapeControlCharacters(text);
+}
+
+/** What a crash of mechatlas itself says: one line, how to report it, the stack only on request. */
+export function internalFailure(error: unknown): string {
+  const message = error instanceof Error ? error.message : String(error);
+  const stack = error instanceof Error && process.env['MECHATLAS_DEBUG'] ? `${error.stack}\n` : '';
+  return (
+    `mechatlas: internal failure: ${oneLine(message)}\n` +
+    `  this is a fault in mechatlas ${toolVersion()}, not in your records; please report it to the\n` +
+    `  mechatlas maintainers with the command you ran (MECHATLAS_DEBUG=1 prints the stack trace)\n` +
+    stack
+  );
 }
 
 async function dispatch(argv: readonly string[], out: Output): Promise<number> {
@@ -106,9 +139,13 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
           content: { type: 'string', default: 'content/mechanisms' },
           out: { type: 'string', default: 'dist' },
           strict: { type: 'boolean', default: false },
+          force: { type: 'boolean', default: false },
         },
       });
-      return buildCommand({ content: values.content, out: values.out, strict: values.strict }, out);
+      return buildCommand(
+        { content: values.content, out: values.out, strict: values.strict, force: values.force },
+        out,
+      );
     }
     default:
       throw new UsageError(`unknown command '${command}'`);

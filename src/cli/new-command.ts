@@ -1,21 +1,32 @@
 /** `mechatlas new ID`: writes a record to fill in; never overwrites an existing file. */
+import { existsSync, statSync } from 'node:fs';
 import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { UsageError, type Output } from './output.ts';
-
-const SLUG = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
+import { MAX_ID_LENGTH, recordIdProblem } from '../catalogue/index.ts';
+import { describeFileSystemError } from './file-system-error.ts';
+import { PathError, UsageError, type Output } from './output.ts';
 
 /** Creates DIR/ID.yaml from a commented template. */
 export async function newCommand(id: string, dir: string, out: Output): Promise<number> {
-  if (!SLUG.test(id)) throw new UsageError(`'${id}' is not a record id: use lower-case letters, digits and hyphens`);
+  if (recordIdProblem(id) !== undefined)
+    throw new UsageError(
+      `'${id}' is not a record id: use lower-case letters, digits and single hyphens (at most ${MAX_ID_LENGTH})`,
+    );
   const file = join(dir, `${id}.yaml`);
-  await mkdir(dir, { recursive: true });
+  const twin = join(dir, `${id}.yml`);
+  if (existsSync(twin)) throw new UsageError(`${twin} exists already and gives the same id; nothing was written`);
+  if (existsSync(dir) && !statSync(dir).isDirectory()) throw new PathError(`${dir} is a file, not a folder`);
+  try {
+    await mkdir(dir, { recursive: true });
+  } catch (error) {
+    throw new PathError(describeFileSystemError(error, 'create the folder') ?? `cannot create ${dir}`);
+  }
   try {
     await writeFile(file, template(), { flag: 'wx' });
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code === 'EEXIST')
       throw new UsageError(`${file} exists already; nothing was written`);
-    throw error;
+    throw new PathError(describeFileSystemError(error, 'write') ?? `cannot write ${file}`);
   }
   out.stdout(`wrote ${file}; fill it in, then run: npx mechatlas check ${file}\n`);
   return 0;

@@ -18,6 +18,7 @@ import { checkBalance, type StepBalance } from './mechanism/balance.ts';
 import { checkDetailedBalance } from './mechanism/detailed-balance.ts';
 import { buildMechanism, type Mechanism } from './mechanism/mechanism.ts';
 import { checkMolecularity } from './mechanism/molecularity.ts';
+import { checkNegativeConcentrations } from './mechanism/negative-concentrations.ts';
 import { readStepConstants, type StepConstants } from './mechanism/step-constants.ts';
 import { checkObservations } from './observations/check-observations.ts';
 import type { ObservationCheck } from './observations/judge-order.ts';
@@ -73,7 +74,7 @@ export interface DeriveOptions {
 /** Derives everything the catalogue shows about one mechanism record. */
 export function deriveMechanism(record: MechanismRecord, options: DeriveOptions = {}): Derivation {
   const built = buildMechanism(record);
-  const diagnostics = [...built.diagnostics];
+  const diagnostics = [...built.diagnostics, ...checkNegativeConcentrations(record.observations ?? [])];
   const mechanism = built.mechanism;
   if (!mechanism) return { buffered: [], diagnostics };
   const buffered = [...mechanism.species.values()].filter((s) => s.buffered).map((s) => s.symbol);

@@ -40,7 +40,7 @@ export type Approximation = 'auto' | 'rds' | 'steady_state' | 'both';
  */
 export type QuantityText = string | number;
 /**
- * An identifier made of lower-case letters, digits and single hyphens, e.g. peroxide-disproportionation.
+ * An identifier made of lower-case letters, digits and single hyphens, at most 100 characters, e.g. peroxide-disproportionation.
  *
  * This interface was referenced by `MechanismRecord`'s JSON-Schema
  * via the `definition` "Slug".
@@ -117,7 +117,7 @@ export interface MechanismRecord {
    */
   references?: Reference[];
   /**
-   * Discussion in Markdown; $...$ encloses LaTeX math. Rendered sanitised on the mechanism's page.
+   * Discussion in Markdown; $...$ encloses LaTeX math. Rendered sanitised on the mechanism's page. At most 20000 characters: longer discussions belong in a linked document.
    */
   notes?: string;
 }
@@ -182,7 +182,7 @@ export interface StepEntry {
    */
   rds?: boolean;
   /**
-   * The step's stoichiometric number: how many times it occurs per overall reaction (0: off the route). Derived when absent.
+   * The step's stoichiometric number: how many times it occurs per overall reaction (0: off the route; at most 1000). Derived when absent.
    */
   times?: number;
   /**

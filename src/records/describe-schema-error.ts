@@ -99,6 +99,11 @@ export function describeSchemaError(error: ErrorObject, path: RecordPath, where:
     }
     case 'format':
       return { at: 'value', message: `${where} ${formatWords(params.format)}`, actual: data };
+    case 'maxLength': {
+      const length = typeof data === 'string' ? data.length : undefined;
+      const message = `${where} is ${length ?? 'too many'} characters long; at most ${String(params.limit)} are allowed`;
+      return { at: 'value', message, actual: length, expected: params.limit };
+    }
     case 'anyOf':
     case 'oneOf':
       return { at: 'value', message: `${where} ${alternatives(error)}`, actual: data };

@@ -1,6 +1,8 @@
 /**
  * Which files a check covers: directories expand to their record files, named files are taken as
  * given. Targets that do not exist are returned, not thrown, so the CLI can report bad usage.
+ * Every entry named like a record is listed, not only regular files: a link is followed, and a
+ * pipe or device is reported by the loader rather than skipped in silence.
  */
 import { readdir, stat } from 'node:fs/promises';
 import { join } from 'node:path';
@@ -27,7 +29,8 @@ export async function findRecordFiles(targets: readonly string[]): Promise<{ fil
     else {
       const entries = await readdir(target, { withFileTypes: true });
       const names = entries
-        .filter((entry) => entry.isFile() && RECORD_FILE.test(entry.name))
+        // `.#x.yaml` is an editor's lock (a dangling link while the file is open), not a record.
+        .filter((entry) => !entry.isDirectory() && RECORD_FILE.test(entry.name) && !entry.name.startsWith('.#'))
         .map((entry) => entry.name)
         // Plain code-unit order, not locale order: the same list on every machine.
         .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));

@@ -27,7 +27,8 @@ export type {
 export { MAX_ALIAS_COUNT, parseRecordYaml } from './parse-record-yaml.ts';
 export type { ParsedYaml } from './parse-record-yaml.ts';
 export { placeDiagnostics } from './place-diagnostics.ts';
-export { isRecordId, recordId, suggestRecordId } from './record-id.ts';
+export { isPublishable, recordFileProblems } from './record-file-problems.ts';
+export { isRecordId, MAX_ID_LENGTH, recordId, recordIdProblem, suggestRecordId } from './record-id.ts';
 export { describeSchemaErrors, pathWords, recordPath } from './schema-messages.ts';
 export { createValidator, recordSchema, recordValidator } from './schema-validator.ts';
 export type { RecordValidator } from './schema-validator.ts';

@@ -4,6 +4,7 @@
  * number formats every writer shares. Pure: no input or output of its own.
  */
 export { catalogueReport, reportOf } from './report/catalogue-report.ts';
+export { escapeControlCharacters } from './report/control-characters.ts';
 export { derivationText, type DerivedRecord } from './report/derivation-text.ts';
 export { markdownReport } from './report/markdown.ts';
 export {
@@ -14,7 +15,7 @@ export {
   type RecordInput,
 } from './report/record-report.ts';
 export { sarifReport } from './report/sarif.ts';
-export { byPosition, summaryLine, textReport } from './report/text.ts';
+export { byPosition, diagnosticRow, summaryLine, textReport } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
 export { sbmlDocument } from './sbml/sbml.ts';

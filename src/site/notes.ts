@@ -9,6 +9,8 @@ import remarkMath from 'remark-math';
 import remarkParse from 'remark-parse';
 import remarkRehype from 'remark-rehype';
 import { unified } from 'unified';
+import { MAX_MATH_HTML } from './math.ts';
+import { capNotesMath, KATEX_OPTIONS } from './notes-math-cap.ts';
 
 const schema: SanitizeSchema = {
   ...defaultSchema,
@@ -61,21 +63,17 @@ function remarkLoneDisplayMath() {
   };
 }
 
+/** The most typeset HTML all formulas of one record's notes may add up to (the rest stay source). */
+const MAX_NOTES_MATH_HTML = 1_000_000;
+
 const processor = unified()
   .use(remarkParse)
   .use(remarkMath)
   .use(remarkLoneDisplayMath)
   .use(remarkRehype)
   .use(rehypeSanitize, schema)
-  .use(rehypeKatex, {
-    trust: false,
-    strict: 'ignore',
-    maxSize: 10,
-    maxExpand: 200,
-    output: 'htmlAndMathml',
-    throwOnError: false,
-    errorColor: '#8a1c1c',
-  } as KatexOptions)
+  .use(capNotesMath, { perFormula: MAX_MATH_HTML, total: MAX_NOTES_MATH_HTML })
+  .use(rehypeKatex, KATEX_OPTIONS as KatexOptions)
   .use(rehypeStringify);
 
 /** HTML of a record's notes. */

@@ -153,8 +153,8 @@ function discriminators(rivals: RecordView[], columns: RivalColumn[]): Discrimin
       const ordersB = b.report.rate_laws?.[0]?.orders ?? {};
       let best: Discriminator | undefined;
       for (const species of new Set([...Object.keys(ordersA), ...Object.keys(ordersB)])) {
-        const oa = range(ordersA[species]);
-        const ob = range(ordersB[species]);
+        const oa = range(Object.hasOwn(ordersA, species) ? ordersA[species] : undefined);
+        const ob = range(Object.hasOwn(ordersB, species) ? ordersB[species] : undefined);
         const difference = Math.max(Math.abs(oa[0] - ob[0]), Math.abs(oa[1] - ob[1]));
         if (difference > 0 && (!best || difference > best.difference))
           best = { a: a.id, b: b.id, species, orderA: oa, orderB: ob, difference };

@@ -13,6 +13,7 @@ describe('the public API', () => {
   it('exports exactly these values', () => {
     expect(Object.keys(records).sort()).toEqual([
       'MAX_ALIAS_COUNT',
+      'MAX_ID_LENGTH',
       'closestName',
       'createLocator',
       'createValidator',
@@ -21,6 +22,7 @@ describe('the public API', () => {
       'editDistance',
       'findAliasProblems',
       'findRecordFiles',
+      'isPublishable',
       'isRecordId',
       'keyText',
       'loadRecordFile',
@@ -28,7 +30,9 @@ describe('the public API', () => {
       'parseRecordYaml',
       'pathWords',
       'placeDiagnostics',
+      'recordFileProblems',
       'recordId',
+      'recordIdProblem',
       'recordPath',
       'recordSchema',
       'recordValidator',

@@ -54,9 +54,8 @@ export function walkSpecies(
 
 /** Drops zero amounts and lists the rest in the mechanism's species order, as plain numbers. */
 export function speciesRecord(amounts: ReadonlyMap<string, Rational>): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const [sp, v] of amounts) if (v.sign() > 0) out[sp] = v.toNumber();
-  return out;
+  // fromEntries defines own properties: a species named __proto__ is kept, not swallowed by the setter.
+  return Object.fromEntries([...amounts].filter(([, v]) => v.sign() > 0).map(([sp, v]) => [sp, v.toNumber()]));
 }
 
 function inOrder(amounts: Map<string, Rational>, order: readonly string[]): Map<string, Rational> {

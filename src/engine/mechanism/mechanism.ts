@@ -5,8 +5,12 @@
 import type { MechanismRecord, Role, SpeciesEntry } from '../../model/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { parseEquation, type Term } from '../notation/equation.ts';
+import { confusableCharacter } from '../notation/confusable-characters.ts';
 import { parseFormula, type Composition } from '../notation/formula.ts';
 import { Rational } from '../exact/rational.ts';
+
+/** The largest stoichiometric number a step may be given (the schema's maximum for `times`). */
+export const MAX_TIMES = 1000;
 
 export interface Step {
   index: number;
@@ -58,6 +62,15 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
       return;
     }
     const { reactants, products, reversible } = parsed.equation;
+    const times = entry.times;
+    // The schema says the same; the engine also takes records that were never validated.
+    if (times !== undefined && !(Number.isSafeInteger(times) && times >= 0 && times <= MAX_TIMES)) {
+      const message = `times must be a whole number from 0 to ${MAX_TIMES}`;
+      diagnostics.push(
+        diagnostic('record/schema', 'error', message, { path: ['steps', index, 'times'], actual: times }),
+      );
+      return;
+    }
     steps.push({
       index,
       label: entry.label ?? String(index + 1),
@@ -67,7 +80,7 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
       reversible,
       rds: entry.rds === true,
       molecularity: reactants.reduce((n, t) => n + t.coefficient.toNumber(), 0),
-      ...(entry.times !== undefined && { times: entry.times }),
+      ...(times !== undefined && { times }),
       change: netChange(reactants, products),
     });
   });
@@ -89,7 +102,8 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
     );
   }
   for (const symbol of firstUse.keys()) {
-    const entry = record.species?.[symbol];
+    // Own entries only: a species named `constructor` is not Object.prototype.constructor.
+    const entry = record.species && Object.hasOwn(record.species, symbol) ? record.species[symbol] : undefined;
     const { composition, problem } = compositionOf(symbol, entry, notation);
     if (problem) {
       const use = firstUse.get(symbol)!;
@@ -102,6 +116,14 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
           note: 'give the species a formula, `formula: null` for no composition, or set `notation: labels` for the record',
         }),
       );
+    }
+    const confusing = notation === 'labels' ? confusableCharacter(symbol) : undefined;
+    if (confusing) {
+      const use = firstUse.get(symbol)!;
+      const message = `the symbol '${symbol}' holds ${confusing.description}`;
+      const note = 'two symbols that look the same are two species; write the symbol in plain Latin letters';
+      const where = { path: ['steps', use.step, 'equation'], offset: use.offset + confusing.index };
+      diagnostics.push(diagnostic('species/confusable', 'warning', message, { ...where, note }));
     }
     species.set(symbol, {
       symbol,

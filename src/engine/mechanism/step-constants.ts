@@ -93,6 +93,11 @@ function checkedQuantity(
     return undefined;
   }
   const q = parsed.quantity;
+  if (!(q.value > 0)) {
+    const message = `${field} is ${q.value === 0 ? 'zero' : 'negative'}; ${what} must be positive`;
+    diagnostics.push(diagnostic('constants/negative', 'error', message, { path, actual: text }));
+    return undefined;
+  }
   if (q.unit.text === '' && bareNumberAllowed) {
     // A bare equilibrium constant is read against the 1 M standard state, as tables usually give it.
     return q;

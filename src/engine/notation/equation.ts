@@ -54,6 +54,11 @@ const NOT_ARROWS: readonly { text: string; message: string }[] = [
   { text: '=', message: "'=' is not a step arrow; write '->' for a one-way step or '<=>' for a reversible one" },
 ];
 
+/** The largest coefficient read: elementary steps have small ones, and a huge one would only make every later stage slow. */
+export const MAX_COEFFICIENT = 1000;
+/** The longest species symbol read (the site's file names and every formula reader stay bounded). */
+export const MAX_SYMBOL_LENGTH = 100;
+
 const WHOLE_GLUED = /^(\d+)(?=[A-Za-z[(])/;
 // Fractions and decimals, spaced or glued, so that `1/2 O2` and `0.5O2` get the coefficient message.
 const NUMBER_LIKE = /^([+-]?(\d+(\.\d*)?|\.\d+)(\/\d+)?|[½⅓⅔¼¾⅕⅙⅛])/;
@@ -132,7 +137,17 @@ function readTerm(words: readonly { text: string; at: number }[]): Term | Equati
   if (!WHOLE_ONLY.test(first.text) || /^0+$/.test(first.text)) return wholeNumberError(first.at);
   if (third !== undefined)
     return { error: "terms are separated by ' + ' (a plus with spaces on both sides)", offset: third.at };
-  return { species: second.text, coefficient: Rational.of(BigInt(first.text)), offset: second.at };
+  return checkedTerm(second.text, first.text, second.at, first.at);
+}
+
+/** A term whose coefficient and symbol are within the limits, or the error at the part that is not. */
+function checkedTerm(species: string, whole: string, offset: number, wholeAt: number): Term | EquationError {
+  const coefficient = BigInt(whole);
+  if (coefficient > BigInt(MAX_COEFFICIENT))
+    return { error: `a coefficient of an elementary step is at most ${MAX_COEFFICIENT}`, offset: wholeAt };
+  if (species.length > MAX_SYMBOL_LENGTH)
+    return { error: `a species symbol is at most ${MAX_SYMBOL_LENGTH} characters long`, offset };
+  return { species, coefficient: Rational.of(coefficient), offset };
 }
 
 function readGluedTerm(word: { text: string; at: number }): Term | EquationError {
@@ -142,17 +157,13 @@ function readGluedTerm(word: { text: string; at: number }): Term | EquationError
   const whole = WHOLE_GLUED.exec(word.text)?.[1];
   if (whole !== undefined && number === whole) {
     if (/^0+$/.test(whole)) return wholeNumberError(word.at);
-    return {
-      species: word.text.slice(whole.length),
-      coefficient: Rational.of(BigInt(whole)),
-      offset: word.at + whole.length,
-    };
+    return checkedTerm(word.text.slice(whole.length), whole, word.at + whole.length, word.at);
   }
   // `0.5O2`, `1/2O2`, `½O2`: a fraction glued to a species, never a species name of its own.
   if (number !== undefined && /^[A-Za-z[(]/.test(word.text.slice(number.length)) && !WHOLE_ONLY.test(number)) {
     return wholeNumberError(word.at);
   }
-  return { species: word.text, coefficient: Rational.ONE, offset: word.at };
+  return checkedTerm(word.text, '1', word.at, word.at);
 }
 
 function wholeNumberError(offset: number): EquationError {

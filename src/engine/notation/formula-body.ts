@@ -20,6 +20,9 @@ import {
   unexpectedMessage,
 } from './formula-reader.ts';
 
+/** How deep brackets may nest: [Co(NH3)6]3+ needs two; a deeper formula is a mistake (or an attack on the stack). */
+export const MAX_BRACKET_DEPTH = 8;
+
 /** Element symbol → count; nuclides such as 13C are their own symbols. */
 export type Counts = Map<string, number>;
 
@@ -79,7 +82,9 @@ function readGroupUnit(r: Reader, depth: number): Counts | undefined {
   const at = r.pos;
   const open = r.peek();
   if (open === '[' && isDigitOf(ASCII_DIGITS, r.peek(1))) return readNuclide(r, depth);
-  if (PHASE_AHEAD.test(r.text.slice(at, r.end))) return r.fail('the phase goes at the end of the formula', at);
+  if (PHASE_AHEAD.test(r.text.slice(at, Math.min(r.end, at + 4))))
+    return r.fail('the phase goes at the end of the formula', at);
+  if (depth >= MAX_BRACKET_DEPTH) return r.fail(`brackets nested more than ${MAX_BRACKET_DEPTH} deep`, at);
   r.pos++;
   const inner = readBody(r, depth + 1);
   if (inner === undefined) return undefined;

@@ -57,7 +57,8 @@ export function readDigits(r: Reader, family: string): number | undefined {
 export function unexpectedMessage(r: Reader): string {
   const c = r.peek();
   if (c === ')' || c === ']') return `unmatched '${c}'`;
-  if (c === '(' && PHASE_AHEAD.test(r.text.slice(r.pos, r.end))) return 'the phase goes at the end of the formula';
+  if (c === '(' && PHASE_AHEAD.test(r.text.slice(r.pos, Math.min(r.end, r.pos + 4))))
+    return 'the phase goes at the end of the formula';
   if (startsCharge(c) && c !== '{') return 'the charge goes at the end of the formula';
   if (/\s/.test(c)) return 'no spaces inside a formula';
   return `unexpected character '${c}'`;

@@ -60,6 +60,8 @@ export function observationValues(
       );
       continue;
     }
+    // A negative concentration is reported once, by mechanism/negative-concentrations.ts, and not used.
+    if (parsed.quantity.value < 0) continue;
     listed.set(species, toCanonical(parsed.quantity));
     if (!context.internal.includes(species)) values.set(concentration(species), toCanonical(parsed.quantity));
   }

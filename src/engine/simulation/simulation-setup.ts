@@ -57,7 +57,8 @@ export function simulationSetup(
   for (const [species, text] of Object.entries(observation.concentrations ?? {})) {
     const i = model.species.indexOf(species);
     const q = parseQuantity(text);
-    if (i < 0 || 'error' in q || !sameDimension(q.quantity.unit.dimension, CONCENTRATION)) continue;
+    if (i < 0 || 'error' in q || !sameDimension(q.quantity.unit.dimension, CONCENTRATION) || q.quantity.value < 0)
+      continue;
     y0[i] = toCanonical(q.quantity);
   }
   for (const sp of held)

@@ -6,20 +6,26 @@ import { approximationInvalid } from './approximation-invalid.ts';
 import { balanceAtoms } from './balance-atoms.ts';
 import { balanceCharge } from './balance-charge.ts';
 import { constantsDetailedBalance } from './constants-detailed-balance.ts';
+import { constantsNegative } from './constants-negative.ts';
 import { energyProfile } from './energy-profile.ts';
 import { energyRdsSpan } from './energy-rds-span.ts';
 import { equationSyntax } from './equation-syntax.ts';
 import { formulaSyntax } from './formula-syntax.ts';
+import { internalFailure } from './internal-failure.ts';
+import { observationNegativeConcentration } from './observation-negative-concentration.ts';
 import { observationOrder } from './observation-order.ts';
 import { observationSpecies } from './observation-species.ts';
 import { observationUnits } from './observation-units.ts';
 import { rateNonlinear } from './rate-nonlinear.ts';
 import { rateNotEliminable } from './rate-not-eliminable.ts';
+import { recordDuplicateId } from './record-duplicate-id.ts';
+import { recordFile } from './record-file.ts';
 import { recordSchema } from './record-schema.ts';
 import { recordYaml } from './record-yaml.ts';
 import { rolesDeclaredMismatch } from './roles-declared-mismatch.ts';
 import { routeAmbiguous } from './route-ambiguous.ts';
 import { simulationFailed } from './simulation-failed.ts';
+import { speciesConfusable } from './species-confusable.ts';
 import { speciesUnused } from './species-unused.ts';
 import { stepMolecularity } from './step-molecularity.ts';
 import { stepRds } from './step-rds.ts';
@@ -49,6 +55,12 @@ export const RULES = [
   observationSpecies,
   simulationFailed,
   constantsDetailedBalance,
+  internalFailure,
+  recordDuplicateId,
+  recordFile,
+  constantsNegative,
+  observationNegativeConcentration,
+  speciesConfusable,
 ] as const;
 
 /** A rule's stable id. */

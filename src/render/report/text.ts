@@ -1,16 +1,22 @@
 /** The text reporter: one row per diagnostic, sorted by file, line and column, then a summary line. */
 import type { CatalogueReport } from '../../model/index.ts';
 import type { DiagnosticJson } from '../../model/index.ts';
+import { escapeControlCharacters as printable } from './control-characters.ts';
 
 /** Renders the report for a terminal. */
 export function textReport(report: CatalogueReport): string {
   const rows = report.records.flatMap((r) => r.diagnostics.map((d) => ({ ...d, file: d.file ?? r.file })));
   rows.sort(byPosition);
-  const lines = rows.map((d) =>
-    [`${d.file}:${d.line ?? 1}:${d.column ?? 1}`, d.severity, d.message, d.rule].join('  '),
-  );
+  const lines = rows.map(diagnosticRow);
   lines.push(summaryLine(report));
   return lines.join('\n') + '\n';
+}
+
+/** One row: `file:line:column  severity  message  rule`, control characters shown as escapes. */
+export function diagnosticRow(d: DiagnosticJson): string {
+  return [`${printable(d.file ?? '')}:${d.line ?? 1}:${d.column ?? 1}`, d.severity, printable(d.message), d.rule].join(
+    '  ',
+  );
 }
 
 /** "12 records checked: 1 error, 2 warnings, 3 notes". */

@@ -8,13 +8,15 @@
 import {
   CONCENTRATION,
   parseQuantity,
+  Rational,
   sameDimension,
   toCanonical,
   type Mechanism,
   type Step,
 } from '../../engine/index.ts';
 import type { MechanismRecord } from '../../model/index.ts';
-import { sbmlIds } from './sbml-ids.ts';
+import { sbmlIds, uniqueIds } from './sbml-ids.ts';
+import { xmlText } from './xml-text.ts';
 
 /** The SBML document as a string; constants given or from energies, by symbol (k_1, k_-1). */
 export function sbmlDocument(
@@ -24,6 +26,7 @@ export function sbmlDocument(
   constants: ReadonlyMap<string, number>,
 ): string {
   const ids = sbmlIds([...mechanism.species.keys()]);
+  const constantIds = parameterIds(mechanism);
   const start = startingConcentrations(record, [...mechanism.species.keys()]);
   const species = [...mechanism.species.values()].map((s) => {
     const boundary = s.buffered || s.solvent;
@@ -33,10 +36,11 @@ export function sbmlDocument(
     const names = [`k_${step.label}`, ...(step.reversible ? [`k_-${step.label}`] : [])];
     return names.map((name) => {
       const value = reverseOrForward(name, step, constants);
-      return `      <parameter id="${parameterId(name)}" name="${xml(name)}"${value === undefined ? '' : ` value="${num(value)}"`} constant="true"/>`;
+      return `      <parameter id="${constantIds.get(name)}" name="${xml(name)}"${value === undefined ? '' : ` value="${num(value)}"`} constant="true"/>`;
     });
   });
-  const reactions = mechanism.steps.map((step) => reaction(step, ids));
+  const reactionIds = uniqueIds(mechanism.steps.map((step) => `r_${parameterId(step.label)}`));
+  const reactions = mechanism.steps.map((step, i) => reaction(step, reactionIds[i]!, ids, constantIds));
   return [
     '<?xml version="1.0" encoding="UTF-8"?>',
     '<sbml xmlns="http://www.sbml.org/sbml/level3/version2/core" level="3" version="2">',
@@ -60,19 +64,37 @@ export function sbmlDocument(
   ].join('\n');
 }
 
-function reaction(step: Step, ids: ReadonlyMap<string, string>): string {
+/**
+ * The SId of each rate constant by name: `k_1`, and `k_m1` for the reverse k_-1; unique, so a
+ * step labelled `m1` and the reverse of step `1` never share a parameter.
+ */
+function parameterIds(mechanism: Mechanism): Map<string, string> {
+  const names = mechanism.steps.flatMap((step) => [
+    `k_${step.label}`,
+    ...(step.reversible ? [`k_-${step.label}`] : []),
+  ]);
+  const ids = uniqueIds(names.map(parameterId));
+  return new Map(names.map((name, i) => [name, ids[i]!]));
+}
+
+function reaction(
+  step: Step,
+  id: string,
+  ids: ReadonlyMap<string, string>,
+  constantIds: ReadonlyMap<string, string>,
+): string {
   const refs = (terms: Step['reactants']) =>
     terms.map(
       (t) =>
         `          <speciesReference species="${ids.get(t.species)}" stoichiometry="${t.coefficient.toNumber()}" constant="true"/>`,
     );
+  // A coefficient is a power, never one factor per particle (a coefficient of 10^9 stays one line).
+  const factor = (t: Step['reactants'][number]) =>
+    t.coefficient.equals(Rational.ONE)
+      ? `          <ci> ${ids.get(t.species)} </ci>`
+      : `          <apply><power/><ci> ${ids.get(t.species)} </ci><cn type="integer"> ${t.coefficient.toString()} </cn></apply>`;
   const side = (name: string, terms: Step['reactants']) =>
-    [
-      `          <ci> ${parameterId(name)} </ci>`,
-      ...terms.flatMap((t) =>
-        Array.from({ length: t.coefficient.toNumber() }, () => `          <ci> ${ids.get(t.species)} </ci>`),
-      ),
-    ].join('\n');
+    [`          <ci> ${constantIds.get(name)} </ci>`, ...terms.map(factor)].join('\n');
   const forward = `<apply><times/>\n${side(`k_${step.label}`, step.reactants)}\n        </apply>`;
   const rate = step.reversible
     ? `<apply><minus/>\n        ${forward}\n        <apply><times/>\n${side(`k_-${step.label}`, step.products)}\n        </apply></apply>`
@@ -105,7 +127,12 @@ function startingConcentrations(record: MechanismRecord, symbols: string[]): Map
   const first = (record.observations ?? []).find((o) => o.concentrations);
   for (const [sp, text] of Object.entries(first?.concentrations ?? {})) {
     const q = parseQuantity(text);
-    if (symbols.includes(sp) && !('error' in q) && sameDimension(q.quantity.unit.dimension, CONCENTRATION))
+    if (
+      symbols.includes(sp) &&
+      !('error' in q) &&
+      q.quantity.value >= 0 &&
+      sameDimension(q.quantity.unit.dimension, CONCENTRATION)
+    )
       out.set(sp, toCanonical(q.quantity));
   }
   return out;
@@ -122,10 +149,5 @@ function num(x: number): string {
 }
 
 function xml(text: string): string {
-  return text
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&apos;');
+  return xmlText(text);
 }
