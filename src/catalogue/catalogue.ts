@@ -50,7 +50,9 @@ export async function loadCatalogue(folder: string): Promise<Catalogue> {
   for (const file of files) {
     const checked = await checkRecordFile(file);
     const named = relative(process.cwd(), file) || file;
-    const diagnostics = checked.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: named }));
+    // A diagnostic in a data file keeps that file's name, made relative like the record's.
+    const rename = (f: string) => (f === file ? named : relative(process.cwd(), f) || f);
+    const diagnostics = checked.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: rename(d.file) }));
     const record: CatalogueRecord = { ...checked, file: named, diagnostics, source: await readFile(file, 'utf8') };
     const basis = checked.derivation && simulationBasis(checked.derivation);
     const series =

@@ -27,6 +27,8 @@ export type {
 export { MAX_ALIAS_COUNT, parseRecordYaml } from './parse-record-yaml.ts';
 export type { ParsedYaml } from './parse-record-yaml.ts';
 export { placeDiagnostics } from './place-diagnostics.ts';
+export { readObservationData, type ObservationDataResult } from './read-observation-data.ts';
+export { contentFolderOf, resolveDataPath } from './resolve-data-path.ts';
 export { isRecordId, recordId, suggestRecordId } from './record-id.ts';
 export { describeSchemaErrors, pathWords, recordPath } from './schema-messages.ts';
 export { createValidator, recordSchema, recordValidator } from './schema-validator.ts';

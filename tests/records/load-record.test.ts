@@ -14,6 +14,7 @@ describe('the public API', () => {
     expect(Object.keys(records).sort()).toEqual([
       'MAX_ALIAS_COUNT',
       'closestName',
+      'contentFolderOf',
       'createLocator',
       'createValidator',
       'describeSchemaError',
@@ -28,10 +29,12 @@ describe('the public API', () => {
       'parseRecordYaml',
       'pathWords',
       'placeDiagnostics',
+      'readObservationData',
       'recordId',
       'recordPath',
       'recordSchema',
       'recordValidator',
+      'resolveDataPath',
       'sourceShift',
       'suggestRecordId',
     ]);

@@ -62,7 +62,12 @@ describe('NIST StRD Thurber: a rational cubic/cubic, 37 points, 7 parameters', (
     x.map((xi) => {
       const d = denominator(b, xi);
       const f = numerator(b, xi) / d;
-      return [...powers(xi).map((v) => v / d), ...powers(xi).slice(1).map((v) => (-f * v) / d)];
+      return [
+        ...powers(xi).map((v) => v / d),
+        ...powers(xi)
+          .slice(1)
+          .map((v) => (-f * v) / d),
+      ];
     });
   // Certified Values of Thurber.dat: estimates and standard deviations of b1 … b7.
   const estimates = [

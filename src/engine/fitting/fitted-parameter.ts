@@ -40,11 +40,37 @@ export function fittedParameter(
     interval: symmetricInterval(value, standardError, dof),
     level: CONFIDENCE_LEVEL,
   };
-  return note === undefined ? { ...base, identifiable: true } : { ...base, identifiable: false, identifiabilityNote: note };
+  return note === undefined
+    ? { ...base, identifiable: true }
+    : { ...base, identifiable: false, identifiabilityNote: note };
 }
 
 /** The correlation matrix of a covariance matrix (NaN where a variance is zero or not finite). */
 export function correlationMatrix(covariance: readonly (readonly number[])[]): number[][] {
   const sd = covariance.map((row, i) => Math.sqrt(row[i]!));
   return covariance.map((row, i) => row.map((c, j) => (i === j ? 1 : c / (sd[i]! * sd[j]!))));
+}
+
+/** Something the caller should know about a fit, with a stable kind for rules and pages. */
+export interface FitIssue {
+  kind: 'not-converged' | 'not-identifiable' | 'ill-conditioned' | 'model-failed' | 'too-few-points';
+  parameter?: string;
+  message: string;
+}
+
+/** What every least-squares fit reports besides its parameters. */
+export interface LeastSquaresSummary {
+  covariance: number[][];
+  correlation: number[][];
+  /** weighted residual sum of squares Σ wᵢ rᵢ² */
+  rss: number;
+  /** points */
+  n: number;
+  /** degrees of freedom: points less fitted parameters */
+  dof: number;
+  /** √(rss / dof): the residual standard deviation (for unit weights, in the unit of y) */
+  residualStandardDeviation: number;
+  fitted: number[];
+  /** y − fitted, unweighted */
+  residuals: number[];
 }

@@ -4,17 +4,10 @@
  * criteria that compare models fitted to the same data. Pure: numbers in, numbers out.
  */
 export { CONFIDENCE_LEVEL, fTailProbability, intervalMultiplier, studentTQuantile } from './distributions.ts';
-export { correlationMatrix, type FittedParameter } from './fitted-parameter.ts';
+export { correlationMatrix, type FitIssue, type FittedParameter } from './fitted-parameter.ts';
 export { linearLeastSquares, type LinearFit, type LinearProblem, type Weighting } from './linear-least-squares.ts';
-export {
-  fitNonlinear,
-  type FitIssue,
-  type NonlinearFit,
-  type NonlinearOptions,
-  type NonlinearParameter,
-  type NonlinearParameterFit,
-  type NonlinearProblem,
-} from './nonlinear-least-squares.ts';
+export { fitNonlinear, type NonlinearOptions } from './nonlinear-least-squares.ts';
+export type { NonlinearFit, NonlinearParameter, NonlinearParameterFit, NonlinearProblem } from './nonlinear-fit.ts';
 export { POORLY_DETERMINED, SINGULAR_CONDITION } from './nonlinear-statistics.ts';
 export { relativeOffset } from './relative-offset.ts';
 export {
@@ -34,3 +27,5 @@ export {
   type EyringFit,
   type TemperatureSeries,
 } from './activation-parameters.ts';
+export { readKineticData } from './read-kinetic-data.ts';
+export type { InitialRateData, KineticData, TemperatureSeriesData, TimeCourseData } from './kinetic-data.ts';

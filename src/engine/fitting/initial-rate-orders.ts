@@ -5,8 +5,7 @@
  * at one concentration throughout are reported as held, not fitted: their orders are folded into
  * k_app and cannot be found from these data.
  */
-import type { FitIssue } from './nonlinear-least-squares.ts';
-import type { FittedParameter } from './fitted-parameter.ts';
+import type { FitIssue, FittedParameter } from './fitted-parameter.ts';
 import { linearLeastSquares, type LinearFit, type Weighting } from './linear-least-squares.ts';
 
 /** An initial-rate table in consistent units (the engine uses M and M s^-1). */

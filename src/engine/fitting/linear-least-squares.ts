@@ -6,7 +6,12 @@
  * the ill-conditioned NIST Longley problem come out to its certified digits.
  */
 import { Matrix, SingularValueDecomposition } from 'ml-matrix';
-import { correlationMatrix, fittedParameter, type FittedParameter } from './fitted-parameter.ts';
+import {
+  correlationMatrix,
+  fittedParameter,
+  type FittedParameter,
+  type LeastSquaresSummary,
+} from './fitted-parameter.ts';
 
 /** How weights are read: as relative (scaled by the residual variance) or as 1/σ² of known σ. */
 export type Weighting = 'relative' | 'absolute';
@@ -24,22 +29,10 @@ export interface LinearProblem {
 }
 
 /** A linear least-squares fit. */
-export interface LinearFit {
+export interface LinearFit extends LeastSquaresSummary {
   parameters: FittedParameter[];
-  covariance: number[][];
-  correlation: number[][];
-  /** weighted residual sum of squares Σ wᵢ rᵢ² */
-  rss: number;
-  /** points */
-  n: number;
-  /** degrees of freedom n − rank */
-  dof: number;
-  /** √(rss / dof): the residual standard deviation (for unit weights, in the unit of y) */
-  residualStandardDeviation: number;
   /** 1 − rss/tss, with tss about the weighted mean when a column is constant (an intercept), otherwise about zero */
   rSquared: number;
-  fitted: number[];
-  residuals: number[];
   /** numerical rank of the design; below the number of columns the problem is not identifiable */
   rank: number;
   /** ratio of the largest to the smallest singular value of the column-scaled weighted design */

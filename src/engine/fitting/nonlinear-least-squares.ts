@@ -9,30 +9,9 @@ import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { numericJacobian } from './numeric-jacobian.ts';
 import { relativeOffset } from './relative-offset.ts';
 import { nonlinearStatistics } from './nonlinear-statistics.ts';
-import type { FittedParameter } from './fitted-parameter.ts';
-import { linearLeastSquares, type Weighting } from './linear-least-squares.ts';
-
-/** One parameter of a nonlinear model. */
-export interface NonlinearParameter {
-  name: string;
-  /** the starting value (on the natural scale) */
-  initial: number;
-  /** true: fitted as ln(value), so it stays positive (rate and equilibrium constants) */
-  positive?: boolean;
-}
-
-/** A nonlinear least-squares problem: the model gives every point's value at once. */
-export interface NonlinearProblem {
-  parameters: readonly NonlinearParameter[];
-  /** the model's value at each point, for parameter values on the natural scale */
-  model(values: readonly number[]): readonly number[];
-  /** ∂fᵢ/∂pⱼ on the natural scale (rows points, columns parameters); central differences when absent */
-  jacobian?(values: readonly number[]): readonly (readonly number[])[];
-  y: readonly number[];
-  /** one weight per point (1/σ² when uncertainties are known); all 1 when absent */
-  weights?: readonly number[];
-  weighting?: Weighting;
-}
+import type { FitIssue } from './fitted-parameter.ts';
+import { linearLeastSquares } from './linear-least-squares.ts';
+import type { NonlinearFit, NonlinearProblem } from './nonlinear-fit.ts';
 
 /** How hard to try. */
 export interface NonlinearOptions {
@@ -40,41 +19,6 @@ export interface NonlinearOptions {
   maxIterations?: number;
   /** converged when the relative offset falls below this (default 1e-6) */
   tolerance?: number;
-}
-
-/** Something the caller should know about a fit, with a stable kind for rules and pages. */
-export interface FitIssue {
-  kind: 'not-converged' | 'not-identifiable' | 'ill-conditioned' | 'model-failed' | 'too-few-points';
-  parameter?: string;
-  message: string;
-}
-
-/** A fitted parameter of a nonlinear model, and the scale it was fitted on. */
-export interface NonlinearParameterFit extends FittedParameter {
-  /** 'log': fitted as ln(value); the interval is exp(ln value ± t·SE(ln value)), not symmetric */
-  scale: 'linear' | 'log';
-  /** SE of ln(value) for a parameter fitted on the log scale */
-  logStandardError?: number;
-}
-
-/** A nonlinear least-squares fit. */
-export interface NonlinearFit {
-  parameters: NonlinearParameterFit[];
-  covariance: number[][];
-  correlation: number[][];
-  rss: number;
-  n: number;
-  dof: number;
-  residualStandardDeviation: number;
-  fitted: number[];
-  residuals: number[];
-  converged: boolean;
-  iterations: number;
-  /** the Bates–Watts relative offset at the end (below `tolerance` when converged) */
-  relativeOffset: number;
-  /** condition number of the column-scaled Jacobian: large means the parameters are entangled */
-  conditionNumber: number;
-  issues: FitIssue[];
 }
 
 const ROUND = 25;
@@ -85,22 +29,31 @@ export function fitNonlinear(problem: NonlinearProblem, options: NonlinearOption
   const p = problem.parameters.length;
   const n = problem.y.length;
   const root = (problem.weights ?? problem.y.map(() => 1)).map((w) => Math.sqrt(w));
-  const natural = (theta: readonly number[]) => theta.map((t, j) => (problem.parameters[j]!.positive ? Math.exp(t) : t));
+  const natural = (theta: readonly number[]) =>
+    theta.map((t, j) => (problem.parameters[j]!.positive ? Math.exp(t) : t));
   const scaledModel = (theta: readonly number[]) => problem.model(natural(theta)).map((f, i) => root[i]! * f);
   const scaledY = problem.y.map((v, i) => root[i]! * v);
   const jacobian = (theta: readonly number[]): number[][] => {
     if (!problem.jacobian) return numericJacobian(scaledModel, theta);
     const values = natural(theta);
-    return problem.jacobian(values).map((row, i) =>
-      row.map((d, j) => root[i]! * d * (problem.parameters[j]!.positive ? values[j]! : 1)),
-    );
+    return problem
+      .jacobian(values)
+      .map((row, i) => row.map((d, j) => root[i]! * d * (problem.parameters[j]!.positive ? values[j]! : 1)));
   };
   let theta = problem.parameters.map((q) => (q.positive ? Math.log(q.initial) : q.initial));
   const issues: FitIssue[] = [];
   if (n <= p) issues.push({ kind: 'too-few-points', message: `${n} points cannot determine ${p} parameters` });
   if (!scaledModel(theta).every(Number.isFinite) || !theta.every(Number.isFinite)) {
     issues.push({ kind: 'model-failed', message: 'the model cannot be evaluated at the starting values' });
-    return nonlinearStatistics(problem, theta, jacobian(theta), scaledModel, scaledY, { iterations: 0, offset: NaN }, issues);
+    return nonlinearStatistics(
+      problem,
+      theta,
+      jacobian(theta),
+      scaledModel,
+      scaledY,
+      { iterations: 0, offset: NaN },
+      issues,
+    );
   }
   // The iterations run on φⱼ = cⱼ θⱼ, with cⱼ the length of the Jacobian's column j at the start,
   // so the package's damping (λ added to every diagonal element alike) treats a parameter of
@@ -108,7 +61,8 @@ export function fitNonlinear(problem: NonlinearProblem, options: NonlinearOption
   const columns = columnLengths(jacobian(theta));
   const toTheta = (phi: readonly number[]) => phi.map((f, j) => f / columns[j]!);
   const phiModel = (phi: readonly number[]) => scaledModel(toTheta(phi));
-  const phiJacobian = (phi: readonly number[]) => jacobian(toTheta(phi)).map((row) => row.map((d, j) => d / columns[j]!));
+  const phiJacobian = (phi: readonly number[]) =>
+    jacobian(toTheta(phi)).map((row) => row.map((d, j) => d / columns[j]!));
   let phi = theta.map((t, j) => t * columns[j]!);
   let iterations = 0;
   let offset = NaN;
@@ -135,7 +89,10 @@ export function fitNonlinear(problem: NonlinearProblem, options: NonlinearOption
   ({ theta, offset } = polish(theta, offset, scaledModel, jacobian, scaledY));
   if (!(offset < tolerance)) {
     const what = Number.isFinite(offset) ? `relative offset ${offset.toExponential(2)}` : 'no convergence measure';
-    issues.push({ kind: 'not-converged', message: `the fit did not converge after ${iterations} iterations (${what})` });
+    issues.push({
+      kind: 'not-converged',
+      message: `the fit did not converge after ${iterations} iterations (${what})`,
+    });
   }
   return nonlinearStatistics(problem, theta, jacobian(theta), scaledModel, scaledY, { iterations, offset }, issues);
 }

@@ -7,7 +7,8 @@
 import { Matrix, SingularValueDecomposition } from 'ml-matrix';
 import { CONFIDENCE_LEVEL, intervalMultiplier } from './distributions.ts';
 import { correlationMatrix } from './fitted-parameter.ts';
-import type { FitIssue, NonlinearFit, NonlinearParameterFit, NonlinearProblem } from './nonlinear-least-squares.ts';
+import type { FitIssue } from './fitted-parameter.ts';
+import type { NonlinearFit, NonlinearParameterFit, NonlinearProblem } from './nonlinear-fit.ts';
 
 /**
  * A parameter whose standard error exceeds its value (or, fitted as a logarithm, whose interval

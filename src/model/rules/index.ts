@@ -6,6 +6,14 @@ import { approximationInvalid } from './approximation-invalid.ts';
 import { balanceAtoms } from './balance-atoms.ts';
 import { balanceCharge } from './balance-charge.ts';
 import { constantsDetailedBalance } from './constants-detailed-balance.ts';
+import { dataCell } from './data-cell.ts';
+import { dataColumns } from './data-columns.ts';
+import { dataFile } from './data-file.ts';
+import { dataNotIdentifiable } from './data-not-identifiable.ts';
+import { dataPath } from './data-path.ts';
+import { dataPoints } from './data-points.ts';
+import { dataRange } from './data-range.ts';
+import { dataUnits } from './data-units.ts';
 import { energyProfile } from './energy-profile.ts';
 import { energyRdsSpan } from './energy-rds-span.ts';
 import { equationSyntax } from './equation-syntax.ts';
@@ -49,6 +57,14 @@ export const RULES = [
   observationSpecies,
   simulationFailed,
   constantsDetailedBalance,
+  dataPath,
+  dataFile,
+  dataColumns,
+  dataUnits,
+  dataCell,
+  dataRange,
+  dataPoints,
+  dataNotIdentifiable,
 ] as const;
 
 /** A rule's stable id. */
