@@ -135,7 +135,7 @@ function runRound(
 
 /**
  * Up to three Gauss–Newton steps from the minimum the iterations found, each kept only when it
- * lowers the relative offset: near the minimum the sum of squares is flat to rounding, so a
+ * lowers the relative offset and not the fit: near the minimum the sum of squares is flat to rounding, so a
  * method that compares sums of squares stops a few digits short of what the data support.
  */
 function polish(
@@ -147,15 +147,19 @@ function polish(
 ): { theta: number[]; offset: number } {
   let theta = start.slice();
   let offset = startOffset;
+  let rss = sumOfSquares(model(theta), y);
   for (let k = 0; k < 3 && offset > 0; k++) {
     const residuals = residualsOf(model(theta), y);
     const step = linearLeastSquares({ design: jacobian(theta), y: residuals }).parameters.map((q) => q.value);
     const next = theta.map((t, j) => t + step[j]!);
     if (!next.every(Number.isFinite)) break;
+    const nextRss = sumOfSquares(model(next), y);
     const nextOffset = relativeOffset(jacobian(next), residualsOf(model(next), y));
-    if (!(nextOffset < offset)) break;
+    // Kept only if it lowers the offset without raising the sum of squares beyond rounding.
+    if (!(nextOffset < offset) || !(nextRss <= rss * (1 + 1e-12))) break;
     theta = next;
     offset = nextOffset;
+    rss = nextRss;
   }
   return { theta, offset };
 }

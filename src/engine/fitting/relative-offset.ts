@@ -10,7 +10,7 @@ import { Matrix, SingularValueDecomposition } from 'ml-matrix';
 
 /**
  * √(‖Q₁ᵀr‖²/p) / √(‖r − Q₁Q₁ᵀr‖²/(n − p)), with Q₁ an orthonormal basis of the Jacobian's columns.
- * 0 for an exact fit; NaN when n ≤ p or the Jacobian is not finite.
+ * 0 for an exact fit; NaN when n ≤ p or the Jacobian is zero or not finite.
  */
 export function relativeOffset(jacobian: readonly (readonly number[])[], residuals: readonly number[]): number {
   const n = residuals.length;
@@ -18,6 +18,8 @@ export function relativeOffset(jacobian: readonly (readonly number[])[], residua
   if (n <= p || p === 0 || !jacobian.every((row) => row.every(Number.isFinite))) return NaN;
   const svd = new SingularValueDecomposition(new Matrix(jacobian.map((row) => [...row])), { autoTranspose: true });
   const largest = Math.max(...svd.diagonal);
+  // A model that no parameter moves (all derivatives zero) is nowhere near a minimum worth the name.
+  if (!(largest > 0)) return NaN;
   const u = svd.leftSingularVectors;
   let inPlane = 0;
   svd.diagonal.forEach((s, k) => {
