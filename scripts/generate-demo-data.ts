@@ -9,13 +9,8 @@
  * Every number is invented: generated from a stated law with stated constants plus noise.
  */
 import { readFileSync, writeFileSync } from 'node:fs';
-import {
-  akaikeWeights,
-  fitEyring,
-  fitInitialRateOrders,
-  fitNonlinear,
-  leastSquaresCriteria,
-} from '../src/engine/index.ts';
+import { fitEyring, fitInitialRateOrders } from '../src/engine/index.ts';
+import { compareRivals, type RivalLaw } from '../tests/helpers/compare-rivals.ts';
 
 const SEED = 13;
 const OUT = new URL('../content/data/', import.meta.url);
@@ -47,28 +42,13 @@ interface Run {
   replicate: string;
 }
 
-/** Two rival laws fitted to the same initial rates on the log scale, with AICc and Akaike weights. */
-function compare(
-  label: string,
-  runs: readonly Run[],
-  laws: Record<string, { initial: number[]; law: (p: readonly number[], c: readonly number[]) => number }>,
-): void {
-  const y = runs.map((r) => Math.log(r.rate));
-  const fits = Object.entries(laws).map(([name, { initial, law }]) => {
-    const fit = fitNonlinear({
-      parameters: initial.map((v, j) => ({ name: `p${j + 1}`, initial: v, positive: true })),
-      y,
-      model: (p) => runs.map((r) => Math.log(law(p, r.c))),
-    });
-    return { name, fit, criteria: leastSquaresCriteria(fit.rss, runs.length, initial.length) };
-  });
-  const { deltas, weights } = akaikeWeights(fits.map((f) => f.criteria.aicc));
+/** Prints each rival's fit to the same initial rates (log scale): RSS, AICc, ΔAICc, Akaike weight. */
+function compare(label: string, runs: readonly Run[], laws: Record<string, RivalLaw>): void {
   console.log(`\n${label} (${runs.length} runs, residuals of ln r)`);
-  fits.forEach((f, i) =>
+  for (const r of compareRivals(runs, laws))
     console.log(
-      `  ${f.name.padEnd(16)} RSS ${f.fit.rss.toExponential(3)}  AICc ${f.criteria.aicc.toFixed(2)}  ΔAICc ${deltas[i]!.toFixed(2)}  weight ${weights[i]!.toFixed(3)}  converged ${f.fit.converged}`,
-    ),
-  );
+      `  ${r.name.padEnd(16)} RSS ${r.fit.rss.toExponential(3)}  AICc ${r.aicc.toFixed(2)}  ΔAICc ${r.delta.toFixed(2)}  weight ${r.weight.toFixed(3)}  converged ${r.fit.converged}`,
+    );
 }
 
 function writeCsv(name: string, comment: string[], header: string, rows: string[]): void {
