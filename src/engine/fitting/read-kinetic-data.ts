@@ -5,6 +5,7 @@
  * what a fit must find. Problems are diagnostics at their cell; nothing throws.
  */
 import {
+  DATA_COLUMN_NAMES,
   diagnostic,
   uncertaintyOf,
   type DataColumn,
@@ -69,9 +70,10 @@ function convert(column: DataColumn, factor: number, offset: number): number[] {
 
 function assemble(table: DataTable, values: Map<string, number[]>, order: number): KineticData {
   const rows = Array.from({ length: table.rows }, (_, r) => r);
+  const fixed: readonly string[] = DATA_COLUMN_NAMES;
   const speciesColumns = table.columns
     .map((c) => c.name)
-    .filter((n) => !['rate', 't', 'T', 'k', 'replicate'].includes(n) && uncertaintyOf(n) === undefined);
+    .filter((n) => !fixed.includes(n) && uncertaintyOf(n) === undefined);
   const replicateColumn = table.columns.find((c) => c.name === 'replicate');
   const replicates = replicateColumn ? { replicates: replicateColumn.labels.slice() } : {};
   const optional = (name: string) => values.get(name);
