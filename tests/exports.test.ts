@@ -7,33 +7,55 @@ import * as render from '../src/render/index.ts';
 
 describe('public API', () => {
   it('model', () => {
-    expect(Object.keys(model).sort()).toEqual(['RULES', 'RULE_IDS', 'countBySeverity', 'diagnostic', 'ruleSummary']);
+    expect(Object.keys(model).sort()).toEqual([
+      'DATA_COLUMN_NAMES',
+      'RULES',
+      'RULE_IDS',
+      'countBySeverity',
+      'diagnostic',
+      'ruleSummary',
+      'uncertaintyOf',
+    ]);
   });
 
   it('engine', () => {
     expect(Object.keys(engine).sort()).toEqual([
       'CONCENTRATION',
+      'CONFIDENCE_LEVEL',
       'CONVERSION_FOR_INITIAL_RATE',
       'DEFAULT_APPROXIMATION_THRESHOLD',
       'Polynomial',
+      'REFERENCE_TEMPERATURE',
       'Rational',
       'RationalFunction',
+      'akaikeWeights',
       'concentration',
       'concentrationSeries',
       'deriveMechanism',
       'equilibriumConstant',
       'firstObservationSeries',
+      'fitArrhenius',
+      'fitEyring',
+      'fitInitialRateOrders',
+      'fitNonlinear',
       'formatLatex',
       'formatText',
       'forwardConstant',
+      'informationCriteria',
       'judgeObservations',
+      'leastSquaresCriteria',
+      'leastSquaresLogLikelihood',
+      'linearLeastSquares',
       'molecularity',
+      'nestedFTest',
       'parseEquation',
       'parseQuantity',
+      'readKineticData',
       'reverseConstant',
       'sameDimension',
       'simulationBasis',
       'speciesLatex',
+      'studentTQuantile',
       'symbolLatex',
       'toCanonical',
     ]);

@@ -51,8 +51,11 @@ export async function loadCatalogue(folder: string): Promise<Catalogue> {
     // A file name that cannot be a page (unsafe, too long, an id given twice) stays out; `build` reports it.
     if (!isPublishable(checked)) continue;
     // Names relative to where the command ran (`build` runs Astro from the package folder).
-    const named = relative(process.env['MECHATLAS_CWD'] ?? process.cwd(), file) || file;
-    const diagnostics = checked.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: named }));
+    const cwd = process.env['MECHATLAS_CWD'] ?? process.cwd();
+    const named = relative(cwd, file) || file;
+    // A diagnostic in a data file keeps that file's name, made relative like the record's.
+    const rename = (f: string) => (f === file ? named : relative(cwd, f) || f);
+    const diagnostics = checked.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: rename(d.file) }));
     // The text the loader read (never a second read: the file may have changed, or be a pipe).
     const record: CatalogueRecord = { ...checked, file: named, diagnostics, source: checked.loaded.source };
     const basis = checked.derivation && simulationBasis(checked.derivation);

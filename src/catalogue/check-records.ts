@@ -2,9 +2,10 @@
  * Loads and derives a set of record files: the shared first half of `check`, `derive` and the
  * site build. Every file is checked even when others fail.
  */
-import { deriveMechanism, type Derivation, type DeriveOptions } from '../engine/index.ts';
+import { deriveMechanism, type Derivation, type DeriveOptions, type KineticData } from '../engine/index.ts';
 import { diagnostic, type Diagnostic, type MechanismRecord } from '../model/index.ts';
 import { loadRecordFile, placeDiagnostics, recordId, type LoadedRecord } from '../records/index.ts';
+import { readRecordData } from './read-record-data.ts';
 
 /** One record file as checked: what was loaded, the record where it is valid, its derivation and every diagnostic placed. */
 export interface CheckedRecord {
@@ -13,6 +14,8 @@ export interface CheckedRecord {
   loaded: LoadedRecord;
   record?: MechanismRecord;
   derivation?: Derivation;
+  /** the observations' data sets that read cleanly, in canonical units (for fitting) */
+  data?: KineticData[];
   /** every diagnostic of the record, with file, line and column */
   diagnostics: Diagnostic[];
 }
@@ -25,8 +28,20 @@ export async function checkRecordFile(path: string, options: DeriveOptions = {})
     const base = { id: loaded.id, file: loaded.file, loaded };
     if (!loaded.record) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
     const derivation = deriveMechanism(loaded.record, options);
-    const diagnostics = placeDiagnostics(loaded, [...loaded.diagnostics, ...derivation.diagnostics]);
-    return { ...base, record: loaded.record, derivation, diagnostics };
+    const species = derivation.mechanism && [...derivation.mechanism.species.keys()];
+    const read = await readRecordData(loaded, species);
+    const diagnostics = placeDiagnostics(loaded, [
+      ...loaded.diagnostics,
+      ...derivation.diagnostics,
+      ...read.diagnostics,
+    ]);
+    return {
+      ...base,
+      record: loaded.record,
+      derivation,
+      ...(read.data.length > 0 ? { data: read.data } : {}),
+      diagnostics,
+    };
   } catch (error) {
     return internalFailure(path, loaded, error);
   }

@@ -49,7 +49,17 @@ steps:
   - equation: C -> D
     rds: true                       # the rate-determining step, if there is one
 approximation: auto                 # auto | rds | steady_state | both
-observations: []
+observations: []                    # measured orders, or the data themselves, e.g.:
+#  - id: rates-1
+#    T: 298.15 K
+#    data:
+#      kind: initial_rates           # initial_rates | time_course | temperature_series
+#      columns: [A / mM, B / mM, rate / µM s^-1, replicate]   # or file: ../data/rates-1.csv
+#      rows:
+#        - [1.0, 1.0, 0.50, a]
+#        - [2.0, 1.0, 1.01, a]
+#        - [1.0, 2.0, 0.98, a]
+#        - [2.0, 2.0, 1.97, a]
 references: []
 notes: |
   Why this proposal, and what would tell it apart from its rivals.

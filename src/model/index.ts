@@ -7,11 +7,14 @@ export { RULES, RULE_IDS, ruleSummary, type RuleId } from './rules/index.ts';
 export type { RuleDefinition } from './rules/rule-definition.ts';
 export type {
   Approximation,
+  DataCell,
+  DataKind,
   Doi,
   EnergySettings,
   MechanismRecord,
   Notation,
   Observation,
+  ObservationData,
   QuantityText,
   Reference,
   Role,
@@ -23,6 +26,7 @@ export type {
   StepEntry,
   StepLabel,
 } from './mechanism-record.ts';
+export { DATA_COLUMN_NAMES, uncertaintyOf, type DataColumn, type DataTable, type SourceSpot } from './data-table.ts';
 export type { EnergyBasis, EnergyJson, EnergyProfile, EnergyResult, ProfileState } from './energy-report.ts';
 export type {
   CatalogueReport,

@@ -67,6 +67,20 @@ export type StepLabel = string;
  * via the `definition` "Doi".
  */
 export type Doi = string;
+/**
+ * What the table holds: initial_rates (concentrations of the species against the initial rate, one row per run), time_course (concentrations of one or more species against time t, starting from the observation's concentrations), or temperature_series (a rate constant k against temperature T).
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "DataKind".
+ */
+export type DataKind = 'initial_rates' | 'time_course' | 'temperature_series';
+/**
+ * One cell of an inline data table: a number, a label (in a replicate column), or null for a value not measured.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "DataCell".
+ */
+export type DataCell = number | string | null;
 
 /**
  * One proposed reaction mechanism: a sequence of elementary steps, with the measurements it should explain. The file name (without .yaml) is the record's id.
@@ -259,7 +273,7 @@ export interface Observation {
    */
   T?: QuantityText;
   /**
-   * Starting concentrations by species symbol, e.g. { H2O2: 0.10 M, I-: 0.010 M }.
+   * Starting concentrations by species symbol, e.g. { H2O2: 0.10 M, I-: 0.010 M }; for a time course in data, the concentrations at t = 0 (species not listed start at zero).
    */
   concentrations?: {
     [k: string]: QuantityText;
@@ -278,6 +292,10 @@ export interface Observation {
    * A remark about the measurement.
    */
   note?: string;
+  /**
+   * The measurements behind this observation, as a table (initial rates, a time course or a temperature series), inline or in a CSV file.
+   */
+  data?: ObservationData;
 }
 /**
  * A source supporting or contradicting the proposal; give at least a DOI, a URL or a citation.
@@ -300,6 +318,43 @@ export interface Reference {
   citation?: string;
   /**
    * What the source supports or contradicts.
+   */
+  note?: string;
+}
+/**
+ * The measurements themselves, as a table: inline (columns and rows) or in a CSV file beside the records (file). Columns are named by species symbol (a concentration), rate (an initial rate), t (time), T (temperature), k (a rate constant), u(NAME) (the standard uncertainty of column NAME) or replicate (a label for repeated runs). Each column with a quantity needs a unit, written in its header as 'NAME / unit' (e.g. 'H2O2 / mM') or given under units.
+ *
+ * This interface was referenced by `MechanismRecord`'s JSON-Schema
+ * via the `definition` "ObservationData".
+ */
+export interface ObservationData {
+  kind: DataKind;
+  /**
+   * A CSV file holding the table, as a path relative to this record file that stays inside the content folder (the folder above the one holding the records), e.g. ../data/peroxide-rates.csv. Its first line that is not a # comment is the header; lines starting with # are comments.
+   */
+  file?: string;
+  /**
+   * The header of an inline table: one name per column, each optionally with its unit, e.g. [H2O2 / mM, I- / mM, rate / µM s^-1, replicate].
+   *
+   * @minItems 1
+   */
+  columns?: string[];
+  /**
+   * The rows of an inline table, one list of cells per measurement, in the order of columns, e.g. [100, 10, 1.12, a]. A cell is a number; text that is not a number is reported; an empty cell (null) means not measured, allowed only for concentrations in a time course.
+   */
+  rows?: DataCell[][];
+  /**
+   * Units by column name, for columns whose header gives none, e.g. { H2O2: mM, rate: µM s^-1, t: min }. An uncertainty column u(NAME) without a unit takes the unit of NAME.
+   */
+  units?: {
+    [k: string]: string;
+  };
+  /**
+   * For a temperature series: which rate constant the k column holds, named as in the rate laws (k_2, k_-1) or k_obs for an observed pseudo-order constant. Defaults to k_obs.
+   */
+  constant?: string;
+  /**
+   * Where the numbers come from and how they were treated; say here when a data set is invented.
    */
   note?: string;
 }

@@ -28,6 +28,8 @@ export { MAX_ALIAS_COUNT, parseRecordYaml } from './parse-record-yaml.ts';
 export type { ParsedYaml } from './parse-record-yaml.ts';
 export { placeDiagnostics } from './place-diagnostics.ts';
 export { isPublishable, recordFileProblems } from './record-file-problems.ts';
+export { readObservationData, type ObservationDataResult } from './read-observation-data.ts';
+export { contentFolderOf, resolveDataPath } from './resolve-data-path.ts';
 export { isRecordId, MAX_ID_LENGTH, recordId, recordIdProblem, suggestRecordId } from './record-id.ts';
 export { describeSchemaErrors, pathWords, recordPath } from './schema-messages.ts';
 export { createValidator, recordSchema, recordValidator } from './schema-validator.ts';

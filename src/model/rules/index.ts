@@ -7,6 +7,14 @@ import { balanceAtoms } from './balance-atoms.ts';
 import { balanceCharge } from './balance-charge.ts';
 import { constantsDetailedBalance } from './constants-detailed-balance.ts';
 import { constantsNegative } from './constants-negative.ts';
+import { dataCell } from './data-cell.ts';
+import { dataColumns } from './data-columns.ts';
+import { dataFile } from './data-file.ts';
+import { dataNotIdentifiable } from './data-not-identifiable.ts';
+import { dataPath } from './data-path.ts';
+import { dataPoints } from './data-points.ts';
+import { dataRange } from './data-range.ts';
+import { dataUnits } from './data-units.ts';
 import { energyProfile } from './energy-profile.ts';
 import { energyRdsSpan } from './energy-rds-span.ts';
 import { equationSyntax } from './equation-syntax.ts';
@@ -61,6 +69,14 @@ export const RULES = [
   constantsNegative,
   observationNegativeConcentration,
   speciesConfusable,
+  dataPath,
+  dataFile,
+  dataColumns,
+  dataUnits,
+  dataCell,
+  dataRange,
+  dataPoints,
+  dataNotIdentifiable,
 ] as const;
 
 /** A rule's stable id. */
