@@ -523,7 +523,7 @@ describe('a catalyst resting as an off-cycle dimer', () => {
     const d = deriveYaml(`${header('dimeric-catalyst')}notation: labels
 species:
   E: { role: catalyst }
-  E2: { role: catalyst }
+  E2: { role: off_route }
 steps:
   - { equation: E2 <=> 2 E, K: 1.0e-6 M }
   - { equation: E + S -> ES, rds: true, k: 1.0e3 M^-1 s^-1 }

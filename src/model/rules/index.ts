@@ -19,6 +19,8 @@ import { recordSchema } from './record-schema.ts';
 import { recordYaml } from './record-yaml.ts';
 import { rolesDeclaredMismatch } from './roles-declared-mismatch.ts';
 import { routeAmbiguous } from './route-ambiguous.ts';
+import { routeOffRoute } from './route-off-route.ts';
+import { routeSearchLimit } from './route-search-limit.ts';
 import { simulationFailed } from './simulation-failed.ts';
 import { speciesUnused } from './species-unused.ts';
 import { stepMolecularity } from './step-molecularity.ts';
@@ -49,6 +51,8 @@ export const RULES = [
   observationSpecies,
   simulationFailed,
   constantsDetailedBalance,
+  routeSearchLimit,
+  routeOffRoute,
 ] as const;
 
 /** A rule's stable id. */
