@@ -53,7 +53,7 @@ function reason(derived: Role, net: Rational | undefined, why: Unhonoured | unde
   if (why?.kind === 'no-route') return `no route through these steps lets it cancel: it is ${change} on the route`;
   if (why?.kind === 'drops-steps') {
     const steps = why.steps.length === 1 ? `step ${why.steps[0]}` : `steps ${why.steps.join(', ')}`;
-    return `it cancels only on a route that leaves out ${steps}; on the route through ${why.steps.length === 1 ? 'it' : 'them'} it is ${change}`;
+    return `it cancels only on a route that leaves out ${steps}; on the route with ${steps} it is ${change}`;
   }
   switch (derived) {
     case 'reactant':

@@ -39,14 +39,13 @@ export function findRoute(steps: readonly RouteStep[], options: FindOptions): Fo
   if (!search.complete) return { ...none, complete: false };
   const families = throughRds(search.families, options.rds);
   const routes = withoutLoneSideSteps(throughRds(search.routes, options.rds), families, steps).sort(compareCandidates);
-  const carriers =
-    options.carriers.size > 0 ? options.carriers : new Set(detectChain(steps, routes, options.inert)?.carriers ?? []);
-  if (carriers.size > 0) {
-    for (const r of routes) r.chainEnds = countChainEnds(steps, r.sigma, carriers);
-    for (const f of families)
-      f.chainEnds = steps.filter((st, i) => f.rays.some((r) => r[i]! > 0n) && chainEnd(st, carriers)).length;
-    routes.sort(compareCandidates);
-  }
+  const detected = options.carriers.size > 0 ? undefined : detectChain(steps, routes, options.inert);
+  rankByChain(steps, routes, families, options.carriers.size > 0 ? options.carriers : new Set(detected?.carriers));
+  // A detected chain must then be the route: where the long-chain ranking prefers another route,
+  // the steps are not a chain after all (a mesh of cycles), and the plain ranking stands.
+  const support = (sigma: readonly bigint[]) => sigma.flatMap((x, i) => (x > 0n ? [i] : [])).join();
+  if (detected && routes[0] && support(routes[0].sigma) !== detected.propagation.join())
+    rankByChain(steps, routes, families, new Set());
   const chosen = chooseRoute(routes, families, options.mustCancel, steps);
   const found: Found = { ...none, ranked: routes, complete: true, diagnostics: chosen.diagnostics };
   if (!chosen.best) return found;
@@ -56,6 +55,22 @@ export function findRoute(steps: readonly RouteStep[], options: FindOptions): Fo
       ? declaredChain(steps, sigma, options.carriers)
       : detectChain(steps, [{ sigma }], options.inert);
   return { ...found, numbers: sigma.map(Number), best: chosen.best, ...(chain && { chain }) };
+}
+
+/** Counts each route's and family's chain ends for these carriers, and ranks the routes again. */
+function rankByChain(
+  steps: readonly RouteStep[],
+  routes: Candidate[],
+  families: Family[],
+  carriers: ReadonlySet<string>,
+): void {
+  for (const r of routes) r.chainEnds = countChainEnds(steps, r.sigma, carriers);
+  for (const f of families)
+    f.chainEnds =
+      carriers.size === 0
+        ? 0
+        : steps.filter((st, i) => f.rays.some((r) => r[i]! > 0n) && chainEnd(st, carriers)).length;
+  routes.sort(compareCandidates);
 }
 
 function chooseRoute(

@@ -51,11 +51,12 @@ export function offRouteReasons(
       if (ends)
         return `it ends chains, destroying ${carriers}; termination stays off the route (long-chain convention)`;
       const side = [...step.change.keys()].filter((sp) => !onRoute.has(sp));
-      if (shared.every((sp) => netZero.has(sp)) && side.length > 0) {
-        const formed = side.filter((sp) => step.change.get(sp)!.sign() > 0);
-        const partners = side.filter((sp) => step.change.get(sp)!.sign() < 0);
-        const what = `${shared.join(' + ')}${partners.length ? ` binds ${partners.join(' + ')}` : ' turns'} into ${formed.join(' + ') || 'nothing on the route'}`;
-        return `a dead-end ${step.reversible ? 'equilibrium' : 'reaction'}: ${what}, which no step on the route uses, so it changes nothing in one turnover`;
+      const given = (sp: string) =>
+        mechanism.steps.some((o) => turns(o, sp, 1)) && mechanism.steps.some((o) => turns(o, sp, -1));
+      if (side.length > 0 && side.every(given) && (step.reversible || shared.every((sp) => netZero.has(sp)))) {
+        const formed = [...step.change].filter(([, v]) => v.sign() > 0).map(([sp]) => sp);
+        const used = [...step.change].filter(([, v]) => v.sign() < 0).map(([sp]) => sp);
+        return `a dead-end ${step.reversible ? 'equilibrium' : 'reaction'} forming ${formed.join(' + ')} from ${used.join(' + ')}; no step on the route uses ${side.join(', ')}, so it changes nothing in one turnover`;
       }
       if (side.length > 0)
         return `a side reaction: it makes or uses ${side.join(', ')}, which no step on the route does`;
@@ -65,6 +66,12 @@ export function offRouteReasons(
       return `the best route through it, σ = [${through.sigma.join(', ')}], is not preferred: ${why}`;
     }
   });
+}
+
+/** True when the step makes (sign 1) or uses up (sign −1) the species, backwards too where it is reversible. */
+function turns(step: Step, sp: string, sign: 1 | -1): boolean {
+  const v = step.change.get(sp)?.sign() ?? 0;
+  return v === sign || (step.reversible && v === -sign);
 }
 
 /** "step 3", or "step 3 (init)" where the step has a label of its own. */

@@ -4,8 +4,9 @@
  * route — then the ranking: a chain's initiation and termination stay off the route (the
  * long-chain convention, common practice); the most species cancelled; the fewest net reactants
  * that the mechanism itself makes (a route starts from starting materials, so a dead-end complex
- * or a bound catalyst is not one); the most economical overall equation; the most species formed
- * before they are consumed; the plain sum; the fewest steps; the smallest numbers.
+ * or a bound catalyst is not one); the most species formed before they are consumed (a route
+ * that stops at the enol, short of the iodination that uses it, cancels fewer of them); the most
+ * economical overall equation; the plain sum; the fewest steps; the smallest numbers.
  */
 import type { Candidate, Family, RouteStep } from './route-search.ts';
 
@@ -17,8 +18,8 @@ const CRITERIA: readonly { better: (a: Candidate, b: Candidate) => number; why: 
     better: (a, b) => a.madeReactants - b.madeReactants,
     why: 'it starts from a species that the mechanism itself makes',
   },
-  { better: (a, b) => a.overallSize - b.overallSize, why: 'its overall equation is larger' },
   { better: (a, b) => b.intermediates - a.intermediates, why: 'fewer of its species are formed before they are used' },
+  { better: (a, b) => a.overallSize - b.overallSize, why: 'its overall equation is larger' },
   { better: (a, b) => Number(b.plainSum) - Number(a.plainSum), why: 'it is not the plain sum of its steps' },
   { better: (a, b) => a.steps - b.steps, why: 'it needs more steps' },
   { better: (a, b) => (a.size < b.size ? -1 : a.size > b.size ? 1 : 0), why: 'its numbers are larger' },

@@ -4,6 +4,7 @@
  * scored by what it cancels, each several-dimensional one a family of independent routes.
  * The search spends a measured budget (search-budget.ts) and says when it ran out.
  */
+import { rank } from '../exact/linear-algebra.ts';
 import { hasNonNegativeKernel, positiveKernel } from '../exact/positive-kernel.ts';
 import { Rational } from '../exact/rational.ts';
 import type { SearchBudget } from './search-budget.ts';
@@ -97,12 +98,13 @@ export function searchSupports(steps: readonly RouteStep[], columns: Column[], o
     const support = [...required, ...optional.filter((_, b) => mask & (1 << b))].sort((a, b) => a - b);
     // A route's steps are linked through shared species; a disconnected set is a sum of separate reactions.
     if (support.length === 0 || !connected(support, columns)) continue;
-    if (!budget.take()) return { routes, families, complete: false };
     const species = [...new Set(support.flatMap((c) => [...columns[c]!.change.keys()]))];
     const matrixFor = (rows: string[]) =>
       rows.map((sp) => support.map((c) => columns[c]!.change.get(sp) ?? Rational.ZERO));
+    const whole = matrixFor(species);
+    if (!budget.take(kernelCost(whole, support.length))) return { routes, families, complete: false };
     // A set of steps that together change nothing (a step and its reverse, initiation plus termination) is never part of a route.
-    if (hasNonNegativeKernel(matrixFor(species), support.length)) continue;
+    if (hasNonNegativeKernel(whole, support.length)) continue;
     const signs = (sp: string) => new Set(support.map((c) => columns[c]!.change.get(sp)?.sign() ?? 0));
     const twoWay = species.filter((sp) => !inert.has(sp) && signs(sp).has(1) && signs(sp).has(-1));
     if ([...mustCancel].some((sp) => species.includes(sp) && !twoWay.includes(sp))) continue;
@@ -118,8 +120,9 @@ export function searchSupports(steps: readonly RouteStep[], columns: Column[], o
         (cancel.species.length < best[0] || (cancel.species.length === best[0] && cancel.intermediates < best[1]))
       )
         break;
-      if (!budget.take()) return { routes, families, complete: false };
-      const kernel = positiveKernel(matrixFor(cancel.species), support.length);
+      const matrix = matrixFor(cancel.species);
+      if (!budget.take(kernelCost(matrix, support.length))) return { routes, families, complete: false };
+      const kernel = positiveKernel(matrix, support.length);
       if (kernel.kind === 'none') continue;
       best = [cancel.species.length, cancel.intermediates];
       if (kernel.kind === 'family') {
@@ -133,6 +136,17 @@ export function searchSupports(steps: readonly RouteStep[], columns: Column[], o
     if (budget.exhausted) return { routes, families, complete: false };
   }
   return { routes, families, complete: true };
+}
+
+/**
+ * The work of one kernel in budget units: one for the elimination, and for a kernel of dimension
+ * d ≥ 2 the C(n, d − 1) small systems its extreme rays take (positive-kernel.ts).
+ */
+function kernelCost(matrix: Rational[][], columns: number): number {
+  const d = columns - rank(matrix, columns);
+  let cost = 1;
+  for (let j = 0; j < d - 1; j++) cost = (cost * (columns - j)) / (j + 1);
+  return d >= 2 ? 1 + Math.round(cost) : 1;
 }
 
 /** True when the columns are linked by shared species into one piece. */
