@@ -7,7 +7,14 @@ import * as render from '../src/render/index.ts';
 
 describe('public API', () => {
   it('model', () => {
-    expect(Object.keys(model).sort()).toEqual(['RULES', 'RULE_IDS', 'countBySeverity', 'diagnostic', 'ruleSummary']);
+    expect(Object.keys(model).sort()).toEqual([
+      'RULES',
+      'RULE_IDS',
+      'countBySeverity',
+      'diagnostic',
+      'pathWords',
+      'ruleSummary',
+    ]);
   });
 
   it('engine', () => {

@@ -89,15 +89,39 @@ export interface ObservationJson {
   method: string;
   observed: number;
   tolerance: number;
+  /** the order at the observation's conditions, or the one the law fixes whatever the constants */
   predicted?: number;
+  /** where the order depends on unknown constants: every order the law allows at these conditions */
   range?: [number, number];
+  /** the limiting orders as [X] → 0 and [X] → ∞, where they differ (they do not bound the order) */
+  limits?: [number, number];
   basis: string;
+  /** pass, fail, not_excluded (allowed for some constants, which are unknown) or unknown (no prediction) */
   status: string;
+  /** why there is no prediction, or why it stays open */
+  reason?: string;
+}
+
+/** How many observation checks had each verdict. */
+export interface VerdictCounts {
+  pass: number;
+  fail: number;
+  /** allowed for some constants, which are unknown */
+  not_excluded: number;
+  /** no prediction */
+  unknown: number;
 }
 
 /** The whole report: the tool, a summary and one entry per record. */
 export interface CatalogueReport {
   tool: { name: 'mechatlas'; version: string };
-  summary: { records: number; errors: number; warnings: number; notes: number };
+  summary: {
+    records: number;
+    errors: number;
+    warnings: number;
+    notes: number;
+    /** the checks of each record's primary rate law, counted by verdict */
+    observations?: VerdictCounts;
+  };
   records: RecordReport[];
 }

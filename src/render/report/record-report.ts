@@ -125,6 +125,8 @@ export function observationJson(check: ObservationCheck): ObservationJson {
   };
   if (check.predicted !== undefined) out.predicted = check.predicted;
   if (check.range) out.range = check.range;
+  if (check.limits) out.limits = check.limits;
+  if (check.reason !== undefined) out.reason = check.reason;
   return out;
 }
 
