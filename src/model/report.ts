@@ -31,6 +31,17 @@ export interface RecordReport {
   stoichiometric_numbers?: number[];
   stoichiometric_numbers_source?: 'given' | 'derived';
   roles?: Record<string, string>;
+  /**
+   * the chain the route carries, where one is declared (chain_carrier) or detected: its carriers,
+   * and the steps (numbered from 1) that propagate it (the route), start it and end it (off the route)
+   */
+  chain?: {
+    carriers: string[];
+    propagation: number[];
+    initiation: number[];
+    termination: number[];
+    source: 'declared' | 'detected';
+  };
   buffered?: string[];
   rate_laws?: RateLawJson[];
   observations?: ObservationJson[];

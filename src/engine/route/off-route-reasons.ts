@@ -60,6 +60,14 @@ export function offRouteReasons(
       }
       if (side.length > 0)
         return `a side reaction: it makes or uses ${side.join(', ')}, which no step on the route does`;
+      const reversed = mechanism.steps.find(
+        (o) =>
+          sigma[o.index]! > 0 &&
+          o.change.size === step.change.size &&
+          [...o.change].every(([sp, v]) => step.change.get(sp)?.equals(v.neg())),
+      );
+      if (reversed)
+        return `it runs ${stepName(reversed)} backwards, and a step with its reverse changes nothing; it acts on the rate, not on the overall equation`;
       const through = ranked.find((c) => c.sigma[step.index]! > 0n);
       if (!through) return 'no route through it lets the intermediates cancel';
       const why = chosen ? whyNotPreferred(chosen, through) : 'it ranks lower';

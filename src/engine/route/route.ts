@@ -9,6 +9,7 @@ import type { ChainStructure } from './chain-structure.ts';
 import { offRouteReasons } from './off-route-reasons.ts';
 import { overallEquation, type OverallEquation } from './overall-equation.ts';
 import { deriveRoles } from './roles.ts';
+import type { SearchBudget } from './search-budget.ts';
 import { stoichiometricNumbers } from './stoichiometric-numbers.ts';
 
 export type { ChainStructure };
@@ -34,8 +35,8 @@ export interface Route {
   chain?: ChainStructure;
 }
 
-/** Chooses the route of a mechanism and reads its overall equation and roles. */
-export function deriveRoute(mechanism: Mechanism): { route?: Route; diagnostics: Diagnostic[] } {
+/** Chooses the route of a mechanism and reads its overall equation and roles; `budget` bounds the search (search-budget.ts). */
+export function deriveRoute(mechanism: Mechanism, budget?: SearchBudget): { route?: Route; diagnostics: Diagnostic[] } {
   const species = [...mechanism.species.values()];
   const declared = (role: Role) => species.filter((s) => s.declaredRole === role).map((s) => s.symbol);
   const carriers = new Set(species.filter((s) => s.entry?.chain_carrier === true).map((s) => s.symbol));
@@ -45,6 +46,7 @@ export function deriveRoute(mechanism: Mechanism): { route?: Route; diagnostics:
     carriers,
     inert: new Set(species.filter((s) => s.solvent).map((s) => s.symbol)),
     ...(rds !== undefined && { rds }),
+    ...(budget && { budget }),
   });
   const diagnostics = [...chosen.diagnostics];
   if (!chosen.numbers) return { diagnostics };
