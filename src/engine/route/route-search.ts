@@ -7,6 +7,7 @@
 import { rank } from '../exact/linear-algebra.ts';
 import { hasNonNegativeKernel, positiveKernel } from '../exact/positive-kernel.ts';
 import { Rational } from '../exact/rational.ts';
+import { cancelSets, firstChangeSign } from './cancel-sets.ts';
 import type { SearchBudget } from './search-budget.ts';
 
 /** A step as the route search sees it. */
@@ -163,55 +164,6 @@ function connected(support: number[], columns: Column[]): boolean {
     }
   }
   return reached.size === support.length;
-}
-
-/**
- * Subsets of the species that may cancel, best first: most species, then most of the
- * intermediate pattern. Generated lazily, because the first feasible set is almost always the
- * full one; a level larger than the budget left is not even listed.
- */
-function* cancelSets(
-  choosable: string[],
-  forced: string[],
-  firstSign: (sp: string) => number,
-  budget: SearchBudget,
-): Generator<{ species: string[]; intermediates: number }> {
-  const forcedIntermediates = forced.filter((sp) => firstSign(sp) > 0).length;
-  for (let drop = 0; drop <= choosable.length; drop++) {
-    const sets: { species: string[]; intermediates: number }[] = [];
-    for (const kept of combinationsOf(choosable, choosable.length - drop)) {
-      if (sets.length >= budget.remaining) {
-        budget.take(budget.remaining + 1);
-        return;
-      }
-      sets.push({
-        species: [...forced, ...kept],
-        intermediates: forcedIntermediates + kept.filter((sp) => firstSign(sp) > 0).length,
-      });
-    }
-    yield* sets.sort((a, b) => b.intermediates - a.intermediates);
-  }
-}
-
-function* combinationsOf<T>(items: readonly T[], k: number, start = 0, picked: T[] = []): Generator<T[]> {
-  if (picked.length === k) {
-    yield [...picked];
-    return;
-  }
-  for (let i = start; i <= items.length - (k - picked.length); i++) {
-    picked.push(items[i]!);
-    yield* combinationsOf(items, k, i + 1, picked);
-    picked.pop();
-  }
-}
-
-/** +1 when the species is formed before it is consumed along the steps (in record order), −1 otherwise. */
-function firstChangeSign(steps: readonly RouteStep[], stepIndices: number[], sp: string): number {
-  for (const i of stepIndices) {
-    const v = steps[i]!.change.get(sp);
-    if (v && !v.isZero()) return v.sign();
-  }
-  return 0;
 }
 
 function expandSigma(n: number, columns: Column[], support: number[], vector: bigint[]): bigint[] {

@@ -83,7 +83,7 @@ function uncarried(carriers: ReadonlySet<string>, roles: ReadonlyMap<string, Rol
       diagnostic(
         'roles/declared-mismatch',
         'error',
-        `${sp} is declared a chain carrier, but no propagation cycle on the route regenerates it: it is ${roles.get(sp)?.replace('_', ' ') ?? 'not on the route'}`,
+        `${sp} is declared a chain carrier, but no propagation cycle on the route regenerates it: it is ${roles.get(sp) === 'off_route' ? 'off the route' : `${roles.get(sp)?.replace('_', ' ') ?? 'not on the route'}`}`,
         { path: ['species', sp, 'chain_carrier'], actual: roles.get(sp), expected: 'chain carrier' },
       ),
     );

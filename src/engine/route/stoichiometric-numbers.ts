@@ -7,6 +7,7 @@
  * the declarations it cannot honour are reported.
  */
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
+import { Rational } from '../exact/rational.ts';
 import { declaredChain, detectChain, type ChainStructure } from './chain-structure.ts';
 import { findRoute, type Found } from './find-route.ts';
 import type { Candidate, RouteStep } from './route-search.ts';
@@ -119,8 +120,11 @@ function unhonouredOn(
 ): Map<string, Unhonoured> {
   const out = new Map<string, Unhonoured>();
   for (const sp of mustCancel) {
-    const net = steps.reduce((n, s, i) => n + (s.change.get(sp)?.toNumber() ?? 0) * numbers[i]!, 0);
-    if (Math.abs(net) > 1e-12) out.set(sp, reason());
+    const net = steps.reduce(
+      (n, s, i) => n.add((s.change.get(sp) ?? Rational.ZERO).mul(Rational.of(numbers[i]!))),
+      Rational.ZERO,
+    );
+    if (!net.isZero()) out.set(sp, reason());
   }
   return out;
 }
