@@ -30,7 +30,7 @@ export interface Route {
   /** net-zero species that occur only in steps off the route (σ = 0) */
   offRoute: ReadonlySet<string>;
   /** how each species with role off_route enters the kinetics (dead-end form, binder, side product) */
-  offRouteKinds: ReadonlyMap<string, Role>;
+  offRouteKinds?: ReadonlyMap<string, Role>;
   /** the chain the route carries (propagation cycle, initiation and termination off it), where one is declared or detected */
   chain?: ChainStructure;
 }
@@ -72,7 +72,7 @@ export function deriveRoute(mechanism: Mechanism, budget?: SearchBudget): { rout
 
 /** Roles as the kinetics sees them: each off_route species as the kind it behaves like. */
 export function kineticRoles(route: Pick<Route, 'roles' | 'offRouteKinds'>): Map<string, Role> {
-  return new Map([...route.roles].map(([sp, r]) => [sp, r === 'off_route' ? (route.offRouteKinds.get(sp) ?? r) : r]));
+  return new Map([...route.roles].map(([sp, r]) => [sp, r === 'off_route' ? (route.offRouteKinds?.get(sp) ?? r) : r]));
 }
 
 /** A declared chain carrier must cancel on the route, as a propagation cycle regenerates it. */
