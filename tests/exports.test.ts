@@ -13,6 +13,7 @@ describe('public API', () => {
       'RULE_IDS',
       'countBySeverity',
       'diagnostic',
+      'pathWords',
       'ruleSummary',
       'uncertaintyOf',
     ]);

@@ -3,6 +3,7 @@
  * type generated from the schema, and the JSON report. Imports nothing.
  */
 export { countBySeverity, diagnostic, type Diagnostic, type RecordPath, type Severity } from './diagnostic.ts';
+export { pathWords } from './path-words.ts';
 export { RULES, RULE_IDS, ruleSummary, type RuleId } from './rules/index.ts';
 export type { RuleDefinition } from './rules/rule-definition.ts';
 export type {
@@ -36,4 +37,5 @@ export type {
   RecordReport,
   SimulationJson,
   TermJson,
+  VerdictCounts,
 } from './report.ts';

@@ -18,13 +18,20 @@ export type Status = 'proposed' | 'favoured' | 'disfavoured' | 'withdrawn';
  */
 export type Notation = 'formulas' | 'labels';
 /**
- * The part a species plays in the overall reaction. A declared role must agree with the derived one; declaring intermediate or catalyst also tells the route finder that the species must cancel.
+ * The part a species plays in the overall reaction. A declared role must agree with the derived one; declaring intermediate or catalyst also tells the route finder that the species must cancel on the route (nothing more: a declared intermediate is not thereby a chain carrier, see chain_carrier). off_route: found only on steps off the route (σ = 0), such as a side product of termination or a dead-end complex.
  *
  * This interface was referenced by `MechanismRecord`'s JSON-Schema
  * via the `definition` "Role".
  */
 export type Role =
-  'reactant' | 'product' | 'intermediate' | 'catalyst' | 'inhibitor' | 'third_body' | 'solvent';
+  | 'reactant'
+  | 'product'
+  | 'intermediate'
+  | 'catalyst'
+  | 'inhibitor'
+  | 'third_body'
+  | 'solvent'
+  | 'off_route';
 /**
  * How to derive the rate law: rds (rate-determining step with fast pre-equilibria), steady_state (Bodenstein approximation for every intermediate), both, or auto (rds when a step is marked rds, otherwise steady state).
  *
@@ -175,6 +182,10 @@ export interface SpeciesEntry {
    * true: its free concentration is held constant (a buffer, or a large excess), so it has no conservation relation but stays in the rate law.
    */
   buffered?: boolean;
+  /**
+   * true: a chain carrier (an atom or radical that a propagation cycle regenerates). The route is then the propagation cycle, with the steps that make carriers from non-carriers (initiation) and the steps that destroy them (termination) off the route — the long-chain convention. Without it, chains are detected from the steps; role: intermediate alone never makes a species a carrier.
+   */
+  chain_carrier?: boolean;
 }
 /**
  * One elementary step.

@@ -31,6 +31,17 @@ export interface RecordReport {
   stoichiometric_numbers?: number[];
   stoichiometric_numbers_source?: 'given' | 'derived';
   roles?: Record<string, string>;
+  /**
+   * the chain the route carries, where one is declared (chain_carrier) or detected: its carriers,
+   * and the steps (numbered from 1) that propagate it (the route), start it and end it (off the route)
+   */
+  chain?: {
+    carriers: string[];
+    propagation: number[];
+    initiation: number[];
+    termination: number[];
+    source: 'declared' | 'detected';
+  };
   buffered?: string[];
   rate_laws?: RateLawJson[];
   observations?: ObservationJson[];
@@ -89,15 +100,39 @@ export interface ObservationJson {
   method: string;
   observed: number;
   tolerance: number;
+  /** the order at the observation's conditions, or the one the law fixes whatever the constants */
   predicted?: number;
+  /** where the order depends on unknown constants: every order the law allows at these conditions */
   range?: [number, number];
+  /** the limiting orders as [X] → 0 and [X] → ∞, where they differ (they do not bound the order) */
+  limits?: [number, number];
   basis: string;
+  /** pass, fail, not_excluded (allowed for some constants, which are unknown) or unknown (no prediction) */
   status: string;
+  /** why there is no prediction, or why it stays open */
+  reason?: string;
+}
+
+/** How many observation checks had each verdict. */
+export interface VerdictCounts {
+  pass: number;
+  fail: number;
+  /** allowed for some constants, which are unknown */
+  not_excluded: number;
+  /** no prediction */
+  unknown: number;
 }
 
 /** The whole report: the tool, a summary and one entry per record. */
 export interface CatalogueReport {
   tool: { name: 'mechatlas'; version: string };
-  summary: { records: number; errors: number; warnings: number; notes: number };
+  summary: {
+    records: number;
+    errors: number;
+    warnings: number;
+    notes: number;
+    /** the checks of each record's primary rate law, counted by verdict */
+    observations?: VerdictCounts;
+  };
   records: RecordReport[];
 }

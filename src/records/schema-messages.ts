@@ -3,7 +3,7 @@
  * indices as numbers, the noise of anyOf/oneOf branches folded away and repeats dropped.
  */
 import type { ErrorObject } from 'ajv';
-import type { RecordPath } from '../model/index.ts';
+import { pathWords as wordsForPath, type RecordPath } from '../model/index.ts';
 import { describeSchemaError } from './describe-schema-error.ts';
 import type { SchemaProblem } from './describe-schema-error.ts';
 
@@ -25,9 +25,9 @@ export function recordPath(pointer: string, data: unknown): RecordPath {
   return path;
 }
 
-/** How a path reads at the start of a message: `steps/2`, or "the record" for the whole file. */
+/** How a path reads at the start of a message: "step 3, k" (counted from 1), or "the record" for the whole file. */
 export function pathWords(path: RecordPath): string {
-  return path.length === 0 ? 'the record' : path.join('/');
+  return wordsForPath(path);
 }
 
 function isAlternativeNoise(error: ErrorObject, all: readonly ErrorObject[]): boolean {

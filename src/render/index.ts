@@ -15,6 +15,7 @@ export {
   type RecordInput,
 } from './report/record-report.ts';
 export { sarifReport } from './report/sarif.ts';
+export { primaryChecks, tallyVerdicts } from './report/verdict-tally.ts';
 export { byPosition, diagnosticRow, summaryLine, textReport } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
@@ -44,11 +45,14 @@ export {
   roleWords,
   severityCount,
   severityWord,
+  standingMark,
   signedValue,
   speciesLatex,
   speciesTerms,
   superscript,
   symbolLatex,
   trueMinus,
+  VERDICTS,
+  verdictCounts,
   verdictMark,
 } from './words/index.ts';

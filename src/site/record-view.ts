@@ -4,8 +4,16 @@
  * LaTeX with catalysts over the arrow, the species with their roles, and the figures.
  */
 import type { CatalogueRecord } from '../catalogue/index.ts';
-import type { Observation, RecordReport, Reference } from '../model/index.ts';
-import { concentrationTimeSvg, energyProfileSvg, overallLatex, recordReport, sbmlDocument } from '../render/index.ts';
+import type { Observation, RecordReport, Reference, VerdictCounts } from '../model/index.ts';
+import {
+  concentrationTimeSvg,
+  energyProfileSvg,
+  overallLatex,
+  primaryChecks,
+  recordReport,
+  sbmlDocument,
+  tallyVerdicts,
+} from '../render/index.ts';
 
 export interface StepView {
   index: number;
@@ -77,6 +85,8 @@ export interface RecordView {
   warnings: number;
   /** no errors and no observation contradicted by the primary rate law */
   survives: boolean;
+  /** the primary rate law's checks counted by verdict (not excluded apart from consistent) */
+  verdicts: VerdictCounts;
 }
 
 /** Builds the page data of one catalogue record. */
@@ -99,6 +109,7 @@ export function recordView(checked: CatalogueRecord): RecordView {
     errors: count('error'),
     warnings: count('warning'),
     survives: false,
+    verdicts: tallyVerdicts(primaryChecks(report)),
   };
   if (record)
     Object.assign(

@@ -1,10 +1,12 @@
 /**
  * A reaction system's page data: its rival proposals side by side, every observation of any
- * rival judged against every rival (as the engine judged them), which rivals survive, and for
+ * rival judged against every rival (as the engine judged them), which rivals survive (every check
+ * a pass or not excluded; a check with no prediction leaves a rival undecided), and for
  * each surviving pair the species whose predicted order differs most — the measurement that
  * would best tell them apart.
  */
-import type { ObservationJson } from '../model/index.ts';
+import type { ObservationJson, VerdictCounts } from '../model/index.ts';
+import { tallyVerdicts } from '../render/index.ts';
 import type { RecordView } from './record-view.ts';
 
 export interface RivalColumn {
@@ -22,7 +24,15 @@ export interface RivalColumn {
   numericOnly?: boolean;
   /** 1-based index of this rival's overall change among the distinct ones in the system */
   overallVariant?: number;
+  /** no errors, and every observation passes or is not excluded (standing 'survives') */
   survives: boolean;
+  /**
+   * survives: no errors, and every check passes or is not excluded; ruled_out: errors, or an
+   * observation contradicts it; undecided: nothing contradicts it, but some check has no prediction
+   */
+  standing: 'survives' | 'ruled_out' | 'undecided';
+  /** its checks against every observation of the system, counted by verdict */
+  tally: VerdictCounts;
   errors: number;
 }
 
@@ -65,7 +75,15 @@ export function systemView(
   const variants: string[] = [];
   const columns = rivals.map((r, i): RivalColumn => {
     const law = r.report.rate_laws?.[0];
-    const c: RivalColumn = { id: r.id, short: shorts[i]!, title: r.title, survives: false, errors: r.errors };
+    const c: RivalColumn = {
+      id: r.id,
+      short: shorts[i]!,
+      title: r.title,
+      survives: false,
+      standing: 'undecided',
+      tally: tallyVerdicts([]),
+      errors: r.errors,
+    };
     if (r.status) c.status = r.status;
     if (r.report.overall) c.overallText = r.report.overall.text;
     if (r.overallLatex) c.overallLatex = r.overallLatex;
@@ -106,7 +124,11 @@ export function systemView(
   const matrix = [...rows.values()];
   for (const column of columns) {
     const rival = rivals.find((r) => r.id === column.id)!;
-    column.survives = rival.errors === 0 && matrix.every((row) => row.cells[column.id]?.status !== 'fail');
+    // A row this rival has no check for counts as no prediction: it cannot survive on silence.
+    column.tally = tallyVerdicts(matrix.map((row) => row.cells[column.id] ?? { status: 'unknown' }));
+    column.standing =
+      rival.errors > 0 || column.tally.fail > 0 ? 'ruled_out' : column.tally.unknown > 0 ? 'undecided' : 'survives';
+    column.survives = column.standing === 'survives';
   }
   return {
     system,

@@ -215,15 +215,16 @@ steps:
     expect(errorRules(d)).toEqual([]);
     expect(d.stoichiometricNumbers).toEqual([0, 1, 1, 0]);
     expect(overallSides(d)).toEqual({ reactants: { CH4: 1, Cl2: 1 }, products: { HCl: 1, CH3Cl: 1 }, catalysts: [] });
-    expect(d.roles!.get('C2H6')).toBe('product');
+    // Ethane forms only in the termination step, which is off the route: a side product, not a product of the overall equation.
+    expect(d.roles!.get('C2H6')).toBe('off_route');
   });
 
   it('Rice–Herzfeld ethane pyrolysis with declared chain carriers: C2H6 -> C2H4 + H2', () => {
     // F. O. Rice and K. F. Herzfeld (1934), as in Atkins & de Paula, Physical Chemistry (from memory).
+    // The chain carriers are C2H5• and H•; CH3• only takes part in the initiation sequence.
     const d = deriveYaml(`${header('ethane')}species:
-  CH3•: { role: intermediate }
-  C2H5•: { role: intermediate }
-  H•: { role: intermediate }
+  C2H5•: { chain_carrier: true }
+  H•: { chain_carrier: true }
 steps:
   - equation: C2H6 -> 2 CH3•
   - equation: CH3• + C2H6 -> CH4 + C2H5•

@@ -15,6 +15,7 @@ import {
   roleRank,
   roleWords,
   severityCount,
+  verdictCounts,
   verdictMark,
 } from '../../src/render/words/index.ts';
 import { observationRows } from '../../src/site/index.ts';
@@ -96,8 +97,24 @@ describe('display words and number formats', () => {
   it('says what was predicted: at the conditions, at any, or a range', () => {
     expect(predictionText(check({ predicted: 0.5252 }))).toBe('0.525 at these conditions');
     expect(predictionText(check({ predicted: 1, basis: 'limits' }))).toBe('1 (at any conditions)');
-    expect(predictionText(check({ range: [0, 1], basis: 'limits' }))).toBe('0 to 1 (depends on the constants)');
+    expect(predictionText(check({ range: [0, 1], basis: 'limits', status: 'not_excluded' }))).toBe(
+      '0 to 1 for some constants (not given)',
+    );
     expect(predictionText(check({ basis: 'none', status: 'unknown' }))).toBe('—');
+    expect(predictionText(check({ basis: 'none', status: 'unknown', reason: 'no closed form' }))).toBe(
+      'no prediction: no closed form',
+    );
+  });
+
+  it('shows the third verdict apart from a pass, and counts verdicts apart', () => {
+    const open = verdictMark('not_excluded');
+    expect(open.symbol).not.toBe(verdictMark('pass').symbol);
+    expect(open.className).not.toBe(verdictMark('pass').className);
+    expect(open.className).not.toBe(verdictMark('unknown').className);
+    expect(verdictCounts({ pass: 2, fail: 0, not_excluded: 1, unknown: 1 })).toBe(
+      '2 consistent, 1 not excluded, 1 no prediction',
+    );
+    expect(verdictCounts({ pass: 0, fail: 0, not_excluded: 0, unknown: 0 })).toBe('');
   });
 
   it('gathers the checks of several rate laws into one row per observed order', () => {

@@ -6,6 +6,7 @@ import {
   roleSummary,
   ruleIndex,
   shortLabels,
+  systemView,
   type RecordView,
 } from '../../src/site/index.ts';
 
@@ -105,5 +106,41 @@ describe('groupDiagnostics', () => {
     expect(groups[1]!.rules[0]).toMatchObject({ rule: 'observation/order', anchor: 'warning-observation-order' });
     expect(groups[1]!.rules[0]!.items.map((i) => i.diagnostic.line)).toEqual([27, 30]);
     expect(ruleIndex(groups).map((r) => r.rule)).toEqual(['observation/order', 'rate/nonlinear']);
+  });
+});
+
+describe('systemView standings', () => {
+  const law = [{ method: 'steady_state', orders: {}, derivation: [] }];
+  const judged = (id: string, statuses: string[]) =>
+    view(id, {
+      report: {
+        id,
+        file: `/abs/${id}.yaml`,
+        diagnostics: [],
+        rate_laws: law,
+        observations: statuses.map((status, i) => ({
+          id: `o${i}`,
+          species: 'S',
+          method: 'steady_state',
+          observed: 1,
+          tolerance: 0.1,
+          basis: 'limits',
+          status,
+        })),
+      },
+    } as Partial<RecordView>);
+
+  it('a rival survives only on passes and not-excluded; no prediction leaves it undecided; a failure rules it out', () => {
+    const v = systemView('s', [
+      judged('sys-a', ['pass', 'not_excluded']),
+      judged('sys-b', ['pass', 'unknown']),
+      judged('sys-c', ['fail', 'not_excluded']),
+    ]);
+    expect(v.rivals.map((r) => [r.id, r.standing, r.survives])).toEqual([
+      ['sys-a', 'survives', true],
+      ['sys-b', 'undecided', false],
+      ['sys-c', 'ruled_out', false],
+    ]);
+    expect(v.rivals[0]!.tally).toEqual({ pass: 1, fail: 0, not_excluded: 1, unknown: 0 });
   });
 });

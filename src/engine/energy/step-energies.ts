@@ -3,7 +3,7 @@
  * starting state (DESIGN.md item 8), so a profile is built by adding them up along the route.
  */
 import type { MechanismRecord } from '../../model/index.ts';
-import { diagnostic, type Diagnostic } from '../../model/index.ts';
+import { diagnostic, pathWords, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { parseQuantity, toCanonical } from '../units/quantity.ts';
 import { MOLAR_ENERGY, sameDimension } from '../units/units.ts';
@@ -39,7 +39,7 @@ export function readStepEnergies(
 
 function readEnergy(text: string | number, path: (string | number)[], diagnostics: Diagnostic[]): number | undefined {
   const parsed = parseQuantity(text);
-  const field = path.join('/');
+  const field = pathWords(path);
   if ('error' in parsed) {
     diagnostics.push(diagnostic('energy/profile', 'error', `${field}: ${parsed.error}`, { path, actual: text }));
     return undefined;

@@ -4,7 +4,7 @@
  * to the power (particles formed − particles consumed).
  */
 import type { MechanismRecord } from '../../model/index.ts';
-import { diagnostic, type Diagnostic } from '../../model/index.ts';
+import { diagnostic, pathWords, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
 import { molecularity } from './molecularity.ts';
 import { parseQuantity, toCanonical, type Quantity } from '../units/quantity.ts';
@@ -87,7 +87,7 @@ function checkedQuantity(
   diagnostics: Diagnostic[],
 ): Quantity | undefined {
   const parsed = parseQuantity(text);
-  const field = path.join('/');
+  const field = pathWords(path);
   if ('error' in parsed) {
     diagnostics.push(diagnostic('step/units', 'error', `${field}: ${parsed.error}`, { path }));
     return undefined;

@@ -4,28 +4,44 @@
  */
 import type { Observation, Status } from '../../model/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
-import { contradiction, judgeOrder, readObservedOrder, type ObservationCheck, type Prediction } from './judge-order.ts';
+import {
+  contradiction,
+  judgeOrder,
+  openVerdict,
+  readObservedOrder,
+  type ObservationCheck,
+  type Prediction,
+} from './judge-order.ts';
+import { orderBounds } from './order-bounds.ts';
 import type { RateLawContext } from '../rate-law/context.ts';
 import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
 import { observationValues } from '../rate-law/numeric-values.ts';
 import { numericOrderAt } from '../rate-law/numeric-order.ts';
 import { apparentOrder, orderLimitsOf, withAbsent } from '../rate-law/orders.ts';
+import type { RationalFunction } from '../exact/index.ts';
 import type { OrderRange } from '../rate-law/rate-law.ts';
 import { restingStates, type RestingState } from '../rate-law/resting-state.ts';
 
-/** Order limits with the species this observation lacks (zero concentration) taken as absent. */
+/** The presented law with the species this observation lacks (zero concentration) taken as absent. */
+function lawAt(
+  derived: DerivedRateLaw,
+  symbol: string,
+  values: ReadonlyMap<string, number>,
+): RationalFunction | undefined {
+  const expression = derived.presented?.expression;
+  if (!expression) return undefined;
+  const absent = expression.symbols().filter((s) => values.get(s) === 0 && s !== symbol);
+  return withAbsent(expression, absent);
+}
+
+/** Order limits of the law as this observation has it. */
 function limitsAt(
   derived: DerivedRateLaw,
   species: string,
-  symbol: string | undefined,
-  values: ReadonlyMap<string, number>,
+  law: RationalFunction | undefined,
+  symbol: string,
 ): OrderRange | undefined {
-  const expression = derived.presented?.expression;
-  if (!expression || !symbol) return derived.orders.get(species);
-  const absent = expression.symbols().filter((s) => values.get(s) === 0 && s !== symbol);
-  return (
-    orderLimitsOf(withAbsent(expression, absent), [{ species, symbol }]).get(species) ?? derived.orders.get(species)
-  );
+  return (law && orderLimitsOf(law, [{ species, symbol }]).get(species)) ?? derived.orders.get(species);
 }
 
 /** What the observations say about each rate law. */
@@ -76,15 +92,7 @@ export function checkObservations(
         );
       }
       rateLaws.forEach((derived, lawIndex) => {
-        const prediction: Prediction = {};
-        const limits = limitsAt(derived, species, symbol, values);
-        if (symbol && limits) prediction.limits = limits;
-        if (symbol && context.mechanism.species.has(species)) {
-          const at = derived.law.expression
-            ? apparentOrder(derived.law.expression, symbol, values, limits?.low.toNumber())
-            : derived.law.nonlinear && numericOrderAt(derived.law.nonlinear, symbol, values);
-          if (typeof at === 'number') prediction.atConditions = at;
-        }
+        const prediction = predict(derived, species, symbol, values, context);
         const check = judgeOrder(
           observation.id,
           species,
@@ -94,9 +102,36 @@ export function checkObservations(
           prediction,
         );
         checks.push(check);
-        if (lawIndex === 0 && check.status === 'fail') diagnostics.push(contradiction(check, record.status, index));
+        if (lawIndex !== 0) return;
+        if (check.status === 'fail') diagnostics.push(contradiction(check, record.status, index));
+        else if (check.status !== 'pass' && symbol) diagnostics.push(openVerdict(check, index));
       });
     }
   });
   return { checks, restingStates: resting, diagnostics };
+}
+
+/** What one law predicts for one species at one observation's conditions. */
+function predict(
+  derived: DerivedRateLaw,
+  species: string,
+  symbol: string | undefined,
+  values: ReadonlyMap<string, number>,
+  context: RateLawContext,
+): Prediction {
+  if (!symbol || !context.mechanism.species.has(species))
+    return { missing: `${species} is not a species of this mechanism` };
+  const prediction: Prediction = {};
+  const law = lawAt(derived, symbol, values);
+  const limits = limitsAt(derived, species, law, symbol);
+  if (limits) prediction.limits = limits;
+  if (law) prediction.bounds = orderBounds(law, symbol);
+  const at = derived.law.expression
+    ? apparentOrder(derived.law.expression, symbol, values, limits?.low.toNumber())
+    : derived.law.nonlinear && numericOrderAt(derived.law.nonlinear, symbol, values);
+  if (typeof at === 'number' && Number.isFinite(at)) prediction.atConditions = at;
+  else if (!derived.law.expression)
+    prediction.missing =
+      'the steady state has no closed form, so the order comes only from solving it numerically at these conditions, which needs every rate constant and concentration';
+  return prediction;
 }

@@ -5,7 +5,7 @@
 import type { Approximation, Role } from '../../model/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
-import type { Route } from '../route/route.ts';
+import { kineticRoles, type Route } from '../route/route.ts';
 import { rateLawContext, type RateLawContext } from './context.ts';
 import { formatterFor } from './formatter.ts';
 import { orderLimitsOf, orderSymbols, withAbsent } from './orders.ts';
@@ -38,7 +38,9 @@ export interface RateLawStage {
 
 /** Derives the rate laws the record's `approximation` asks for along the route, with their limiting orders. */
 export function deriveRateLaws(approximation: Approximation, mechanism: Mechanism, route: Route): RateLawStage {
-  const { sigma, roles, offRoute } = route;
+  const { sigma, offRoute } = route;
+  // Off-route species enter the kinetics as what they behave like (a dead-end form is eliminated).
+  const roles = kineticRoles(route);
   const diagnostics: Diagnostic[] = [];
   const context = rateLawContext(mechanism, sigma, roles, offRoute, route.order);
   const fmt = formatterFor(mechanism);
@@ -90,7 +92,7 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(concentration(s)));
     rateLaws.push({ law, presented, orders: reportedOrders(presented.expression, symbols, roles), restingStates: [] });
   }
-  return { context, rateLaws, symbols, roles: confirmInhibitors(roles, offRoute, rateLaws[0]), diagnostics };
+  return { context, rateLaws, symbols, roles: confirmInhibitors(route.roles, offRoute, rateLaws[0]), diagnostics };
 }
 
 /**

@@ -66,6 +66,7 @@ export function eliminateByPreEquilibria(
           stuck,
           equilibria,
           unknowns.filter((sp) => !value.has(sp)),
+          mechanism.steps.filter((s) => s !== rds && !s.reversible && before(s)),
         ),
       ],
     };
@@ -132,7 +133,30 @@ function equilibriumLine(step: Step, fmt: Formatter): TraceLine {
   return fmt.line(`step ${step.label} at equilibrium`, [K, fmt.style.latex(K)], quotient);
 }
 
-function notEliminable(rds: Step, stuck: string[], equilibria: Step[], undetermined: string[]): Diagnostic {
+/**
+ * Why intermediates cannot be eliminated. Where a one-way step before the rds forms one, the
+ * diagnostic points at that step: it is the one that would have to be a reversible pre-equilibrium.
+ */
+function notEliminable(
+  rds: Step,
+  stuck: string[],
+  equilibria: Step[],
+  undetermined: string[],
+  oneWayBefore: Step[],
+): Diagnostic {
+  const culprit = oneWayBefore.find((s) => stuck.some((sp) => (s.change.get(sp)?.sign() ?? 0) > 0));
+  if (culprit) {
+    const made = stuck.filter((sp) => (culprit.change.get(sp)?.sign() ?? 0) > 0);
+    return diagnostic(
+      'rate/not-eliminable',
+      'error',
+      `${made.join(', ')} cannot be eliminated: step ${culprit.label} (${culprit.text}) forms ${made.length > 1 ? 'them' : 'it'} one-way before the rate-determining step ${rds.label}, so it cannot stand as a pre-equilibrium`,
+      {
+        path: ['steps', culprit.index],
+        note: `write step ${culprit.label} as reversible (<=>) if it is a fast pre-equilibrium, or use approximation: steady_state`,
+      },
+    );
+  }
   const reasons = stuck.map((sp) => {
     const holding = equilibria.filter((s) => s.change.has(sp));
     if (holding.length === 0) return `no reversible step before the rate-determining step ${rds.label} forms ${sp}`;

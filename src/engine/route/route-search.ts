@@ -2,29 +2,35 @@
  * The search behind the route finder: every connected set of steps (support), and within it the
  * set of species that cancel, best first; each one-dimensional solution is a candidate route
  * scored by what it cancels, each several-dimensional one a family of independent routes.
+ * The search spends a measured budget (search-budget.ts) and says when it ran out.
  */
+import { rank } from '../exact/linear-algebra.ts';
 import { hasNonNegativeKernel, positiveKernel } from '../exact/positive-kernel.ts';
 import { Rational } from '../exact/rational.ts';
+import { cancelSets, firstChangeSign } from './cancel-sets.ts';
+import type { SearchBudget } from './search-budget.ts';
 
 /** A step as the route search sees it. */
 export interface RouteStep {
   /** Net change per species (products minus reactants); third bodies net to zero. */
   change: ReadonlyMap<string, Rational>;
   times?: number;
+  /** a reversible step also runs backwards (a chain's initiation written as an equilibrium) */
+  reversible?: boolean;
 }
 
 export interface Candidate {
   sigma: bigint[];
   /** species that cancel and are formed before they are consumed along the route */
   intermediates: number;
-  /** species that cancel and are both formed and consumed */
+  /** species that cancel and are both formed and consumed (solvents never count) */
   cancelled: number;
   plainSum: boolean;
   steps: number;
   size: bigint;
   /** the sum of the overall equation's coefficients: smaller is the more economical account */
   overallSize: number;
-  /** steps that only make declared chain carriers (initiation) or only destroy them (termination) */
+  /** steps that only make chain carriers (initiation) or only destroy them (termination); set once the chain is known */
   chainEnds: number;
   /** net reactants of the route that some step of the mechanism makes (not a starting material) */
   madeReactants: number;
@@ -34,8 +40,25 @@ export interface Family {
   intermediates: number;
   cancelled: number;
   rays: bigint[][];
-  /** initiation and termination steps of declared carriers among its steps */
+  /** initiation and termination steps of the chain among its steps; set once the chain is known */
   chainEnds: number;
+}
+
+/** What the search found, and whether it looked at every set of steps. */
+export interface SearchResult {
+  routes: Candidate[];
+  families: Family[];
+  /** false when the budget ran out before every set of steps was tried */
+  complete: boolean;
+}
+
+/** What constrains the search. */
+export interface SearchOptions {
+  /** declared intermediates and catalysts: where a set of steps holds them, they must cancel */
+  mustCancel: ReadonlySet<string>;
+  /** solvents: they keep their stoichiometry, so they never have to cancel and never count as cancelled */
+  inert: ReadonlySet<string>;
+  budget: SearchBudget;
 }
 
 /** Columns of the search: each step without `times`, plus the given steps as one fixed block. */
@@ -64,13 +87,9 @@ export function routeColumns(steps: readonly RouteStep[], free: number[]): Colum
   return columns;
 }
 
-/** Every candidate route and family over the connected supports. */
-export function searchSupports(
-  steps: readonly RouteStep[],
-  columns: Column[],
-  mustCancel: ReadonlySet<string>,
-  carriers: ReadonlySet<string> = new Set(),
-) {
+/** Every candidate route and family over the connected supports, within the budget. */
+export function searchSupports(steps: readonly RouteStep[], columns: Column[], options: SearchOptions): SearchResult {
+  const { mustCancel, inert, budget } = options;
   const routes: Candidate[] = [];
   const families: Family[] = [];
   const made = new Set(steps.flatMap((st) => [...st.change].filter(([, v]) => v.sign() > 0).map(([sp]) => sp)));
@@ -83,16 +102,18 @@ export function searchSupports(
     const species = [...new Set(support.flatMap((c) => [...columns[c]!.change.keys()]))];
     const matrixFor = (rows: string[]) =>
       rows.map((sp) => support.map((c) => columns[c]!.change.get(sp) ?? Rational.ZERO));
+    const whole = matrixFor(species);
+    if (!budget.take(kernelCost(whole, support.length))) return { routes, families, complete: false };
     // A set of steps that together change nothing (a step and its reverse, initiation plus termination) is never part of a route.
-    if (hasNonNegativeKernel(matrixFor(species), support.length)) continue;
+    if (hasNonNegativeKernel(whole, support.length)) continue;
     const signs = (sp: string) => new Set(support.map((c) => columns[c]!.change.get(sp)?.sign() ?? 0));
-    const twoWay = species.filter((sp) => signs(sp).has(1) && signs(sp).has(-1));
+    const twoWay = species.filter((sp) => !inert.has(sp) && signs(sp).has(1) && signs(sp).has(-1));
     if ([...mustCancel].some((sp) => species.includes(sp) && !twoWay.includes(sp))) continue;
     const forced = twoWay.filter((sp) => mustCancel.has(sp));
     const choosable = twoWay.filter((sp) => !mustCancel.has(sp));
     const stepsUsed = support.flatMap((c) => [...columns[c]!.expand.keys()]).sort((a, b) => a - b);
     const firstSign = (sp: string) => firstChangeSign(steps, stepsUsed, sp);
-    const subsets = cancelSets(choosable, forced, firstSign);
+    const subsets = cancelSets(choosable, forced, firstSign, budget);
     let best: [number, number] | undefined;
     for (const cancel of subsets) {
       if (
@@ -100,27 +121,33 @@ export function searchSupports(
         (cancel.species.length < best[0] || (cancel.species.length === best[0] && cancel.intermediates < best[1]))
       )
         break;
-      const kernel = positiveKernel(matrixFor(cancel.species), support.length);
+      const matrix = matrixFor(cancel.species);
+      if (!budget.take(kernelCost(matrix, support.length))) return { routes, families, complete: false };
+      const kernel = positiveKernel(matrix, support.length);
       if (kernel.kind === 'none') continue;
       best = [cancel.species.length, cancel.intermediates];
       if (kernel.kind === 'family') {
         const rays = kernel.rays.map((r) => expandSigma(steps.length, columns, support, r));
-        const used = steps.flatMap((st, i) =>
-          rays.some((r) => r[i]! > 0n) && carriers.size > 0 && isChainEnd(st, carriers) ? [i] : [],
-        );
-        families.push({
-          intermediates: cancel.intermediates,
-          cancelled: cancel.species.length,
-          rays,
-          chainEnds: used.length,
-        });
+        families.push({ intermediates: cancel.intermediates, cancelled: cancel.species.length, rays, chainEnds: 0 });
         continue;
       }
       const sigma = expandSigma(steps.length, columns, support, kernel.vector);
-      if (!routes.some((r) => r.sigma.join() === sigma.join())) routes.push(scoreRoute(steps, sigma, carriers, made));
+      if (!routes.some((r) => r.sigma.join() === sigma.join())) routes.push(scoreRoute(steps, sigma, made, inert));
     }
+    if (budget.exhausted) return { routes, families, complete: false };
   }
-  return { routes, families };
+  return { routes, families, complete: true };
+}
+
+/**
+ * The work of one kernel in budget units: one for the elimination, and for a kernel of dimension
+ * d ≥ 2 the C(n, d − 1) small systems its extreme rays take (positive-kernel.ts).
+ */
+function kernelCost(matrix: Rational[][], columns: number): number {
+  const d = columns - rank(matrix, columns);
+  let cost = 1;
+  for (let j = 0; j < d - 1; j++) cost = (cost * (columns - j)) / (j + 1);
+  return d >= 2 ? 1 + Math.round(cost) : 1;
 }
 
 /** True when the columns are linked by shared species into one piece. */
@@ -139,46 +166,6 @@ function connected(support: number[], columns: Column[]): boolean {
   return reached.size === support.length;
 }
 
-/**
- * Subsets of the species that may cancel, best first: most species, then most of the
- * intermediate pattern. Generated lazily, because the first feasible set is almost always the full one.
- */
-function* cancelSets(
-  choosable: string[],
-  forced: string[],
-  firstSign: (sp: string) => number,
-): Generator<{ species: string[]; intermediates: number }> {
-  const forcedIntermediates = forced.filter((sp) => firstSign(sp) > 0).length;
-  for (let drop = 0; drop <= choosable.length; drop++) {
-    const sets = [...combinationsOf(choosable, choosable.length - drop)].map((kept) => ({
-      species: [...forced, ...kept],
-      intermediates: forcedIntermediates + kept.filter((sp) => firstSign(sp) > 0).length,
-    }));
-    yield* sets.sort((a, b) => b.intermediates - a.intermediates);
-  }
-}
-
-function* combinationsOf<T>(items: readonly T[], k: number, start = 0, picked: T[] = []): Generator<T[]> {
-  if (picked.length === k) {
-    yield [...picked];
-    return;
-  }
-  for (let i = start; i <= items.length - (k - picked.length); i++) {
-    picked.push(items[i]!);
-    yield* combinationsOf(items, k, i + 1, picked);
-    picked.pop();
-  }
-}
-
-/** +1 when the species is formed before it is consumed along the steps (in record order), −1 otherwise. */
-function firstChangeSign(steps: readonly RouteStep[], stepIndices: number[], sp: string): number {
-  for (const i of stepIndices) {
-    const v = steps[i]!.change.get(sp);
-    if (v && !v.isZero()) return v.sign();
-  }
-  return 0;
-}
-
 function expandSigma(n: number, columns: Column[], support: number[], vector: bigint[]): bigint[] {
   const sigma = Array<bigint>(n).fill(0n);
   support.forEach((c, j) => {
@@ -188,11 +175,11 @@ function expandSigma(n: number, columns: Column[], support: number[], vector: bi
 }
 
 /** Scores a route by what it cancels, from the σ it actually has. */
-function scoreRoute(
+export function scoreRoute(
   steps: readonly RouteStep[],
   sigma: bigint[],
-  carriers: ReadonlySet<string>,
   made: ReadonlySet<string>,
+  inert: ReadonlySet<string>,
 ): Candidate {
   const used = sigma.flatMap((s, i) => (s > 0n ? [i] : []));
   const net = new Map<string, Rational>();
@@ -206,7 +193,9 @@ function scoreRoute(
       if (!first.has(sp)) first.set(sp, v.sign());
     }
   }
-  const cancelledSpecies = [...net].filter(([sp, v]) => v.isZero() && seenSigns.get(sp)!.size === 2).map(([sp]) => sp);
+  const cancelledSpecies = [...net]
+    .filter(([sp, v]) => v.isZero() && seenSigns.get(sp)!.size === 2 && !inert.has(sp))
+    .map(([sp]) => sp);
   return {
     sigma,
     intermediates: cancelledSpecies.filter((sp) => first.get(sp) === 1).length,
@@ -215,16 +204,7 @@ function scoreRoute(
     steps: used.length,
     size: sigma.reduce((a, b) => a + b, 0n),
     overallSize: [...net.values()].reduce((n, v) => n + v.abs().toNumber(), 0),
-    chainEnds: carriers.size === 0 ? 0 : used.filter((i) => isChainEnd(steps[i]!, carriers)).length,
+    chainEnds: 0,
     madeReactants: [...net].filter(([sp, v]) => v.sign() < 0 && made.has(sp)).length,
   };
-}
-
-/** Initiation makes carriers from none; termination destroys carriers and makes none. */
-function isChainEnd(step: RouteStep, carriers: ReadonlySet<string>): boolean {
-  const made = [...step.change].filter(([, v]) => v.sign() > 0).map(([sp]) => sp);
-  const used = [...step.change].filter(([, v]) => v.sign() < 0).map(([sp]) => sp);
-  const initiation = made.some((sp) => carriers.has(sp)) && !used.some((sp) => carriers.has(sp));
-  const termination = used.some((sp) => carriers.has(sp)) && !made.some((sp) => carriers.has(sp));
-  return initiation || termination;
 }

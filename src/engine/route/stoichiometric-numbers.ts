@@ -1,30 +1,58 @@
 /**
  * Horiuti stoichiometric numbers: how many times each step runs in one turnover of the overall
  * reaction. Given `times` wins; otherwise the route is chosen by the preference order of
- * DESIGN.md item 2, searching supports (sets of steps) and the species each route cancels.
+ * DESIGN.md item 2 (route-preference.ts). Declared intermediates and catalysts must cancel, but a
+ * declaration never makes the finder drop a step: the route is found without the declarations
+ * too, and where honouring them would leave out a step that route runs, that route stands and
+ * the declarations it cannot honour are reported.
  */
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { Rational } from '../exact/rational.ts';
-import { routeColumns, searchSupports, type Candidate, type Family, type RouteStep } from './route-search.ts';
+import { declaredChain, detectChain, type ChainStructure } from './chain-structure.ts';
+import { findRoute, type Found } from './find-route.ts';
+import type { Candidate, RouteStep } from './route-search.ts';
+import { SearchBudget } from './search-budget.ts';
 
 export type { RouteStep };
+
+/** Why a declared intermediate or catalyst could not be honoured. */
+export type Unhonoured = { kind: 'no-route' } | { kind: 'drops-steps'; steps: number[] };
 
 export interface RouteResult {
   /** σ per step, or undefined when no single route could be chosen. */
   numbers?: number[];
   source: 'given' | 'derived' | 'none';
+  /** the chain the route carries, where one is declared or detected */
+  chain?: ChainStructure;
+  /** declared intermediates and catalysts the route does not let cancel, and why */
+  unhonoured: Map<string, Unhonoured>;
+  /** the candidate routes of the search that chose σ, best first (empty when σ is given) */
+  ranked: Candidate[];
   diagnostics: Diagnostic[];
+}
+
+/** What the record says about the route besides its steps. */
+export interface RouteOptions {
+  /** declared intermediates and catalysts */
+  mustCancel?: ReadonlySet<string>;
+  /** declared chain carriers (`chain_carrier: true`) */
+  carriers?: ReadonlySet<string>;
+  /** solvents: never required to cancel */
+  inert?: ReadonlySet<string>;
+  /** index of the declared rate-determining step */
+  rds?: number;
+  /** the work the search may spend (search-budget.ts) */
+  budget?: SearchBudget;
 }
 
 /** Beyond this many steps without `times` the subset search is too large; the record must say. */
 export const MAX_SEARCHED_STEPS = 16;
 
 /** Chooses the stoichiometric numbers of a mechanism's steps. */
-export function stoichiometricNumbers(
-  steps: readonly RouteStep[],
-  mustCancel: ReadonlySet<string>,
-  carriers: ReadonlySet<string> = new Set(),
-): RouteResult {
+export function stoichiometricNumbers(steps: readonly RouteStep[], options: RouteOptions = {}): RouteResult {
+  const mustCancel = options.mustCancel ?? new Set<string>();
+  const carriers = options.carriers ?? new Set<string>();
+  const inert = options.inert ?? new Set<string>();
   if (steps.length > 0 && steps.every((s) => s.times !== undefined)) {
     const numbers = steps.map((s) => s.times!);
     if (numbers.every((x) => x === 0)) {
@@ -34,147 +62,99 @@ export function stoichiometricNumbers(
         }),
       );
     }
-    return { numbers, source: 'given', diagnostics: [] };
+    const sigma = numbers.map(BigInt);
+    const chain = carriers.size > 0 ? declaredChain(steps, sigma, carriers) : detectChain(steps, [{ sigma }], inert);
+    return { numbers, source: 'given', unhonoured: new Map(), ranked: [], diagnostics: [], ...(chain && { chain }) };
   }
-  const free = steps.flatMap((s, i) => (s.times === undefined ? [i] : []));
-  if (free.length > MAX_SEARCHED_STEPS) {
+  const free = steps.filter((s) => s.times === undefined).length;
+  if (free > MAX_SEARCHED_STEPS) {
     return failed(
+      diagnostic('route/search-limit', 'error', `${free} steps are too many to search for a route`, {
+        path: ['steps'],
+        note: `give each step its times (the search handles up to ${MAX_SEARCHED_STEPS} steps without them)`,
+      }),
+    );
+  }
+  const budget = options.budget ?? new SearchBudget();
+  const common = { carriers, inert, rds: options.rds, budget };
+  const plain = findRoute(steps, { ...common, mustCancel: new Set() });
+  if (!plain.complete) return stopped(budget);
+  if (mustCancel.size === 0) return result(plain, new Map());
+  const held = findRoute(steps, { ...common, mustCancel });
+  if (!held.complete) return stopped(budget);
+  if (!held.numbers) {
+    // No route honours the declarations: the route without them stands, and says what it makes of each.
+    if (held.candidates > 0 || !plain.numbers) return result(held, new Map());
+    return result(
+      plain,
+      unhonouredOn(steps, plain.numbers, mustCancel, () => ({ kind: 'no-route' })),
+    );
+  }
+  const dropped = plain.numbers
+    ? plain.numbers.flatMap((x, i) => (x > 0 && held.numbers![i] === 0 ? [i + 1] : []))
+    : [];
+  if (dropped.length > 0) {
+    const unhonoured = unhonouredOn(steps, plain.numbers!, mustCancel, () => ({ kind: 'drops-steps', steps: dropped }));
+    if (unhonoured.size > 0) return result(plain, unhonoured);
+  }
+  const out = result(held, new Map());
+  if (plain.numbers && plain.numbers.join() !== held.numbers.join()) {
+    out.diagnostics.push(
       diagnostic(
         'route/ambiguous',
-        'error',
-        `${free.length} steps are too many to search for a route; give each step its times`,
-        {
-          path: ['steps'],
-        },
+        'info',
+        `the declared intermediates and catalysts choose this route; without the declarations σ would be [${plain.numbers.join(', ')}]`,
+        { path: ['steps'], note: 'give times on each step to fix the route explicitly' },
       ),
     );
   }
-  const columns = routeColumns(steps, free);
-  const { routes, families } = searchSupports(steps, columns, mustCancel, carriers);
-  const chosen = chooseRoute(routes, families, mustCancel, steps);
-  if (chosen.numbers) chosen.diagnostics.push(...separateReactions(steps, chosen.numbers));
-  return chosen;
+  return out;
 }
 
-/** Off-route steps that share no species with the route describe a separate reaction: say so. */
-function separateReactions(steps: readonly RouteStep[], numbers: number[]): Diagnostic[] {
-  const onRoute = new Set(steps.flatMap((s, i) => (numbers[i]! > 0 ? [...s.change.keys()] : [])));
-  return steps.flatMap((s, i) =>
-    numbers[i] === 0 && s.change.size > 0 && ![...s.change.keys()].some((sp) => onRoute.has(sp))
-      ? [
-          diagnostic(
-            'route/ambiguous',
-            'warning',
-            `step ${i + 1} shares no species with the route: it describes a separate reaction and is left off (σ = 0)`,
-            { path: ['steps', i], note: 'give times on each step to include it' },
-          ),
-        ]
-      : [],
-  );
-}
-
-function chooseRoute(
-  routes: Candidate[],
-  families: Family[],
-  mustCancel: ReadonlySet<string>,
+/** Declared species that do not cancel along σ, each with its reason. */
+function unhonouredOn(
   steps: readonly RouteStep[],
-): RouteResult {
-  if (routes.length === 0 && families.length === 0) {
-    const declared = [...mustCancel].join(', ');
-    return failed(
-      diagnostic(
-        'route/ambiguous',
-        'error',
-        declared
-          ? `no route lets every declared intermediate and catalyst cancel (${declared})`
-          : 'no set of steps gives a net reaction',
-        {
-          path: ['steps'],
-          note: 'check the declared roles, or give each step its times',
-        },
-      ),
+  numbers: readonly number[],
+  mustCancel: ReadonlySet<string>,
+  reason: () => Unhonoured,
+): Map<string, Unhonoured> {
+  const out = new Map<string, Unhonoured>();
+  for (const sp of mustCancel) {
+    const net = steps.reduce(
+      (n, s, i) => n.add((s.change.get(sp) ?? Rational.ZERO).mul(Rational.of(numbers[i]!))),
+      Rational.ZERO,
     );
+    if (!net.isZero()) out.set(sp, reason());
   }
-  const ranked = [...routes].sort(compareCandidates);
-  const best = ranked[0];
-  // A family (a sum of independent routes) only stands in the way when it cancels strictly more.
-  const better = families.filter(
-    (f) => !best || f.chainEnds < best.chainEnds || (f.chainEnds === best.chainEnds && f.cancelled > best.cancelled),
-  );
-  const ties = best ? ranked.filter((c) => compareCandidates(c, best) === 0) : [];
-  if (best && better.length === 0 && ties.length === 1)
-    return { numbers: best.sigma.map(Number), source: 'derived', diagnostics: [] };
-  const competing = [...ties.map((c) => c.sigma), ...better.flatMap((f) => f.rays)];
-  // Parallel paths to one and the same overall reaction (random-order binding, two colliders) are
-  // not a choice between reactions: follow the best-ranked path and say which steps run beside it.
-  if (best && sameOverall(steps, [best.sigma, ...competing])) {
-    const beside = steps.flatMap((_, i) => (best.sigma[i] === 0n && competing.some((s) => s[i]! > 0n) ? [i + 1] : []));
-    return {
-      numbers: best.sigma.map(Number),
-      source: 'derived',
-      diagnostics: [
-        diagnostic(
-          'route/ambiguous',
-          'info',
-          `steps ${beside.join(', ')} form a parallel path to the same overall reaction; σ follows the path through steps ${best.sigma.flatMap((x, i) => (x > 0n ? [i + 1] : [])).join(', ')}`,
-          {
-            path: ['steps'],
-            note: 'the steady-state rate law includes every path; give times to choose another',
-          },
-        ),
-      ],
-    };
-  }
-  const alternatives = [...new Set(competing.map((a) => `[${a.join(', ')}]`))];
-  const listed = alternatives.slice(0, 4).join(' or ');
+  return out;
+}
+
+function result(found: Found, unhonoured: Map<string, Unhonoured>): RouteResult {
+  if (!found.numbers) return { source: 'none', unhonoured, ranked: [], diagnostics: found.diagnostics };
+  return {
+    numbers: found.numbers,
+    source: 'derived',
+    unhonoured,
+    ranked: found.ranked,
+    diagnostics: found.diagnostics,
+    ...(found.chain && { chain: found.chain }),
+  };
+}
+
+function stopped(budget: SearchBudget): RouteResult {
   return failed(
     diagnostic(
-      'route/ambiguous',
+      'route/search-limit',
       'error',
-      `the steps allow several independent routes (${listed}); say which with times on each step`,
+      `the route search stopped after ${budget.limit} units of work without trying every set of steps, so no route is derived`,
       {
         path: ['steps'],
-        expected: 'times on every step',
+        note: 'give each step its times (0 for steps off the route); the search is exhaustive only for smaller or less tangled mechanisms',
       },
     ),
   );
 }
 
-/**
- * The preference order: declared chain carriers' initiation and termination stay off the route
- * (the long-chain convention, common practice); the most species cancelled; the fewest net
- * reactants that the mechanism itself makes (a route starts from starting materials, so a dead-end
- * complex or a bound catalyst is not one); the most economical overall equation; the most species
- * formed before they are consumed; the plain sum; the fewest steps; the smallest numbers.
- */
-/** True when every σ gives the same overall equation, up to a positive factor. */
-function sameOverall(steps: readonly RouteStep[], sigmas: bigint[][]): boolean {
-  const direction = (sigma: bigint[]) => {
-    const net = new Map<string, Rational>();
-    steps.forEach((step, i) => {
-      for (const [sp, v] of step.change) net.set(sp, (net.get(sp) ?? Rational.ZERO).add(v.mul(Rational.of(sigma[i]!))));
-    });
-    const entries = [...net].filter(([, v]) => !v.isZero()).sort(([a], [b]) => (a < b ? -1 : 1));
-    const scale = entries[0]?.[1].abs();
-    return entries.map(([sp, v]) => `${sp}:${scale ? v.div(scale).toString() : '0'}`).join(' ');
-  };
-  const first = direction(sigmas[0]!);
-  return first !== '' && sigmas.every((s) => direction(s) === first);
-}
-
-function compareCandidates(a: Candidate, b: Candidate): number {
-  return (
-    a.chainEnds - b.chainEnds ||
-    b.cancelled - a.cancelled ||
-    a.madeReactants - b.madeReactants ||
-    a.overallSize - b.overallSize ||
-    b.intermediates - a.intermediates ||
-    Number(b.plainSum) - Number(a.plainSum) ||
-    a.steps - b.steps ||
-    (a.size < b.size ? -1 : a.size > b.size ? 1 : 0)
-  );
-}
-
 function failed(d: Diagnostic): RouteResult {
-  return { source: 'none', diagnostics: [d] };
+  return { source: 'none', unhonoured: new Map(), ranked: [], diagnostics: [d] };
 }

@@ -32,6 +32,8 @@ import { recordSchema } from './record-schema.ts';
 import { recordYaml } from './record-yaml.ts';
 import { rolesDeclaredMismatch } from './roles-declared-mismatch.ts';
 import { routeAmbiguous } from './route-ambiguous.ts';
+import { routeOffRoute } from './route-off-route.ts';
+import { routeSearchLimit } from './route-search-limit.ts';
 import { simulationFailed } from './simulation-failed.ts';
 import { speciesConfusable } from './species-confusable.ts';
 import { speciesUnused } from './species-unused.ts';
@@ -77,6 +79,8 @@ export const RULES = [
   dataRange,
   dataPoints,
   dataNotIdentifiable,
+  routeSearchLimit,
+  routeOffRoute,
 ] as const;
 
 /** A rule's stable id. */

@@ -1,8 +1,9 @@
 /**
  * The Horiuti stoichiometric numbers σ are derived by the preference order of DESIGN.md item 2.
- * When several routes are equally preferred and not proportional, when no route changes anything,
- * or when the search is too large, the record must give times on each step. Steps that share no
- * species with the route are reported as a separate reaction.
+ * When several routes are equally preferred and not proportional, or when no route changes
+ * anything, the record must give times on each step. Steps that share no species with the route
+ * are reported as a separate reaction; parallel paths to one overall reaction, and a route chosen
+ * by declared roles rather than by the steps alone, are noted (info).
  */
 import type { RuleDefinition } from './rule-definition.ts';
 

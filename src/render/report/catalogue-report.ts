@@ -1,6 +1,7 @@
 /** The whole JSON report: tool, summary and one entry per record. */
 import { countBySeverity, type CatalogueReport, type RecordReport } from '../../model/index.ts';
 import { recordReport, type RecordInput } from './record-report.ts';
+import { primaryChecks, tallyVerdicts } from './verdict-tally.ts';
 
 /** Builds the report of a set of checked records. */
 export function catalogueReport(inputs: readonly RecordInput[], version: string): CatalogueReport {
@@ -12,7 +13,13 @@ export function reportOf(records: readonly RecordReport[], version: string): Cat
   const counts = countBySeverity(records.flatMap((r) => r.diagnostics));
   return {
     tool: { name: 'mechatlas', version },
-    summary: { records: records.length, errors: counts.error, warnings: counts.warning, notes: counts.info },
+    summary: {
+      records: records.length,
+      errors: counts.error,
+      warnings: counts.warning,
+      notes: counts.info,
+      observations: tallyVerdicts(records.flatMap(primaryChecks)),
+    },
     records: [...records],
   };
 }

@@ -45,6 +45,16 @@ export function derivationText(checked: DerivedRecord): string {
       lines.push(`  ${sp.padEnd(12)} ${roleWords(role)}${extra}`);
     }
   }
+  const chain = derivation.route?.chain;
+  if (chain) {
+    const steps = (list: number[]) =>
+      list.length === 0 ? 'no step' : `${list.length === 1 ? 'step' : 'steps'} ${list.map((i) => i + 1).join(', ')}`;
+    lines.push(
+      '',
+      `Chain (${chain.source}): carriers ${chain.carriers.join(', ')}; propagation ${steps(chain.propagation)} (the route);`,
+      `  initiation ${steps(chain.initiation)} and termination ${steps(chain.termination)} off the route (long-chain convention)`,
+    );
+  }
   lines.push(...rateLawLines(derivation), ...energyLines(derivation), ...simulationLines(derivation));
   lines.push(
     '',

@@ -21,7 +21,7 @@ export function markdownReport(report: CatalogueReport): string {
     out.push('', `### ${cell(r.id)}`, '', '| where | severity | message | rule |', '|---|---|---|---|');
     for (const d of findings) {
       out.push(
-        `| ${codeSpan(`${d.file ?? r.file}:${d.line ?? 1}:${d.column ?? 1}`)} | ${MARK[d.severity] ?? d.severity} | ${cell(d.message)} | ${codeSpan(d.rule)} |`,
+        `| ${codeSpan(`${d.file ?? r.file}:${d.line ?? 1}:${d.column ?? 1}`)} | ${MARK[d.severity] ?? d.severity} | ${cell(d.message)}${d.note ? `<br>_how to fix:_ ${cell(d.note)}` : ''} | ${codeSpan(d.rule)} |`,
       );
     }
   }

@@ -1,6 +1,7 @@
 /** A person's view of the derived rate laws: each derivation step, the orders, the observations. */
 import type { Derivation, DerivedRateLaw } from '../../engine/index.ts';
-import { methodName } from '../words/index.ts';
+import { methodName, predictionText, verdictMark } from '../words/index.ts';
+import { observationJson } from './record-report.ts';
 
 /** Renders every rate law of a derivation as plain text lines. */
 export function rateLawLines(derivation: Derivation): string[] {
@@ -24,14 +25,9 @@ export function rateLawLines(derivation: Derivation): string[] {
   if (checks.length > 0) {
     lines.push('', 'Observations:');
     for (const c of checks) {
-      const predicted =
-        c.predicted !== undefined
-          ? `predicted ${c.predicted}${c.basis === 'conditions' ? ' at its conditions' : ''}`
-          : c.range
-            ? `predicted between ${c.range[0]} and ${c.range[1]} (consistent for some constants if inside)`
-            : 'no prediction';
+      const mark = verdictMark(c.status);
       lines.push(
-        `  ${c.status.padEnd(7)} ${c.observation}  order in ${c.species} ${c.observed} ± ${c.tolerance}; ${predicted}  [${c.method}]`,
+        `  ${mark.symbol} ${mark.word.padEnd(13)} ${c.observation}  order in ${c.species} ${c.observed} ± ${c.tolerance}; ${predictionText(observationJson(c))}  [${c.method}]`,
       );
     }
   }

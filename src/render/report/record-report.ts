@@ -48,6 +48,17 @@ export function recordReport(input: RecordInput): RecordReport {
     if (derivation.routeSource) out.stoichiometric_numbers_source = derivation.routeSource;
   }
   if (derivation?.roles) out.roles = Object.fromEntries(derivation.roles);
+  const chain = derivation?.route?.chain;
+  if (chain) {
+    const numbered = (steps: number[]) => steps.map((i) => i + 1);
+    out.chain = {
+      carriers: chain.carriers,
+      propagation: numbered(chain.propagation),
+      initiation: numbered(chain.initiation),
+      termination: numbered(chain.termination),
+      source: chain.source,
+    };
+  }
   if (derivation && derivation.buffered.length > 0) out.buffered = derivation.buffered;
   if (derivation?.rateLaws) out.rate_laws = derivation.rateLaws.map(rateLawJson);
   if (derivation?.observations) out.observations = derivation.observations.map(observationJson);
@@ -125,6 +136,8 @@ export function observationJson(check: ObservationCheck): ObservationJson {
   };
   if (check.predicted !== undefined) out.predicted = check.predicted;
   if (check.range) out.range = check.range;
+  if (check.limits) out.limits = check.limits;
+  if (check.reason !== undefined) out.reason = check.reason;
   return out;
 }
 

@@ -2,12 +2,13 @@
 import type { CatalogueReport } from '../../model/index.ts';
 import type { DiagnosticJson } from '../../model/index.ts';
 import { escapeControlCharacters as printable } from './control-characters.ts';
+import { verdictCounts } from '../words/index.ts';
 
 /** Renders the report for a terminal. */
 export function textReport(report: CatalogueReport): string {
   const rows = report.records.flatMap((r) => r.diagnostics.map((d) => ({ ...d, file: d.file ?? r.file })));
   rows.sort(byPosition);
-  const lines = rows.map(diagnosticRow);
+  const lines = rows.flatMap((d) => [diagnosticRow(d), ...(d.note ? [`    how to fix: ${printable(d.note)}`] : [])]);
   lines.push(summaryLine(report));
   return lines.join('\n') + '\n';
 }
@@ -19,11 +20,12 @@ export function diagnosticRow(d: DiagnosticJson): string {
   );
 }
 
-/** "12 records checked: 1 error, 2 warnings, 3 notes". */
+/** "12 records checked: 1 error, 2 warnings, 3 notes; observed orders: 4 consistent, 1 not excluded". */
 export function summaryLine(report: CatalogueReport): string {
-  const { records, errors, warnings, notes } = report.summary;
+  const { records, errors, warnings, notes, observations } = report.summary;
   const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
-  return `${plural(records, 'record')} checked: ${plural(errors, 'error')}, ${plural(warnings, 'warning')}, ${plural(notes, 'note')}`;
+  const orders = observations && verdictCounts(observations);
+  return `${plural(records, 'record')} checked: ${plural(errors, 'error')}, ${plural(warnings, 'warning')}, ${plural(notes, 'note')}${orders ? `; observed orders: ${orders}` : ''}`;
 }
 
 /** Orders diagnostics by file, then line, then column. */

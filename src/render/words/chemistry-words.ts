@@ -56,6 +56,7 @@ export const ROLE_ORDER = [
   'inhibitor',
   'third_body',
   'solvent',
+  'off_route',
 ] as const;
 
 /** A role in words (`third_body` → "third body"); `fallback` where no role was derived. */
@@ -82,11 +83,33 @@ export function verdictMark(status: string | undefined): { symbol: string; word:
     case 'fail':
       return { symbol: '\u2717', word: 'contradicted', className: 'fail' };
     case 'not_excluded':
-      return { symbol: '~', word: 'not excluded', className: 'unknown' };
+      return { symbol: '~', word: 'not excluded', className: 'open' };
     case 'unknown':
       return { symbol: '?', word: 'no prediction', className: 'unknown' };
     default:
       return { symbol: '\u2013', word: 'not judged', className: 'unknown' };
+  }
+}
+
+/** The verdicts of observation checks, in the order a summary counts them. */
+export const VERDICTS = ['pass', 'fail', 'not_excluded', 'unknown'] as const;
+
+/** "2 consistent, 1 not excluded": how many checks had each verdict, those with none left out. */
+export function verdictCounts(counts: Readonly<Partial<Record<(typeof VERDICTS)[number], number>>>): string {
+  return VERDICTS.filter((v) => (counts[v] ?? 0) > 0)
+    .map((v) => `${counts[v]} ${verdictMark(v).word}`)
+    .join(', ');
+}
+
+/** Where a rival stands against every observation, as a symbol, a word and a class name. */
+export function standingMark(standing: string): { symbol: string; word: string; className: string } {
+  switch (standing) {
+    case 'survives':
+      return { symbol: '\u2713', word: 'survives', className: 'pass' };
+    case 'undecided':
+      return { symbol: '?', word: 'undecided', className: 'unknown' };
+    default:
+      return { symbol: '\u2717', word: 'ruled out', className: 'fail' };
   }
 }
 

@@ -13,6 +13,9 @@ export {
   roleWords,
   severityCount,
   severityWord,
+  standingMark,
+  VERDICTS,
+  verdictCounts,
   verdictMark,
 } from './chemistry-words.ts';
 export { constantNameLatex, equationLatex, overallLatex } from './equation-latex.ts';

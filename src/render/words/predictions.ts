@@ -2,10 +2,13 @@
 import type { ObservationJson } from '../../model/index.ts';
 import { orderText } from './numbers.ts';
 
-/** What the rate law predicts for one observed order: at the conditions, a fixed value, or a range. */
+/**
+ * What the rate law predicts for one observed order: at the conditions, a value whatever the
+ * constants, the orders it allows for some constants (which are not given), or why there is none.
+ */
 export function predictionText(check: ObservationJson): string {
-  if (check.range) return `${orderText(check.range[0])} to ${orderText(check.range[1])} (depends on the constants)`;
-  if (check.predicted === undefined) return '—';
+  if (check.range) return `${orderText(check.range[0])} to ${orderText(check.range[1])} for some constants (not given)`;
+  if (check.predicted === undefined) return check.reason ? `no prediction: ${check.reason}` : '—';
   return check.basis === 'limits'
     ? `${orderText(check.predicted)} (at any conditions)`
     : `${orderText(check.predicted)} at these conditions`;
