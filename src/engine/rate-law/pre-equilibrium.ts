@@ -82,6 +82,8 @@ export function eliminateByPreEquilibria(
   if (value.size > 0) trace.push(fmt.line('substituted', ['r', 'r'], rate));
 
   const balances = [];
+  const factors: { base: Polynomial; power: number }[] = [];
+  let numerator = rate;
   let law = RationalFunction.of(rate);
   for (const conservation of context.conservations) {
     const result = catalystBalance(conservation, law, value, context, rds, fmt);
@@ -101,10 +103,39 @@ export function eliminateByPreEquilibria(
     }
     if (!result.balance) continue;
     law = result.law;
+    if (result.factor) {
+      factors.push(result.factor);
+      numerator = withTotal(numerator, concentration(conservation.catalyst), conservation.total);
+    }
     balances.push(result.balance);
     trace.push(...result.trace);
   }
-  return { law: { method: 'rds', expression: law, absorbed: [], catalystBalances: balances, trace }, diagnostics: [] };
+  const left = context.conservations.map((c) => c.catalyst).filter((sp) => law.symbols().includes(concentration(sp)));
+  if (left.length > 0) return { diagnostics: [coupledPools(rds, left)] };
+  const factored = factors.length > 0 ? { numerator, factors } : undefined;
+  return {
+    law: { method: 'rds', expression: law, absorbed: [], catalystBalances: balances, trace, ...(factored && { factored }) },
+    diagnostics: [],
+  };
+}
+
+/** The free form of a pool replaced by its total, power for power (the factor goes below the line). */
+function withTotal(p: Polynomial, free: string, total: string): Polynomial {
+  return Polynomial.fromTerms(
+    p.terms.map((t) => {
+      const e = t.monomial.exponent(free);
+      return { coefficient: t.coefficient, monomial: t.monomial.without(free).mul(Monomial.of(total, e)) };
+    }),
+  );
+}
+
+function coupledPools(rds: Step, free: string[]): Diagnostic {
+  return diagnostic(
+    'rate/not-eliminable',
+    'error',
+    `the free ${free.join(', ')} stays in the law: a form held by two conserved catalysts or sites couples their balances, which have no closed form here`,
+    { path: ['steps', rds.index], note: 'use approximation: steady_state' },
+  );
 }
 
 /** Replaces eliminated concentrations by their equilibrium monomials. */

@@ -5,6 +5,7 @@
 import { approximationInvalid } from './approximation-invalid.ts';
 import { balanceAtoms } from './balance-atoms.ts';
 import { balanceCharge } from './balance-charge.ts';
+import { balanceSites } from './balance-sites.ts';
 import { constantsDetailedBalance } from './constants-detailed-balance.ts';
 import { energyProfile } from './energy-profile.ts';
 import { energyRdsSpan } from './energy-rds-span.ts';
@@ -49,6 +50,7 @@ export const RULES = [
   observationSpecies,
   simulationFailed,
   constantsDetailedBalance,
+  balanceSites,
 ] as const;
 
 /** A rule's stable id. */
