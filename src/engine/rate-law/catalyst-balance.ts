@@ -92,7 +92,8 @@ export function catalystBalance(
       text: `${free}^${n} = ${total}^${n} / (${fmt.text(perFree)})^${n}`,
       latex: `${fmt.style.latex(free)}^{${n}} = \\frac{${fmt.style.latex(total)}^{${n}}}{\\left(${fmt.latex(perFree)}\\right)^{${n}}}`,
     });
-  trace.push(fmt.line(`the rate in terms of the total ${conservation.catalyst}`, ['r', 'r'], result));
+  const word = poolWord(conservation, context) === 'site' ? 'sites' : 'catalyst';
+  trace.push(fmt.line(`the rate in terms of the total ${word}`, ['r', 'r'], result));
   const fractions = forms.map((f) => {
     const fraction = RationalFunction.of(f.term, perFree);
     return { species: f.species, fraction, text: fmt.text(fraction), latex: fmt.latex(fraction) };

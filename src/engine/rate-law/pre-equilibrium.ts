@@ -114,7 +114,14 @@ export function eliminateByPreEquilibria(
   if (left.length > 0) return { diagnostics: [coupledPools(rds, left)] };
   const factored = factors.length > 0 ? { numerator, factors } : undefined;
   return {
-    law: { method: 'rds', expression: law, absorbed: [], catalystBalances: balances, trace, ...(factored && { factored }) },
+    law: {
+      method: 'rds',
+      expression: law,
+      absorbed: [],
+      catalystBalances: balances,
+      trace,
+      ...(factored && { factored }),
+    },
     diagnostics: [],
   };
 }
