@@ -25,8 +25,11 @@ export type {
 } from './mechanism-record.ts';
 export type { EnergyBasis, EnergyJson, EnergyProfile, EnergyResult, ProfileState } from './energy-report.ts';
 export type {
+  ApparentConstantJson,
   CatalogueReport,
   DiagnosticJson,
+  NormalisedLawJson,
+  NormalisedTermJson,
   ObservationJson,
   RateLawJson,
   RecordReport,

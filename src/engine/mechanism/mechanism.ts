@@ -6,6 +6,7 @@ import type { MechanismRecord, Role, SpeciesEntry } from '../../model/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { parseEquation, type Term } from '../notation/equation.ts';
 import { parseFormula, type Composition } from '../notation/formula.ts';
+import { isVacantSite } from '../notation/formula-sites.ts';
 import { Rational } from '../exact/rational.ts';
 
 export interface Step {
@@ -17,7 +18,7 @@ export interface Step {
   products: Term[];
   reversible: boolean;
   rds: boolean;
-  /** reactant molecules that meet in the forward step (the sum of its reactant coefficients) */
+  /** reactant molecules that meet in the forward step (the sum of its reactant coefficients, vacant sites left out) */
   molecularity: number;
   times?: number;
   /** net change per species, products minus reactants; zero entries kept out */
@@ -112,6 +113,12 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
       thirdBody: entry?.third_body === true || entry?.role === 'third_body',
       buffered: entry?.buffered === true,
     });
+  }
+  // A vacant surface site is where a molecule lands, not a molecule that meets it: O2 + 2 @ is unimolecular.
+  for (const step of steps) {
+    step.molecularity = step.reactants
+      .filter((t) => !isVacantSite(species.get(t.species)?.composition))
+      .reduce((n, t) => n + t.coefficient.toNumber(), 0);
   }
   return { mechanism: { notation, steps, species }, diagnostics };
 }

@@ -8,6 +8,7 @@
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
 import type { Term } from '../notation/equation.ts';
+import { isVacantSite } from '../notation/formula-sites.ts';
 
 /** Sum of the coefficients of one side of a step. */
 export function molecularity(terms: readonly Term[]): number {
@@ -17,7 +18,8 @@ export function molecularity(terms: readonly Term[]): number {
 /** Checks the forward direction of every step, and the reverse of reversible ones. */
 export function checkMolecularity(mechanism: Mechanism): Diagnostic[] {
   return mechanism.steps.flatMap((step) => {
-    const particles = (terms: readonly Term[]) => molecularity(terms.filter((t) => !isVacantSite(mechanism, t.species)));
+    const particles = (terms: readonly Term[]) =>
+      molecularity(terms.filter((t) => !isVacantSite(mechanism.species.get(t.species)?.composition)));
     const directions: [string, number][] = [['', particles(step.reactants)]];
     if (step.reversible) directions.push(['the reverse of ', particles(step.products)]);
     const withThirdBody = [...step.reactants, ...step.products].some(
@@ -25,11 +27,6 @@ export function checkMolecularity(mechanism: Mechanism): Diagnostic[] {
     );
     return directions.flatMap(([which, n]) => judge(step, which, n, withThirdBody));
   });
-}
-
-function isVacantSite(mechanism: Mechanism, species: string): boolean {
-  const composition = mechanism.species.get(species)?.composition;
-  return (composition?.sites?.size ?? 0) > 0 && composition!.elements.size === 0;
 }
 
 function judge(step: Step, which: string, n: number, withThirdBody: boolean): Diagnostic[] {

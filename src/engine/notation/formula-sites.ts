@@ -6,6 +6,7 @@
  * is not used because `A*` already means an excited state. Sites count like a pseudo-element in
  * the balance of a step (so `CO + @ -> CO@` balances) and carry no atoms or charge.
  */
+import type { Composition } from './composition.ts';
 import { ASCII_DIGITS, Reader, isDigitOf, isLower } from './formula-reader.ts';
 
 /** The mark that starts a surface site. */
@@ -32,4 +33,9 @@ export function readSites(r: Reader): Map<string, number> | undefined {
 /** How a site kind is written in messages: `@`, `@a`. */
 export function siteName(kind: string): string {
   return `${SITE_MARK}${kind}`;
+}
+
+/** True for a vacant site: sites and no atoms (`@`, `@a`). */
+export function isVacantSite(composition: Composition | undefined): boolean {
+  return (composition?.sites?.size ?? 0) > 0 && composition!.elements.size === 0;
 }

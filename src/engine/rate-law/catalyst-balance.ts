@@ -9,6 +9,7 @@
 import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Step } from '../mechanism/mechanism.ts';
+import { isVacantSite } from '../notation/formula-sites.ts';
 import { Rational } from '../exact/rational.ts';
 import type { Conservation, RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
@@ -145,8 +146,7 @@ function nonlinearBalance(
 
 /** "site" for a pool of surface sites (its free form is a vacant site), "catalyst" otherwise. */
 export function poolWord(conservation: Conservation, context: RateLawContext): 'site' | 'catalyst' {
-  const composition = context.mechanism.species.get(conservation.catalyst)?.composition;
-  return composition?.sites && composition.sites.size > 0 && composition.elements.size === 0 ? 'site' : 'catalyst';
+  return isVacantSite(context.mechanism.species.get(conservation.catalyst)?.composition) ? 'site' : 'catalyst';
 }
 
 /** True when some step before the rds along the route forms the species. */

@@ -54,7 +54,7 @@ export function enzymeForm(
     spec('k_cat/K_M', 'specificity constant', a, unit(-1, -1), 'k_\\mathrm{cat}/K_\\mathrm{M}'),
     spec(
       'V_max',
-      `limiting rate at ${shape.total}`,
+      'limiting rate, at saturating substrate',
       a.div(saturating).mul(symbol(shape.total)),
       unit(1, -1),
       undefined,

@@ -65,7 +65,7 @@ export function normaliseLaw(expression: RationalFunction, options: NormaliseOpt
         ...named,
         meaning: named.power.equals(Rational.ONE)
           ? `the K of the ${fmt.text(m)} term of the denominator`
-          : `the K of the ${fmt.text(m)} term of the denominator, written (K[X])^${named.power} as for dissociative adsorption`,
+          : `the K of the ${fmt.text(m)} term of the denominator, which reads (${named.name}${fmt.text(m.pow(named.power.inverse()))})^(${named.power}) as for dissociative adsorption`,
         unit: bindingConstantUnit(m.totalDegree, named.power),
       };
       below.push(apparentConstant(spec, fmt, options.values));

@@ -88,14 +88,18 @@ function groupConstants(f: RationalFunction, constant: (symbol: string) => boole
   const constantPart = (m: Monomial) => Monomial.fromFactors(m.factors.filter(([s]) => constant(s)));
   const numConst = constantPart(num.monomial);
   const denConst = single ? constantPart(single.monomial) : Monomial.ONE;
-  const coefficient = single ? num.coefficient.div(single.coefficient) : num.coefficient;
+  // A sum below reads from 1: a leading number other than 1 (a σ of 2, say) goes into k_obs.
+  const lead = single ? single.coefficient : den.find((t) => t.monomial.isOne())!.coefficient;
+  const coefficient = num.coefficient.div(lead);
   const factors = numConst.factors.length + denConst.factors.length;
   // A single constant needs no new name.
   if (factors === 0 || (factors === 1 && coefficient.equals(Rational.ONE))) return undefined;
   return {
     value: RationalFunction.of(Polynomial.term(coefficient, numConst), Polynomial.term(Rational.ONE, denConst)),
     rest: { coefficient: Rational.ONE, monomial: num.monomial.div(numConst) },
-    denominator: single ? Polynomial.term(Rational.ONE, single.monomial.div(denConst)) : f.denominator,
+    denominator: single
+      ? Polynomial.term(Rational.ONE, single.monomial.div(denConst))
+      : f.denominator.scale(lead.inverse()),
     denominatorDegree: single ? single.monomial.div(denConst).totalDegree : Rational.ZERO,
   };
 }
