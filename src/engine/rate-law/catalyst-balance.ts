@@ -13,76 +13,81 @@ import { isVacantSite } from '../notation/formula-sites.ts';
 import { Rational } from '../exact/rational.ts';
 import type { Conservation, RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
-import type { CatalystBalance, NonlinearSystem, TraceLine } from './rate-law.ts';
+import type { CatalystBalance, TraceLine } from './rate-law.ts';
 import { concentration } from './symbols.ts';
 
-/** What one balance did: the law with the free form replaced, and the saturation factor it introduced. */
-export type BalanceOutcome =
-  | { problem: Diagnostic }
-  | {
-      balance?: CatalystBalance;
-      law: RationalFunction;
-      /** the free form's power n and the sum of forms per free form: the law gained (sum)^n below */
-      factor?: { base: Polynomial; power: number };
-      trace: TraceLine[];
-    }
-  | { nonlinear: NonlinearSystem; trace: TraceLine[] };
+/** The forms of one pool, each as weight × its equilibrium value (free form included), and the forms left out. */
+export type PoolForms =
+  { forms: { species: string; term: Polynomial }[]; negligible: string[] } | { problem: Diagnostic };
 
-/** Replaces the free catalyst in a pre-equilibrium rate law by its total over the sum of its forms. */
-export function catalystBalance(
+/** Every form of a pool from the equilibria; a form made before the rds with no equilibrium is a problem. */
+export function poolForms(
   conservation: Conservation,
-  law: RationalFunction,
   value: ReadonlyMap<string, Monomial>,
   context: RateLawContext,
   rds: Step,
-  fmt: Formatter,
-): BalanceOutcome {
-  const free = concentration(conservation.catalyst);
-  const exponents = law.numerator.terms.map((t) => t.monomial.exponent(free));
-  if (exponents.every((e) => e.isZero()) && law.denominator.degreeIn(free).isZero()) return { law, trace: [] };
+): PoolForms {
   const forms: { species: string; term: Polynomial }[] = [];
   const negligible: string[] = [];
   for (const [i, species] of conservation.species.entries()) {
     const weight = conservation.weights[i]!;
-    if (species === conservation.catalyst) {
-      forms.push({ species, term: Polynomial.constant(weight) });
-      continue;
-    }
-    const v = value.get(species);
-    if (v) {
-      forms.push({ species, term: Polynomial.term(weight, v.div(Monomial.of(free))) });
-    } else if (formedBeforeRds(species, context, rds)) {
+    const v = species === conservation.catalyst ? Monomial.of(concentration(species)) : value.get(species);
+    if (v) forms.push({ species, term: Polynomial.term(weight, v) });
+    else if (formedBeforeRds(species, context, rds))
       return {
-        problem: problem(
-          rds,
+        problem: diagnostic(
+          'rate/not-eliminable',
+          'error',
           `${species} holds part of the ${poolWord(conservation, context)} ${conservation.catalyst} but no equilibrium before the rate-determining step fixes its amount`,
+          { path: ['steps', rds.index], note: 'use approximation: steady_state' },
         ),
       };
-    } else {
-      negligible.push(species);
-    }
+    else negligible.push(species);
   }
-  const perFree = Polynomial.sum(forms.map((f) => f.term));
+  return { forms, negligible };
+}
+
+/** What one closed-form balance did: the law with the free form replaced, and the factor it put below. */
+export interface ClosedBalance {
+  balance: CatalystBalance;
+  law: RationalFunction;
+  /** the sum of forms per free form, to the power n of the free form in the rate */
+  factor: { base: Polynomial; power: number };
+  trace: TraceLine[];
+}
+
+/**
+ * Replaces the free catalyst in a pre-equilibrium rate law by its total over the sum of its forms,
+ * where every form is proportional to the free one and the rate holds it to a whole power; else
+ * undefined (the balance is then solved numerically).
+ */
+export function closedBalance(
+  conservation: Conservation,
+  law: RationalFunction,
+  pool: { forms: { species: string; term: Polynomial }[]; negligible: string[] },
+  context: RateLawContext,
+  rds: Step,
+  fmt: Formatter,
+): ClosedBalance | undefined {
+  const free = concentration(conservation.catalyst);
+  const perFree = Polynomial.sum(pool.forms.map((f) => f.term)).mulTerm(Rational.ONE, Monomial.of(free, -1));
+  const exponents = law.numerator.terms.map((t) => t.monomial.exponent(free));
   const power = exponents[0]!;
-  const linearForms = perFree.degreeIn(free).isZero() && perFree.lowDegreeIn(free).isZero();
-  const closedForm =
-    linearForms &&
-    power.isInteger() &&
-    power.sign() > 0 &&
-    exponents.every((e) => e.equals(power)) &&
-    law.denominator.degreeIn(free).isZero() &&
-    law.denominator.lowDegreeIn(free).isZero();
-  if (!closedForm) return nonlinearBalance(conservation, law, perFree, negligible, context, rds, fmt);
+  const proportional = perFree.degreeIn(free).isZero() && perFree.lowDegreeIn(free).isZero();
+  const wholePower = power.isInteger() && power.sign() > 0 && exponents.every((e) => e.equals(power));
+  const freeBelow = !law.denominator.degreeIn(free).isZero() || !law.denominator.lowDegreeIn(free).isZero();
+  if (!proportional || !wholePower || freeBelow) return undefined;
   const n = Number(power.num);
   const total = conservation.total;
   const numerator = law.numerator.terms.map((t) =>
     Polynomial.term(t.coefficient, t.monomial.without(free).mul(Monomial.of(total, n))),
   );
   const result = RationalFunction.of(Polynomial.sum(numerator), law.denominator.mul(perFree.pow(n)));
-  const formsText = conservation.species.filter((s) => !negligible.includes(s)).map(concentration);
+  const formsText = pool.forms.map((f) => concentration(f.species));
+  const word = poolWord(conservation, context);
   const trace: TraceLine[] = [
     {
-      say: `${poolWord(conservation, context)} balance for ${conservation.catalyst}${negligible.length ? ` (${negligible.join(', ')} formed after the rate-determining step: negligible)` : ''}`,
+      say: `${word} balance for ${conservation.catalyst}${pool.negligible.length ? ` (${pool.negligible.join(', ')} formed after the rate-determining step: negligible)` : ''}`,
       text: `${total} = ${formsText.join(' + ')} = ${free}(${fmt.text(perFree)})`,
       latex: `${fmt.style.latex(total)} = ${formsText.map((s) => fmt.style.latex(s)).join(' + ')} = ${fmt.style.latex(free)}\\left(${fmt.latex(perFree)}\\right)`,
     },
@@ -93,10 +98,9 @@ export function catalystBalance(
       text: `${free}^${n} = ${total}^${n} / (${fmt.text(perFree)})^${n}`,
       latex: `${fmt.style.latex(free)}^{${n}} = \\frac{${fmt.style.latex(total)}^{${n}}}{\\left(${fmt.latex(perFree)}\\right)^{${n}}}`,
     });
-  const word = poolWord(conservation, context) === 'site' ? 'sites' : 'catalyst';
-  trace.push(fmt.line(`the rate in terms of the total ${word}`, ['r', 'r'], result));
-  const fractions = forms.map((f) => {
-    const fraction = RationalFunction.of(f.term, perFree);
+  trace.push(fmt.line(`the rate in terms of the total ${word === 'site' ? 'sites' : 'catalyst'}`, ['r', 'r'], result));
+  const fractions = pool.forms.map((f) => {
+    const fraction = RationalFunction.of(f.term.mulTerm(Rational.ONE, Monomial.of(free, -1)), perFree);
     return { species: f.species, fraction, text: fmt.text(fraction), latex: fmt.latex(fraction) };
   });
   return {
@@ -104,43 +108,6 @@ export function catalystBalance(
     law: result,
     factor: { base: perFree, power: n },
     trace,
-  };
-}
-
-/**
- * A form not proportional to the free catalyst (a dimer holds it squared), or a rate with a
- * fractional power of it, makes the balance a polynomial equation in [C] with no rational closed
- * form: kept for a numeric solution at each observation.
- */
-function nonlinearBalance(
-  conservation: Conservation,
-  law: RationalFunction,
-  perFree: Polynomial,
-  negligible: string[],
-  context: RateLawContext,
-  rds: Step,
-  fmt: Formatter,
-): BalanceOutcome {
-  const free = concentration(conservation.catalyst);
-  const den = law.denominator.terms;
-  if (den.length !== 1 || !law.denominator.degreeIn(free).isZero() || !law.denominator.lowDegreeIn(free).isZero())
-    return {
-      problem: problem(
-        rds,
-        `the forms of ${conservation.catalyst} also hold another conserved catalyst or site, so their balances are coupled and have no closed form here`,
-      ),
-    };
-  const rate = law.numerator.mulTerm(den[0]!.coefficient.inverse(), den[0]!.monomial.pow(-1));
-  const balance = perFree.mulTerm(Rational.ONE, Monomial.of(free)).sub(Polynomial.symbol(conservation.total));
-  return {
-    nonlinear: { unknowns: [free], equations: [balance], rate },
-    trace: [
-      {
-        say: `${poolWord(conservation, context)} balance for ${conservation.catalyst}${negligible.length ? ` (${negligible.join(', ')} negligible)` : ''}: not linear in the free form, so it is solved numerically at each observation`,
-        text: `${conservation.total} = ${fmt.text(perFree.mulTerm(Rational.ONE, Monomial.of(free)))}`,
-        latex: `${fmt.style.latex(conservation.total)} = ${fmt.latex(perFree.mulTerm(Rational.ONE, Monomial.of(free)))}`,
-      },
-    ],
   };
 }
 
@@ -155,11 +122,4 @@ function formedBeforeRds(species: string, context: RateLawContext, rds: Step): b
   return context.mechanism.steps.some(
     (s) => rank(s.index) < rank(rds.index) && (s.change.get(species)?.sign() ?? 0) !== 0,
   );
-}
-
-function problem(rds: Step, message: string): Diagnostic {
-  return diagnostic('rate/not-eliminable', 'error', message, {
-    path: ['steps', rds.index],
-    note: 'use approximation: steady_state',
-  });
 }

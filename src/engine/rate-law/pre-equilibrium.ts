@@ -13,7 +13,7 @@ import type { RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
 import { solveLogLinear, type LogLinearRow } from './log-linear-solve.ts';
 import { forwardRate } from './mass-action.ts';
-import { catalystBalance } from './catalyst-balance.ts';
+import { balanceCatalysts } from './balance-catalysts.ts';
 import type { RateLaw, TraceLine } from './rate-law.ts';
 import { concentration, equilibriumConstant } from './symbols.ts';
 
@@ -81,38 +81,15 @@ export function eliminateByPreEquilibria(
   }
   if (value.size > 0) trace.push(fmt.line('substituted', ['r', 'r'], rate));
 
-  const balances = [];
-  const factors: { base: Polynomial; power: number }[] = [];
-  let numerator = rate;
-  let law = RationalFunction.of(rate);
-  for (const conservation of context.conservations) {
-    const result = catalystBalance(conservation, law, value, context, rds, fmt);
-    if ('problem' in result) return { diagnostics: [result.problem] };
-    if ('nonlinear' in result) {
-      trace.push(...result.trace);
-      const note = diagnostic(
-        'rate/nonlinear',
-        'info',
-        `the balance of ${conservation.catalyst} is not linear in its free form, so the rate is solved numerically at each observation with constants`,
-        { path: ['steps', rds.index] },
-      );
-      return {
-        law: { method: 'rds', nonlinear: result.nonlinear, absorbed: [], catalystBalances: [], trace },
-        diagnostics: [note],
-      };
-    }
-    if (!result.balance) continue;
-    law = result.law;
-    if (result.factor) {
-      factors.push(result.factor);
-      numerator = withTotal(numerator, concentration(conservation.catalyst), conservation.total);
-    }
-    balances.push(result.balance);
-    trace.push(...result.trace);
-  }
-  const left = context.conservations.map((c) => c.catalyst).filter((sp) => law.symbols().includes(concentration(sp)));
-  if (left.length > 0) return { diagnostics: [coupledPools(rds, left)] };
-  const factored = factors.length > 0 ? { numerator, factors } : undefined;
+  const outcome = balanceCatalysts(context, rate, value, rds, fmt);
+  if ('problem' in outcome) return { diagnostics: [outcome.problem] };
+  trace.push(...outcome.trace);
+  if ('nonlinear' in outcome)
+    return {
+      law: { method: 'rds', nonlinear: outcome.nonlinear, absorbed: [], catalystBalances: [], trace },
+      diagnostics: [outcome.note],
+    };
+  const { law, balances, factored } = outcome;
   return {
     law: {
       method: 'rds',
@@ -124,25 +101,6 @@ export function eliminateByPreEquilibria(
     },
     diagnostics: [],
   };
-}
-
-/** The free form of a pool replaced by its total, power for power (the factor goes below the line). */
-function withTotal(p: Polynomial, free: string, total: string): Polynomial {
-  return Polynomial.fromTerms(
-    p.terms.map((t) => {
-      const e = t.monomial.exponent(free);
-      return { coefficient: t.coefficient, monomial: t.monomial.without(free).mul(Monomial.of(total, e)) };
-    }),
-  );
-}
-
-function coupledPools(rds: Step, free: string[]): Diagnostic {
-  return diagnostic(
-    'rate/not-eliminable',
-    'error',
-    `the free ${free.join(', ')} stays in the law: a form held by two conserved catalysts or sites couples their balances, which have no closed form here`,
-    { path: ['steps', rds.index], note: 'use approximation: steady_state' },
-  );
 }
 
 /** Replaces eliminated concentrations by their equilibrium monomials. */
