@@ -62,7 +62,9 @@ export function parseFormula(text: string): { composition: Composition } | Formu
   const r = new Reader(text, start, end);
   if (r.peek() === SITE_MARK) {
     const sites = readSites(r);
-    return sites ? { composition: { elements: new Map(), charge: 0, radical: false, excited: false, sites } } : r.failure!;
+    return sites
+      ? { composition: { elements: new Map(), charge: 0, radical: false, excited: false, sites } }
+      : r.failure!;
   }
   while (isRadicalDot(r.peek())) {
     r.radical = true;

@@ -23,7 +23,9 @@ export function speciesLatex(symbol: string): string {
   const marks = /(@[a-z0-9]*)+$/.exec(symbol);
   if (!marks) return formulaLatex(symbol);
   const sites = marks[0].replace(/@([a-z0-9]*)/g, (_, kind: string) => (kind ? `@_{${kind}}` : '@'));
-  return marks.index === 0 ? `\\mathrm{${sites}}` : `\\mathrm{${formulaLatex(symbol.slice(0, marks.index)).slice(8, -1)}${sites}}`;
+  return marks.index === 0
+    ? `\\mathrm{${sites}}`
+    : `\\mathrm{${formulaLatex(symbol.slice(0, marks.index)).slice(8, -1)}${sites}}`;
 }
 
 function formulaLatex(symbol: string): string {

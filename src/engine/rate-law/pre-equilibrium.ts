@@ -3,7 +3,8 @@
  * rate = k_rds Π[reactants of the rds]^ν / σ_rds, every intermediate eliminated through the
  * reversible steps before the rds (and dead-end equilibria off the route) taken at equilibrium.
  * Steps after the rds do not enter; species formed only after it are negligible. A conserved
- * catalyst's total is the sum of its pre-equilibrium forms, which gives the saturation denominator.
+ * catalyst's (or surface site's) total is the sum of its pre-equilibrium forms, which gives the
+ * saturation denominator, to the power the rds holds the free form (balance-catalysts.ts).
  */
 import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
