@@ -224,8 +224,23 @@ steps:
     expectSameLaw(constantNamed(n, 'k_r').definition, { symbols: reverse, rate: (v) => v('k_-1') / KmP(v) });
     expectSameLaw(constantNamed(n, 'K_S').definition, { symbols: forward, rate: (v) => 1 / KmS(v) });
     expectSameLaw(constantNamed(n, 'K_P').definition, { symbols: reverse, rate: (v) => 1 / KmP(v) });
-    // Not a one-substrate Michaelis–Menten shape: the general names only.
-    expect(n.trade).toBeUndefined();
+    // In the trade's constants: the Haldane form, and K_eq = V_f K_M,P/(V_r K_M,S) = k_1k_2/(k_-1k_-2),
+    // the equilibrium constant of S ⇌ P (J. B. S. Haldane, Enzymes, 1930; from memory).
+    expect(n.trade?.shape).toBe('reversible_michaelis_menten');
+    expectSameLaw(constantNamed(n, 'K_M,S').definition, { symbols: forward, rate: (v) => KmS(v) });
+    expectSameLaw(constantNamed(n, 'K_M,P').definition, { symbols: reverse, rate: (v) => KmP(v) });
+    expectSameLaw(constantNamed(n, 'K_eq').definition, {
+      symbols: ['k_1', 'k_-1', 'k_2', 'k_-2'],
+      rate: (v) => (v('k_1') * v('k_2')) / (v('k_-1') * v('k_-2')),
+    });
+    expect(unitOf(constantNamed(n, 'K_eq'))).toBe('');
+    expectTradeLaw(
+      ss,
+      (n, c) =>
+        ((n('V_f') * c('[S]')) / n('K_M,S') - (n('V_r') * c('[P]')) / n('K_M,P')) /
+        (1 + c('[S]') / n('K_M,S') + c('[P]') / n('K_M,P')),
+    );
+    expectRelation(ss, (n) => [n('K_eq'), (n('V_f') * n('K_M,P')) / (n('V_r') * n('K_M,S'))]);
   });
 });
 

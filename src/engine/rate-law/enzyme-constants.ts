@@ -11,6 +11,7 @@ import { apparentConstant, type ApparentConstant, type UnitPowers } from './appa
 import { enzymeShape, shapeName } from './enzyme-shape.ts';
 import type { Formatter } from './formatter.ts';
 import type { NormalisedLaw, TradeForm } from './normalised-law.ts';
+import { reversibleEnzymeForm } from './reversible-enzyme.ts';
 import { namedWriter } from './write-normalised.ts';
 import { writeTradeForm } from './write-trade-form.ts';
 
@@ -19,14 +20,14 @@ const unit = (concentration: number, time: number): UnitPowers => ({
   time: Rational.of(time),
 });
 
-/** The trade's form of a Michaelis–Menten-shaped normalised law, or undefined for any other shape. */
+/** The trade's form of a Michaelis–Menten-shaped normalised law (one-way or reversible), or undefined for any other shape. */
 export function enzymeForm(
   law: NormalisedLaw,
   fmt: Formatter,
   values?: ReadonlyMap<string, number>,
 ): TradeForm | undefined {
   const shape = enzymeShape(law);
-  if (!shape) return undefined;
+  if (!shape) return reversibleEnzymeForm(law, fmt, values);
   const { specificity: a, saturating, squared, competitive, uncompetitive } = shape;
   const one = RationalFunction.ONE;
   const symbol = (s: string) => RationalFunction.of(Polynomial.symbol(s));

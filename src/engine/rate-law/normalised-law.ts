@@ -30,9 +30,10 @@ export interface NormalisedLaw {
 
 /** The law in the trade's constants for a standard shape. */
 export interface TradeForm {
-  /** michaelis_menten, competitive_inhibition, uncompetitive_inhibition, mixed_inhibition, noncompetitive_inhibition or substrate_inhibition */
+  /** michaelis_menten, competitive_inhibition, uncompetitive_inhibition, mixed_inhibition, noncompetitive_inhibition, substrate_inhibition or reversible_michaelis_menten */
   shape: string;
   substrate: string;
+  /** the species whose terms below lower the rate (the product, for the reversible law) */
   inhibitors: string[];
   text: string;
   latex: string;

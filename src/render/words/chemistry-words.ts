@@ -39,6 +39,7 @@ const LAW_SHAPES: Readonly<Record<string, string>> = {
   mixed_inhibition: 'Michaelis–Menten with mixed inhibition',
   noncompetitive_inhibition: 'Michaelis–Menten with noncompetitive inhibition',
   substrate_inhibition: 'Michaelis–Menten with substrate inhibition',
+  reversible_michaelis_menten: 'reversible Michaelis–Menten (Haldane)',
 };
 
 /** The trade's name of a rate-law shape: "Michaelis–Menten with competitive inhibition". */
