@@ -53,7 +53,8 @@ export function reversibleEnzymeForm(
     Vr: { name: 'V_r', latex: 'V_\\mathrm{r}' },
     Keq: { name: 'K_eq', latex: 'K_\\mathrm{eq}' },
   };
-  const w = namedWriter(fmt, Object.values(names));
+  // Written as the trade writes them: V_f K_M,P / (V_r K_M,S).
+  const w = namedWriter(fmt, [names.Vf, names.Vr, names.kf, names.kr, names.KS, names.KP, names.Keq]);
   const written = (m: Monomial | Polynomial) => ({ text: w.text(m), latex: w.latex(m) });
   const specs = [
     { ...names.kf, meaning: 'turnover number forwards', definition: a.div(cS), unit: unit(0, -1) },
