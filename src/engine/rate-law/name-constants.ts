@@ -1,7 +1,7 @@
 /**
  * Names for the apparent constants of a normalised law, as the trade writes them: k_obs for the
  * one coefficient of the numerator (k_f and k_r for a forward and a reverse term), K_X for the
- * weight of the [X] term of a denominator (K_A,B for an [A][B] term). A half power of one species
+ * weight of the [X] term of a denominator (K_(A,B) for an [A][B] term, K_(O3/O2) for [O3]/[O2]). A half power of one species
  * is written as the trade does for dissociative adsorption, (K_H2[H2])^½, where the coefficient
  * has an exact root; otherwise the K multiplies the power as it stands.
  */
@@ -53,7 +53,8 @@ export function bindingName(
   // A fractional power of one species reads (K_X[X])^q where the coefficient has an exact root.
   const root = single && single.e.sign() > 0 && !single.e.isInteger() ? rootOf(ratio, single.e) : undefined;
   const named = root ? [{ species: single!.species, e: Rational.ONE }] : parts;
-  let name = `K_${named.map((p) => (p.e.equals(Rational.ONE) ? p.species : `${p.species}(${p.e})`)).join(',')}`;
+  let name =
+    named.length === 1 && named[0]!.e.equals(Rational.ONE) ? `K_${named[0]!.species}` : `K_(${monomialName(named)})`;
   let latex = `K_{${subscriptLatex(named)}}`;
   // Never a name a step's own constant has, nor one already given.
   const taken = (n: string) => used.has(n) || stepLabels.some((l) => n === `K_${l}`);
@@ -76,6 +77,15 @@ function rootOf(f: RationalFunction, q: Rational): RationalFunction | undefined 
   };
   const [n, d] = [root(f.numerator), root(f.denominator)];
   return n && d ? RationalFunction.of(n, d) : undefined;
+}
+
+/** `A,B`, `S^2`, `H2^(1/2)`, `O3/O2`: the monomial a K weighs, spelt out in its name. */
+function monomialName(parts: { species: string; e: Rational }[]): string {
+  const one = (p: { species: string }, e: Rational) =>
+    e.equals(Rational.ONE) ? p.species : e.isInteger() ? `${p.species}^${e}` : `${p.species}^(${e})`;
+  const up = parts.filter((p) => p.e.sign() > 0).map((p) => one(p, p.e));
+  const down = parts.filter((p) => p.e.sign() < 0).map((p) => one(p, p.e.neg()));
+  return `${up.length > 0 ? up.join(',') : '1'}${down.length > 0 ? `/${down.join(',')}` : ''}`;
 }
 
 function speciesOf(symbol: string): string {

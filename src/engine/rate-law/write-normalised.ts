@@ -28,7 +28,8 @@ export function namedWriter(fmt: Formatter, names: readonly { name: string; late
     text: (s) => s,
     latex: (s) => latexOf.get(s) ?? fmt.style.latex(s),
     compare: (a, b) => rank(a) - rank(b) || (fmt.style.compare?.(a, b) ?? (a < b ? -1 : a > b ? 1 : 0)),
-    termWeight: (m) => m.factors.reduce((n, [s, e]) => (isConstant(s) ? n : n + e.toNumber()), 0),
+    // A sum reads from its 1 up, whatever the sign of the powers: 1 + K[O3]/[O2].
+    termWeight: (m) => m.factors.reduce((n, [s, e]) => (isConstant(s) ? n : n + Math.abs(e.toNumber())), 0),
   };
   return { text: (e) => formatText(e, style), latex: (e) => formatLatex(e, style) };
 }
