@@ -28,9 +28,10 @@ export function enzymeForm(
 ): TradeForm | undefined {
   const shape = enzymeShape(law);
   if (!shape) return reversibleEnzymeForm(law, fmt, values);
-  const { specificity: a, saturating, squared, competitive, uncompetitive } = shape;
-  const one = RationalFunction.ONE;
-  const symbol = (s: string) => RationalFunction.of(Polynomial.symbol(s));
+  const { numerator: a, constant: zero, saturating, squared, competitive, uncompetitive } = shape;
+  // Each constant is one quotient of two coefficient polynomials: one cancellation each.
+  const q = (top: Polynomial, below: Polynomial) => RationalFunction.of(top, below);
+  const T = Polynomial.symbol(shape.total);
   const modifiers = [...new Set([...competitive.keys(), ...uncompetitive.keys()])];
   const species = (s: string) => s.slice(1, -1);
   const iName = (x: string, prime: boolean) =>
@@ -46,17 +47,16 @@ export function enzymeForm(
   ].map(([name, latex]) => ({ name: name!, latex: latex! }));
   const written = writeTradeForm(namedWriter(fmt, names), shape, iName);
   const at = modifiers.map(species).join(', ');
-  const weigh = (m: Map<string, RationalFunction>) =>
-    [...m].reduce((s, [x, c]) => s.add(c.mul(symbol(x))), RationalFunction.ZERO);
+  const weigh = (m: Map<string, Polynomial>) => Polynomial.sum([...m].map(([x, c]) => c.mul(Polynomial.symbol(x))));
   const below = saturating.add(weigh(uncompetitive));
   const specs = [
-    spec('k_cat', 'turnover number', a.div(saturating), unit(0, -1)),
-    spec('K_M', 'Michaelis constant', one.div(saturating), unit(1, 0)),
-    spec('k_cat/K_M', 'specificity constant', a, unit(-1, -1), 'k_\\mathrm{cat}/K_\\mathrm{M}'),
+    spec('k_cat', 'turnover number', q(a, saturating), unit(0, -1)),
+    spec('K_M', 'Michaelis constant', q(zero, saturating), unit(1, 0)),
+    spec('k_cat/K_M', 'specificity constant', q(a, zero), unit(-1, -1), 'k_\\mathrm{cat}/K_\\mathrm{M}'),
     spec(
       'V_max',
       'limiting rate, at saturating substrate',
-      a.div(saturating).mul(symbol(shape.total)),
+      q(a.mul(T), saturating),
       unit(1, -1),
       undefined,
       written.vmax,
@@ -65,7 +65,7 @@ export function enzymeForm(
       spec(
         iName(x, false),
         `competitive inhibition constant of ${species(x)}`,
-        one.div(c),
+        q(zero, c),
         unit(1, 0),
         iLatex(x, false),
       ),
@@ -74,18 +74,18 @@ export function enzymeForm(
       spec(
         iName(x, true),
         `uncompetitive inhibition constant of ${species(x)}`,
-        saturating.div(c),
+        q(saturating, c),
         unit(1, 0),
         iLatex(x, true),
       ),
     ),
-    ...(squared ? [spec('K_si', 'substrate inhibition constant', saturating.div(squared), unit(1, 0))] : []),
+    ...(squared ? [spec('K_si', 'substrate inhibition constant', q(saturating, squared), unit(1, 0))] : []),
     ...(modifiers.length > 0 && !squared
       ? [
           spec(
             'K_M^app',
             `apparent Michaelis constant at the given ${at}`,
-            one.add(weigh(competitive)).div(below),
+            q(zero.add(weigh(competitive)), below),
             unit(1, 0),
             undefined,
             written.kmApparent,
@@ -93,7 +93,7 @@ export function enzymeForm(
           spec(
             'V_max^app',
             `apparent limiting rate at the given ${at}`,
-            a.mul(symbol(shape.total)).div(below),
+            q(a.mul(T), below),
             unit(1, -1),
             undefined,
             written.vmaxApparent,
@@ -102,7 +102,7 @@ export function enzymeForm(
       : []),
   ];
   const constants = specs.map((s) => apparentConstant(s, fmt, values));
-  const same = (x: string) => one.div(competitive.get(x)!).equals(saturating.div(uncompetitive.get(x)!));
+  const same = (x: string) => zero.mul(uncompetitive.get(x)!).equals(saturating.mul(competitive.get(x)!));
   return {
     shape: shapeName(shape, same),
     substrate: species(shape.substrate),

@@ -4,24 +4,28 @@
  * textbook kinds — [S] (saturation), [I] (competitive), [S][I] (uncompetitive), [S]² (substrate
  * inhibition). Any other term, or any other numerator, is not this family.
  */
-import type { RationalFunction } from '../exact/index.ts';
+import type { Polynomial } from '../exact/index.ts';
 import { Rational } from '../exact/rational.ts';
 import type { NormalisedLaw } from './normalised-law.ts';
 import { symbolMeaning } from './symbols.ts';
 
-/** The parts of a Michaelis–Menten-shaped law, each coefficient by its definition in elementary constants. */
+/**
+ * The parts of a Michaelis–Menten-shaped law, each term's coefficient as a polynomial in the
+ * elementary constants before any division, so every trade constant is one quotient of two of them.
+ */
 export interface EnzymeShape {
   /** concentration symbols of the substrate and of the catalyst total */
   substrate: string;
   total: string;
-  /** the numerator's coefficient (k_cat/K_M) */
-  specificity: RationalFunction;
-  /** the weight of the [S] term (1/K_M) and, where present, of the [S]² term */
-  saturating: RationalFunction;
-  squared?: RationalFunction;
-  /** the weights of [X] and of [S][X] terms, by the concentration symbol of X */
-  competitive: Map<string, RationalFunction>;
-  uncompetitive: Map<string, RationalFunction>;
+  /** the numerator's coefficient, and the denominator's constant term */
+  numerator: Polynomial;
+  constant: Polynomial;
+  /** the coefficient of the [S] term and, where present, of the [S]² term */
+  saturating: Polynomial;
+  squared?: Polynomial;
+  /** the coefficients of [X] and of [S][X] terms, by the concentration symbol of X */
+  competitive: Map<string, Polynomial>;
+  uncompetitive: Map<string, Polynomial>;
 }
 
 /** The Michaelis–Menten parts of a normalised law, or undefined for any other shape. */
@@ -34,18 +38,17 @@ export function enzymeShape(law: NormalisedLaw): EnzymeShape | undefined {
   const total = parts.find((p) => p.kind === 'total');
   const substrate = parts.find((p) => p.kind === 'concentration');
   if (parts.length !== 2 || !total || !substrate || !parts.every((p) => p.e.equals(Rational.ONE))) return undefined;
-  const definition = new Map(law.constants.map((c) => [c.name, c.definition]));
   const S = substrate.symbol;
-  let saturating: RationalFunction | undefined;
-  let squared: RationalFunction | undefined;
-  const competitive = new Map<string, RationalFunction>();
-  const uncompetitive = new Map<string, RationalFunction>();
+  let saturating: Polynomial | undefined;
+  let squared: Polynomial | undefined;
+  const competitive = new Map<string, Polynomial>();
+  const uncompetitive = new Map<string, Polynomial>();
   for (const t of factor.terms.slice(1)) {
     if (t.sign < 0 || !t.power.equals(Rational.ONE) || !t.concentrations.hasNaturalExponents()) return undefined;
     const s = t.concentrations.exponent(S).toNumber();
     const rest = t.concentrations.without(S);
     const [other] = rest.factors;
-    const c = definition.get(t.constant!)!;
+    const c = t.coefficient;
     const modifier =
       rest.factors.length === 1 && other![1].equals(Rational.ONE) && symbolMeaning(other![0])?.kind === 'concentration';
     if (rest.isOne() && s === 1) saturating = c;
@@ -55,8 +58,15 @@ export function enzymeShape(law: NormalisedLaw): EnzymeShape | undefined {
     else return undefined;
   }
   if (!saturating) return undefined;
-  const specificity = definition.get(top.constant!)!;
-  const shape: EnzymeShape = { substrate: S, total: total.symbol, specificity, saturating, competitive, uncompetitive };
+  const shape: EnzymeShape = {
+    substrate: S,
+    total: total.symbol,
+    numerator: top.coefficient,
+    constant: factor.reference,
+    saturating,
+    competitive,
+    uncompetitive,
+  };
   return squared ? { ...shape, squared } : shape;
 }
 

@@ -54,13 +54,21 @@ export function normaliseLaw(expression: RationalFunction, options: NormaliseOpt
     const reference = leadingGroup(groups, fmt);
     scale = scale.mul(reference.coefficient.pow(power));
     shift = shift.mul(reference.concentrations.pow(power));
-    const terms: NormalisedTerm[] = [{ power: Rational.ONE, sign: 1, concentrations: Monomial.ONE }];
+    const terms: NormalisedTerm[] = [
+      { power: Rational.ONE, sign: 1, concentrations: Monomial.ONE, coefficient: reference.coefficient },
+    ];
     for (const g of groups.filter((g) => g !== reference)) {
       const m = g.concentrations.div(reference.concentrations);
       const ratio = RationalFunction.of(g.coefficient, reference.coefficient);
       const named = bindingName(m, used, options.stepLabels, ratio, fmt.style.compare);
       used.add(named.name);
-      terms.push({ constant: named.name, power: named.power, sign: g.sign, concentrations: m });
+      terms.push({
+        constant: named.name,
+        power: named.power,
+        sign: g.sign,
+        concentrations: m,
+        coefficient: g.coefficient,
+      });
       const spec = {
         ...named,
         meaning: named.power.equals(Rational.ONE)
@@ -70,7 +78,7 @@ export function normaliseLaw(expression: RationalFunction, options: NormaliseOpt
       };
       below.push(apparentConstant(spec, fmt, options.values));
     }
-    return { terms, power };
+    return { terms, power, reference: reference.coefficient };
   });
   const groups = collect(numerator);
   const names = numeratorNames(groups);
@@ -80,7 +88,7 @@ export function normaliseLaw(expression: RationalFunction, options: NormaliseOpt
     const definition = RationalFunction.of(g.coefficient, scale);
     const spec = { ...names[i]!, definition, unit: rateCoefficientUnit(concentrations.totalDegree) };
     top.push(apparentConstant(spec, fmt, options.values));
-    return { constant: names[i]!.name, power: Rational.ONE, sign: g.sign, concentrations };
+    return { constant: names[i]!.name, power: Rational.ONE, sign: g.sign, concentrations, coefficient: g.coefficient };
   });
   const constants = [...top, ...below];
   const written = writeNormalised(numeratorTerms, normalisedFactors, constants, fmt);

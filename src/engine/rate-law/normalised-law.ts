@@ -3,7 +3,7 @@
  * apparent constants, and, for a standard shape, the trade's own form. Types only, shared by the
  * normaliser, its writers and the Michaelis–Menten reader.
  */
-import type { Monomial } from '../exact/index.ts';
+import type { Monomial, Polynomial } from '../exact/index.ts';
 import type { Rational } from '../exact/rational.ts';
 import type { ApparentConstant } from './apparent-constant.ts';
 
@@ -15,12 +15,15 @@ export interface NormalisedTerm {
   power: Rational;
   sign: 1 | -1;
   concentrations: Monomial;
+  /** the collected coefficient in elementary constants before division (sign taken out) */
+  coefficient: Polynomial;
 }
 
 /** A law as numerator / Π (1 + Σ K m)^power, in named apparent constants. */
 export interface NormalisedLaw {
   numerator: NormalisedTerm[];
-  factors: { terms: NormalisedTerm[]; power: number }[];
+  /** each factor with the coefficient of its leading term, which the factor was divided by */
+  factors: { terms: NormalisedTerm[]; power: number; reference: Polynomial }[];
   constants: ApparentConstant[];
   text: string;
   latex: string;

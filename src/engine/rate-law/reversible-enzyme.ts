@@ -33,16 +33,16 @@ export function reversibleEnzymeForm(
   const backward = sides.find((s) => s.term.sign < 0);
   if (!forward?.parts || !backward?.parts || forward.parts.total !== backward.parts.total) return undefined;
   const [S, P, total] = [forward.parts.species, backward.parts.species, forward.parts.total];
-  const definition = (name: string | undefined) => law.constants.find((c) => c.name === name)!.definition;
+  // Each constant is one quotient of two coefficient polynomials (before any division).
   const weight = (symbol: string) => {
     const t = factor.terms.find((t) => t.concentrations.equals(Monomial.of(symbol)));
-    return t && t.sign > 0 && t.power.equals(Rational.ONE) ? definition(t.constant) : undefined;
+    return t && t.sign > 0 && t.power.equals(Rational.ONE) ? t.coefficient : undefined;
   };
   const [cS, cP] = [weight(S), weight(P)];
   if (!cS || !cP) return undefined;
-  const [a, b] = [definition(forward.term.constant), definition(backward.term.constant)];
-  const T = RationalFunction.of(Polynomial.symbol(total));
-  const one = RationalFunction.ONE;
+  const [a, b, zero] = [forward.term.coefficient, backward.term.coefficient, factor.reference];
+  const T = Polynomial.symbol(total);
+  const q = (top: Polynomial, below: Polynomial) => RationalFunction.of(top, below);
   const [s, p] = [S, P].map((x) => fmt.style.latex(x).slice(1, -1));
   const names = {
     kf: { name: 'k_cat,f', latex: 'k_\\mathrm{cat}^\\mathrm{f}' },
@@ -57,14 +57,14 @@ export function reversibleEnzymeForm(
   const w = namedWriter(fmt, [names.Vf, names.Vr, names.kf, names.kr, names.KS, names.KP, names.Keq]);
   const written = (m: Monomial | Polynomial) => ({ text: w.text(m), latex: w.latex(m) });
   const specs = [
-    { ...names.kf, meaning: 'turnover number forwards', definition: a.div(cS), unit: unit(0, -1) },
-    { ...names.KS, meaning: `Michaelis constant of ${S.slice(1, -1)}`, definition: one.div(cS), unit: unit(1, 0) },
-    { ...names.kr, meaning: 'turnover number backwards', definition: b.div(cP), unit: unit(0, -1) },
-    { ...names.KP, meaning: `Michaelis constant of ${P.slice(1, -1)}`, definition: one.div(cP), unit: unit(1, 0) },
+    { ...names.kf, meaning: 'turnover number forwards', definition: q(a, cS), unit: unit(0, -1) },
+    { ...names.KS, meaning: `Michaelis constant of ${S.slice(1, -1)}`, definition: q(zero, cS), unit: unit(1, 0) },
+    { ...names.kr, meaning: 'turnover number backwards', definition: q(b, cP), unit: unit(0, -1) },
+    { ...names.KP, meaning: `Michaelis constant of ${P.slice(1, -1)}`, definition: q(zero, cP), unit: unit(1, 0) },
     {
       ...names.Vf,
       meaning: 'limiting rate forwards',
-      definition: a.div(cS).mul(T),
+      definition: q(a.mul(T), cS),
       unit: unit(1, -1),
       relation: written(
         Monomial.fromFactors([
@@ -76,7 +76,7 @@ export function reversibleEnzymeForm(
     {
       ...names.Vr,
       meaning: 'limiting rate backwards',
-      definition: b.div(cP).mul(T),
+      definition: q(b.mul(T), cP),
       unit: unit(1, -1),
       relation: written(
         Monomial.fromFactors([
@@ -88,7 +88,7 @@ export function reversibleEnzymeForm(
     {
       ...names.Keq,
       meaning: 'equilibrium constant of the overall reaction (Haldane relationship)',
-      definition: a.div(b),
+      definition: q(a, b),
       unit: unit(0, 0),
       relation: written(
         Monomial.fromFactors([
