@@ -3,7 +3,11 @@
  * named when names would clash, how a fractional power is written, and the units it gives.
  */
 import { describe, expect, it } from 'vitest';
+import { Polynomial, RationalFunction } from '../../src/engine/exact/index.ts';
 import { Rational } from '../../src/engine/exact/rational.ts';
+import type { Mechanism } from '../../src/engine/mechanism/mechanism.ts';
+import { formatterFor } from '../../src/engine/rate-law/formatter.ts';
+import { evaluateNormalised, normaliseLaw } from '../../src/engine/rate-law/normalise-law.ts';
 import { unitLatex, unitText } from '../../src/engine/rate-law/apparent-constant.ts';
 import { deriveYaml } from '../helpers/derive-yaml.ts';
 import { expectSameLaw, lawBy } from '../helpers/rate-law-check.ts';
@@ -58,6 +62,27 @@ describe('normalised laws', () => {
     expect(n.factors).toEqual([]);
     expect(n.text).toBe('k_obs*[A]*[B]');
     expect([constantNamed(n, 'k_obs').value, constantNamed(n, 'k_obs').unitText]).toEqual([2, 'M^-1 s^-1']);
+  });
+
+  it('puts a negative leading term, sign and all, into k_obs: k_1[A]/(k_2[B] - k_3) reads over 1 - K_B[B]', () => {
+    const A = Polynomial.symbol('[A]');
+    const raw = RationalFunction.of(
+      Polynomial.symbol('k_1').mul(A),
+      Polynomial.symbol('k_2').mul(Polynomial.symbol('[B]')).sub(Polynomial.symbol('k_3')),
+    );
+    const fmt = formatterFor({ steps: [], species: new Map() } as unknown as Mechanism);
+    const n = normaliseLaw(raw, { constantSymbols: new Set(), stepLabels: [] }, fmt);
+    expect(n.factors[0]!.terms.map((t) => [t.constant ?? '1', t.sign])).toEqual([
+      ['1', 1],
+      ['K_B', -1],
+    ]);
+    for (const [a, b, k1, k2, k3] of [
+      [0.3, 0.2, 2, 3, 7],
+      [5, 1e-3, 0.1, 10, 0.5],
+    ]) {
+      const point = new Map(Object.entries({ '[A]': a!, '[B]': b!, k_1: k1!, k_2: k2!, k_3: k3! }));
+      expect(evaluateNormalised(n, point)).toBeCloseTo(raw.evaluate(point), 12);
+    }
   });
 
   it('writes units in M and s, with fractional powers in parentheses', () => {

@@ -52,7 +52,8 @@ export function normaliseLaw(expression: RationalFunction, options: NormaliseOpt
   const normalisedFactors = factors.map(({ base, power }) => {
     const groups = collect(base);
     const reference = leadingGroup(groups, fmt);
-    scale = scale.mul(reference.coefficient.pow(power));
+    // A negative leading term goes, sign and all, into the scale: the factor still reads 1 + ….
+    scale = scale.mul(reference.coefficient.scale(Rational.of(reference.sign)).pow(power));
     shift = shift.mul(reference.concentrations.pow(power));
     const terms: NormalisedTerm[] = [
       { power: Rational.ONE, sign: 1, concentrations: Monomial.ONE, coefficient: reference.coefficient },
@@ -65,7 +66,7 @@ export function normaliseLaw(expression: RationalFunction, options: NormaliseOpt
       terms.push({
         constant: named.name,
         power: named.power,
-        sign: g.sign,
+        sign: g.sign === reference.sign ? 1 : -1,
         concentrations: m,
         coefficient: g.coefficient,
       });
