@@ -89,7 +89,7 @@ export function deriveMechanism(record: MechanismRecord, options: DeriveOptions 
   diagnostics.push(...routed.diagnostics);
   if (!routed.route) return { mechanism, balance: balance.balance, buffered, diagnostics };
 
-  const rates = deriveRateLaws(record.approximation ?? 'auto', mechanism, routed.route);
+  const rates = deriveRateLaws(record.approximation ?? 'auto', mechanism, routed.route, constants);
   const route: Route = { ...routed.route, roles: rates.roles };
   const judged = checkObservations(record, rates.context, rates.rateLaws, constants, rates.symbols);
   diagnostics.push(

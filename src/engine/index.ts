@@ -27,6 +27,8 @@ export { CONCENTRATION, sameDimension, type Dimension } from './units/dimension.
 // Rate laws and their symbols.
 export type { DerivedRateLaw } from './rate-law/derive-rate-laws.ts';
 export type { RateLawMethod, OrderRange } from './rate-law/rate-law.ts';
+export type { NormalisedLaw, NormalisedTerm, TradeForm } from './rate-law/normalised-law.ts';
+export type { ApparentConstant } from './rate-law/apparent-constant.ts';
 export {
   concentration,
   equilibriumConstant,

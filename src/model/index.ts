@@ -30,8 +30,11 @@ export type {
 export { DATA_COLUMN_NAMES, uncertaintyOf, type DataColumn, type DataTable, type SourceSpot } from './data-table.ts';
 export type { EnergyBasis, EnergyJson, EnergyProfile, EnergyResult, ProfileState } from './energy-report.ts';
 export type {
+  ApparentConstantJson,
   CatalogueReport,
   DiagnosticJson,
+  NormalisedLawJson,
+  NormalisedTermJson,
   ObservationJson,
   RateLawJson,
   RecordReport,

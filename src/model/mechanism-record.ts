@@ -11,7 +11,7 @@
  */
 export type Status = 'proposed' | 'favoured' | 'disfavoured' | 'withdrawn';
 /**
- * How the species symbols are written: formulas (the default; atoms and charge are checked for balance) or labels (plain names such as A, E, ES; balance is not checked).
+ * How the species symbols are written: formulas (the default; atoms, charge and surface sites are checked for balance) or labels (plain names such as A, E, ES; balance is not checked).
  *
  * This interface was referenced by `MechanismRecord`'s JSON-Schema
  * via the `definition` "Notation".
@@ -54,7 +54,7 @@ export type QuantityText = string | number;
  */
 export type Slug = string;
 /**
- * A species symbol as written in the equations (a formula such as H2O2, I-, [Co(NH3)6]3+, or a label such as ES); no spaces.
+ * A species symbol as written in the equations (a formula such as H2O2, I-, [Co(NH3)6]3+, or a label such as ES); no spaces. Surface sites: @ is a vacant site and a formula followed by @ is that species held on a site (CO@, H@, O@); a kind of site may follow the mark (@a, CO@t1) and a species on several sites repeats it (C2H4@@). Sites balance like an element. * is not a site: NO2* is an excited state. Quote a symbol that starts with @ in YAML ("@").
  *
  * This interface was referenced by `MechanismRecord`'s JSON-Schema
  * via the `definition` "SpeciesSymbol".
@@ -154,7 +154,7 @@ export interface SpeciesEntry {
    */
   name?: string;
   /**
-   * The composition when the symbol is not itself a formula (e.g. symbol Cat, formula C10H12N2). null: no composition, so balance is not checked for the steps it takes part in.
+   * The composition when the symbol is not itself a formula (e.g. symbol Cat, formula C10H12N2; a species on a surface site ends in @, e.g. symbol Pt-CO, formula CO@). null: no composition, so balance is not checked for the steps it takes part in.
    */
   formula?: string | null;
   /**
@@ -195,7 +195,7 @@ export interface SpeciesEntry {
  */
 export interface StepEntry {
   /**
-   * The step as an equation: terms joined by " + " (spaces around the plus), '->' for a one-way step, '<=>' for a reversible one (→ and ⇌ are also read), e.g. H2O2 + I- -> H2O + IO-.
+   * The step as an equation: terms joined by " + " (spaces around the plus), '->' for a one-way step, '<=>' for a reversible one (→ and ⇌ are also read), e.g. H2O2 + I- -> H2O + IO-, or on a surface CO + @ <=> CO@ (@ a vacant site, CO@ adsorbed CO).
    */
   equation: string;
   /**

@@ -69,7 +69,19 @@ export interface RateLawJson {
   /** plain text and LaTeX of the rate of the overall reaction; absent when solved only numerically */
   text?: string;
   latex?: string;
-  grouped?: { name: string; value_text: string; value_latex: string; text: string; latex: string };
+  grouped?: {
+    name: string;
+    value_text: string;
+    value_latex: string;
+    text: string;
+    latex: string;
+    /** the unit of the grouped constant (M and s: `M^-1 s^-1`), and its value where the constants are given */
+    unit?: string;
+    unit_latex?: string;
+    value?: number;
+  };
+  /** the law in named apparent constants: each denominator factor from 1, terms collected by concentration */
+  normalised?: NormalisedLawJson;
   /** the rate law as data: terms of numerator and denominator, each a coefficient and symbol exponents */
   structure?: { numerator: TermJson[]; denominator: TermJson[] };
   /** limits of the apparent order as [X] → 0 (low) and [X] → ∞ (high) */
@@ -86,6 +98,50 @@ export interface RateLawJson {
   resting_states?: { observation: string; catalyst: string; species: string; fraction: number }[];
   numeric_only?: boolean;
   derivation: { say: string; text: string; latex: string }[];
+}
+
+/** A rate law as numerator / Π (1 + Σ K m)^power, with its named constants (k_obs, K_X …). */
+export interface NormalisedLawJson {
+  text: string;
+  latex: string;
+  constants: ApparentConstantJson[];
+  /** the law as data: each term ± constant^power × concentrations */
+  numerator: NormalisedTermJson[];
+  factors: { power: number; terms: NormalisedTermJson[] }[];
+  /** the trade's own form where the shape is a standard one (the Michaelis–Menten family) */
+  trade?: {
+    shape: string;
+    substrate: string;
+    inhibitors: string[];
+    text: string;
+    latex: string;
+    constants: ApparentConstantJson[];
+  };
+}
+
+/** One apparent constant: its name, meaning, definition in elementary constants, unit and value. */
+export interface ApparentConstantJson {
+  name: string;
+  latex: string;
+  meaning: string;
+  definition_text: string;
+  definition_latex: string;
+  /** the same in the other named constants, where that reads better (K_M^app = K_M(1 + [I]/K_i)) */
+  relation_text?: string;
+  relation_latex?: string;
+  /** in M and s; empty when dimensionless */
+  unit: string;
+  unit_latex: string;
+  /** where every elementary constant of the definition is given */
+  value?: number;
+}
+
+/** One term of a normalised law; a factor's leading 1 has no constant. */
+export interface NormalisedTermJson {
+  constant?: string;
+  power: number | string;
+  sign: 1 | -1;
+  factors: Record<string, number | string>;
 }
 
 export interface TermJson {

@@ -42,6 +42,13 @@ export {
   type RivalColumn,
   type SystemView,
 } from './system-view.ts';
-export type { DiagnosticJson, ObservationJson, RateLawJson, RecordReport, Reference } from '../model/index.ts';
+export type {
+  ApparentConstantJson,
+  DiagnosticJson,
+  ObservationJson,
+  RateLawJson,
+  RecordReport,
+  Reference,
+} from '../model/index.ts';
 export { toolVersion } from '../catalogue/index.ts';
 export { buildSearchIndex, type MechanismInput, type SpeciesInput } from '../search/build-index.ts';

@@ -8,6 +8,8 @@ const SPELLED: Record<string, string> = {
   '+': '-plus',
   '-': '-minus',
   '*': '-excited',
+  // A surface site: CO@ is "CO at a site", so it never shares a slug with CO.
+  '@': '-at-site-',
   '•': '-radical',
   '·': '-dot-',
   '.': '-dot-',

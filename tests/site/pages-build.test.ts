@@ -123,6 +123,20 @@ describe('the demo site pages', () => {
     expect(html).not.toContain('<script');
   });
 
+  it('an enzyme law is shown normalised and in the trade constants, each with its value and unit', async () => {
+    const html = await page('m/isomerase-mimic-single-complex');
+    expect(html).toContain('Normalised: each sum below the line starts from 1');
+    expect(html).toContain("In the trade's constants (Michaelis–Menten with competitive inhibition)");
+    // From the record's constants, computed here: K_M = (k_-1 + k_2)/k_1 = (40 + 10)/2.0e5 M,
+    // K_i = k_-inh/k_inh = 5.0/1.0e6 M, k_cat = k_2 = 10 s^-1.
+    expect(rowOf(html, 'data-constant', 'K_M')).toContain('2.5 × 10⁻⁴');
+    expect(rowOf(html, 'data-constant', 'K_i')).toContain('5 × 10⁻⁶');
+    expect(rowOf(html, 'data-constant', 'k_cat')).toMatch(/<td class="num"> 10 /);
+    expect(rowOf(html, 'data-constant', 'K_M')).toContain('Michaelis constant');
+    // V_max depends on the enzyme's concentration: its unit, and no value.
+    expect(rowOf(html, 'data-constant', 'V_max')).toContain('no value');
+  });
+
   it('pages set the case of species symbols as written (no uppercase on symbol cells)', async () => {
     const html = await page('species');
     expect(html).toContain('data-symbol="Ald"');

@@ -4,6 +4,7 @@
  */
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
+import { siteName } from '../notation/formula-sites.ts';
 
 /** Whether a step's atoms and charge balance, or could not be checked (a species without composition). */
 export type StepBalance = 'balanced' | 'unbalanced' | 'unchecked';
@@ -24,6 +25,7 @@ function checkStepBalance(mechanism: Mechanism, step: Step): { balance: StepBala
     return { balance: 'unchecked', diagnostics: [diagnostic('balance/atoms', 'info', message, { path })] };
   }
   const atoms = new Map<string, { left: number; right: number }>();
+  const sites = new Map<string, { left: number; right: number }>();
   let leftCharge = 0;
   let rightCharge = 0;
   for (const [side, terms] of [
@@ -39,6 +41,11 @@ function checkStepBalance(mechanism: Mechanism, step: Step): { balance: StepBala
         entry[side] += n * count;
         atoms.set(element, entry);
       }
+      for (const [kind, count] of composition.sites ?? []) {
+        const entry = sites.get(kind) ?? { left: 0, right: 0 };
+        entry[side] += n * count;
+        sites.set(kind, entry);
+      }
       if (side === 'left') leftCharge += n * composition.charge;
       else rightCharge += n * composition.charge;
     }
@@ -51,6 +58,16 @@ function checkStepBalance(mechanism: Mechanism, step: Step): { balance: StepBala
       diagnostic('balance/atoms', 'error', `atoms do not balance (left → right): ${detail}`, {
         path,
         actual: Object.fromEntries(unbalanced.map(([el, c]) => [el, c.right - c.left])),
+      }),
+    );
+  }
+  const siteGap = [...sites].filter(([, c]) => c.left !== c.right);
+  if (siteGap.length > 0) {
+    const detail = siteGap.map(([kind, c]) => `${siteName(kind)} ${c.left} → ${c.right}`).join(', ');
+    out.push(
+      diagnostic('balance/sites', 'error', `surface sites do not balance (left → right): ${detail}`, {
+        path,
+        note: 'a vacant site is written @ and a species on a site CO@; each counts one site',
       }),
     );
   }

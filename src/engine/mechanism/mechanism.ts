@@ -7,6 +7,7 @@ import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { parseEquation, type Term } from '../notation/equation.ts';
 import { confusableCharacter } from '../notation/confusable-characters.ts';
 import { parseFormula, type Composition } from '../notation/formula.ts';
+import { isVacantSite } from '../notation/formula-sites.ts';
 import { Rational } from '../exact/rational.ts';
 
 /** The largest stoichiometric number a step may be given (the schema's maximum for `times`). */
@@ -21,7 +22,7 @@ export interface Step {
   products: Term[];
   reversible: boolean;
   rds: boolean;
-  /** reactant molecules that meet in the forward step (the sum of its reactant coefficients) */
+  /** reactant molecules that meet in the forward step (the sum of its reactant coefficients, vacant sites left out) */
   molecularity: number;
   times?: number;
   /** net change per species, products minus reactants; zero entries kept out */
@@ -134,6 +135,12 @@ export function buildMechanism(record: MechanismRecord): { mechanism?: Mechanism
       thirdBody: entry?.third_body === true || entry?.role === 'third_body',
       buffered: entry?.buffered === true,
     });
+  }
+  // A vacant surface site is where a molecule lands, not a molecule that meets it: O2 + 2 @ is unimolecular.
+  for (const step of steps) {
+    step.molecularity = step.reactants
+      .filter((t) => !isVacantSite(species.get(t.species)?.composition))
+      .reduce((n, t) => n + t.coefficient.toNumber(), 0);
   }
   return { mechanism: { notation, steps, species }, diagnostics };
 }

@@ -1,10 +1,14 @@
 /**
  * Molecularity of elementary steps: the number of particles that meet in the step
  * (IUPAC Gold Book, "molecularity"). 1–2 is ordinary, 3 is rare (common practice), more is not elementary.
+ * A vacant surface site (`@`) is where a molecule lands, not a particle that collides, so the check
+ * leaves it out: dissociative adsorption O2 + 2 @ -> 2 O@ is an ordinary step (its rate constant
+ * still carries [@]², so units count the sites).
  */
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism, Step } from './mechanism.ts';
 import type { Term } from '../notation/equation.ts';
+import { isVacantSite } from '../notation/formula-sites.ts';
 
 /** Sum of the coefficients of one side of a step. */
 export function molecularity(terms: readonly Term[]): number {
@@ -14,8 +18,10 @@ export function molecularity(terms: readonly Term[]): number {
 /** Checks the forward direction of every step, and the reverse of reversible ones. */
 export function checkMolecularity(mechanism: Mechanism): Diagnostic[] {
   return mechanism.steps.flatMap((step) => {
-    const directions: [string, number][] = [['', molecularity(step.reactants)]];
-    if (step.reversible) directions.push(['the reverse of ', molecularity(step.products)]);
+    const particles = (terms: readonly Term[]) =>
+      molecularity(terms.filter((t) => !isVacantSite(mechanism.species.get(t.species)?.composition)));
+    const directions: [string, number][] = [['', particles(step.reactants)]];
+    if (step.reversible) directions.push(['the reverse of ', particles(step.products)]);
     const withThirdBody = [...step.reactants, ...step.products].some(
       (t) => mechanism.species.get(t.species)?.thirdBody,
     );

@@ -11,4 +11,6 @@ export interface Composition {
   radical: boolean;
   excited: boolean;
   phase?: Phase;
+  /** surface sites held, by kind ('' for the plain site `@`): 1 for `@` and `CO@`, 2 for `C2H4@@` */
+  sites?: ReadonlyMap<string, number>;
 }

@@ -4,8 +4,8 @@
  * - Exactly one arrow: `->` `→` `⟶` one-way; `<=>` `⇌` `<->` `⇄` reversible.
  * - Terms are separated by a plus with white space on both sides, because `+` and `-` also write
  *   charges: `Fe3+ + e-` is two terms, `Na+` is one.
- * - A leading whole number is the coefficient, spaced (`2 NO`) or glued (`2NO`); glued only before
- *   a letter, `[` or `(`, so a nuclide is written `[13C]O`, not `13CO`. Elementary steps take whole
+ * - A leading whole number is the coefficient, spaced (`2 NO`) or glued (`2NO`, `2@`); glued only before
+ *   a letter, `[`, `(` or a site mark `@`, so a nuclide is written `[13C]O`, not `13CO`. Elementary steps take whole
  *   coefficients of at least 1.
  * - A species is the text as written, with no white space inside; identity is the text, so the
  *   formula is not read here. The same species twice on one side is merged (`A + A` is `2 A`).
@@ -59,7 +59,7 @@ export const MAX_COEFFICIENT = 1000;
 /** The longest species symbol read (the site's file names and every formula reader stay bounded). */
 export const MAX_SYMBOL_LENGTH = 100;
 
-const WHOLE_GLUED = /^(\d+)(?=[A-Za-z[(])/;
+const WHOLE_GLUED = /^(\d+)(?=[A-Za-z[(@])/;
 // Fractions and decimals, spaced or glued, so that `1/2 O2` and `0.5O2` get the coefficient message.
 const NUMBER_LIKE = /^([+-]?(\d+(\.\d*)?|\.\d+)(\/\d+)?|[½⅓⅔¼¾⅕⅙⅛])/;
 const WHOLE_ONLY = /^\d+$/;

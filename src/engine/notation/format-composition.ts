@@ -17,6 +17,7 @@ export function formatComposition(c: Composition): string {
   if (c.radical) parts.push('radical');
   if (c.excited) parts.push('excited');
   if (c.phase !== undefined) parts.push(`(${c.phase})`);
+  for (const [kind, n] of c.sites ?? []) parts.push(`${n} site${n === 1 ? '' : 's'} @${kind}`);
   return parts.join(', ');
 }
 

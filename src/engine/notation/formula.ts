@@ -9,6 +9,8 @@
  *   count    = digits, at least 1 (ASCII, or subscript ₀–₉)
  *   suffixes = any of: charge, radical dot "•" "·" ".", excited "*"  (O2•-, NO2*, Br.)
  *   phase    = "(aq)" | "(g)" | "(l)" | "(s)", last, not counted as atoms
+ *   sites    = "@" [kind] { "@" [kind] }, last: a species on a surface site (CO@); "@" alone is a
+ *              vacant site (formula-sites.ts)
  * Symbols: the 118 elements, D and T, and nuclides as [13C] (see elements.ts).
  * "e" alone with charge −1 is the electron: `e-`, `e−`, `e⁻`, `e-(aq)`.
  * A "·" or "." is an adduct separator when followed by a digit or a unit, else a radical dot;
@@ -30,6 +32,7 @@
 import type { Composition, Phase } from './composition.ts';
 import { readBody, type Counts } from './formula-body.ts';
 import { readCharge } from './formula-charge.ts';
+import { readSites, SITE_MARK } from './formula-sites.ts';
 import {
   Reader,
   isAnyDigit,
@@ -57,6 +60,12 @@ export function parseFormula(text: string): { composition: Composition } | Formu
   if (phase !== undefined) end -= phase.length + 2;
 
   const r = new Reader(text, start, end);
+  if (r.peek() === SITE_MARK) {
+    const sites = readSites(r);
+    return sites
+      ? { composition: { elements: new Map(), charge: 0, radical: false, excited: false, sites } }
+      : r.failure!;
+  }
   while (isRadicalDot(r.peek())) {
     r.radical = true;
     r.pos++;
@@ -74,10 +83,14 @@ export function parseFormula(text: string): { composition: Composition } | Formu
   }
 
   let charge: number | undefined;
+  let sites: Map<string, number> | undefined;
   while (r.pos < r.end) {
     const c = r.peek();
     const at = r.pos;
-    if (isRadicalDot(c)) {
+    if (c === SITE_MARK && !electron) {
+      sites = readSites(r);
+      if (!sites) return r.failure!;
+    } else if (isRadicalDot(c)) {
       r.radical = true;
       r.pos++;
     } else if (c === '*') {
@@ -95,6 +108,7 @@ export function parseFormula(text: string): { composition: Composition } | Formu
   if (electron && charge !== -1) return { error: 'an electron is written e- (charge -1)', offset: bodyAt };
   const composition: Composition = { elements, charge: charge ?? 0, radical: r.radical, excited: r.excited };
   if (phase !== undefined) composition.phase = phase;
+  if (sites) composition.sites = sites;
   return { composition };
 }
 

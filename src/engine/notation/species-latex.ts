@@ -18,8 +18,17 @@ const ESCAPES: Record<string, string> = {
   ' ': '\\ ',
 };
 
-/** The LaTeX of a species symbol, wrapped in \mathrm{…}. */
+/** The LaTeX of a species symbol, wrapped in \mathrm{…}; surface-site marks (`CO@`, `@a`) stay as written, kinds as subscripts. */
 export function speciesLatex(symbol: string): string {
+  const marks = /(@[a-z0-9]*)+$/.exec(symbol);
+  if (!marks) return formulaLatex(symbol);
+  const sites = marks[0].replace(/@([a-z0-9]*)/g, (_, kind: string) => (kind ? `@_{${kind}}` : '@'));
+  return marks.index === 0
+    ? `\\mathrm{${sites}}`
+    : `\\mathrm{${formulaLatex(symbol.slice(0, marks.index)).slice(8, -1)}${sites}}`;
+}
+
+function formulaLatex(symbol: string): string {
   const { body: withoutCharge, charge } = splitCharge(symbol);
   let body = withoutCharge;
   const radical = /[•·.]$/.test(body) && body.length > 1;
@@ -59,7 +68,7 @@ function bodyLatex(body: string): string {
       const digits = /^\d+/.exec(body.slice(i))![0];
       out += `_{${digits}}`;
       i += digits.length - 1;
-    } else if (/[A-Za-z0-9()[\]+\-'·.*•=]/.test(c)) {
+    } else if (/[A-Za-z0-9()[\]+\-'·.*•=@]/.test(c)) {
       out += c === '•' ? '{}^{\\bullet}' : c === '·' ? '\\cdot ' : c;
     } else if (c in ESCAPES) {
       out += ESCAPES[c];

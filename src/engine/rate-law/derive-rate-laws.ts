@@ -7,9 +7,11 @@ import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import { kineticRoles, type Route } from '../route/route.ts';
 import { rateLawContext, type RateLawContext } from './context.ts';
-import { formatterFor } from './formatter.ts';
+import { formatterFor, type Formatter } from './formatter.ts';
+import { normaliseLaw } from './normalise-law.ts';
+import type { NormalisedLaw } from './normalised-law.ts';
 import { orderLimitsOf, orderSymbols, withAbsent } from './orders.ts';
-import type { RationalFunction } from '../exact/index.ts';
+import { RationalFunction } from '../exact/index.ts';
 import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
 import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
@@ -21,6 +23,8 @@ export interface DerivedRateLaw {
   law: RateLaw;
   /** absent for a nonlinear steady state, which is solved numerically */
   presented?: PresentedLaw;
+  /** the law in named apparent constants (k_obs, K_X; k_cat, K_M … for an enzyme-like shape) */
+  normalised?: NormalisedLaw;
   orders: Map<string, OrderRange>;
   /** the dominant catalyst form at each observation's conditions, where constants allow */
   restingStates: (RestingState & { observation: string })[];
@@ -36,8 +40,16 @@ export interface RateLawStage {
   diagnostics: Diagnostic[];
 }
 
-/** Derives the rate laws the record's `approximation` asks for along the route, with their limiting orders. */
-export function deriveRateLaws(approximation: Approximation, mechanism: Mechanism, route: Route): RateLawStage {
+/**
+ * Derives the rate laws the record's `approximation` asks for along the route, with their limiting
+ * orders; `constants` (by symbol, M and s) give the apparent constants their values.
+ */
+export function deriveRateLaws(
+  approximation: Approximation,
+  mechanism: Mechanism,
+  route: Route,
+  constants?: ReadonlyMap<string, number>,
+): RateLawStage {
   const { sigma, offRoute } = route;
   // Off-route species enter the kinetics as what they behave like (a dead-end form is eliminated).
   const roles = kineticRoles(route);
@@ -88,9 +100,11 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
       rateLaws.push({ law, orders: new Map(), restingStates: [] });
       continue;
     }
-    const presented = presentLaw(law.expression, context.solvents, fmt);
+    const presented = presentLaw(law.expression, context.solvents, fmt, constants);
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(concentration(s)));
-    rateLaws.push({ law, presented, orders: reportedOrders(presented.expression, symbols, roles), restingStates: [] });
+    const orders = reportedOrders(presented.expression, symbols, roles);
+    const normalised = normalisedForm(law, context, fmt, constants);
+    rateLaws.push({ law, presented, ...(normalised && { normalised }), orders, restingStates: [] });
   }
   return { context, rateLaws, symbols, roles: confirmInhibitors(route.roles, offRoute, rateLaws[0]), diagnostics };
 }
@@ -127,6 +141,23 @@ function reportedOrders(
     if (range) orders.set(product.species, range);
   }
   return orders;
+}
+
+/** The normalised form of an exact rational law; other forms of law are left as they are. */
+function normalisedForm(
+  law: RateLaw,
+  context: RateLawContext,
+  fmt: Formatter,
+  values?: ReadonlyMap<string, number>,
+): NormalisedLaw | undefined {
+  if (!(law.expression instanceof RationalFunction)) return undefined;
+  const options = {
+    ...(law.factored && { factored: law.factored }),
+    constantSymbols: new Set(context.solvents.map(concentration)),
+    stepLabels: context.mechanism.steps.map((s) => s.label),
+    ...(values && { values }),
+  };
+  return normaliseLaw(law.expression, options, fmt);
 }
 
 function chooseMethods(approximation: string, hasRds: boolean): RateLawMethod[] {

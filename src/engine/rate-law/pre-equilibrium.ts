@@ -3,7 +3,8 @@
  * rate = k_rds Π[reactants of the rds]^ν / σ_rds, every intermediate eliminated through the
  * reversible steps before the rds (and dead-end equilibria off the route) taken at equilibrium.
  * Steps after the rds do not enter; species formed only after it are negligible. A conserved
- * catalyst's total is the sum of its pre-equilibrium forms, which gives the saturation denominator.
+ * catalyst's (or surface site's) total is the sum of its pre-equilibrium forms, which gives the
+ * saturation denominator, to the power the rds holds the free form (balance-catalysts.ts).
  */
 import { Monomial, Polynomial, RationalFunction } from '../exact/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
@@ -13,7 +14,7 @@ import type { RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
 import { solveLogLinear, type LogLinearRow } from './log-linear-solve.ts';
 import { forwardRate } from './mass-action.ts';
-import { catalystBalance } from './catalyst-balance.ts';
+import { balanceCatalysts } from './balance-catalysts.ts';
 import type { RateLaw, TraceLine } from './rate-law.ts';
 import { concentration, equilibriumConstant } from './symbols.ts';
 
@@ -82,30 +83,26 @@ export function eliminateByPreEquilibria(
   }
   if (value.size > 0) trace.push(fmt.line('substituted', ['r', 'r'], rate));
 
-  const balances = [];
-  let law = RationalFunction.of(rate);
-  for (const conservation of context.conservations) {
-    const result = catalystBalance(conservation, law, value, context, rds, fmt);
-    if ('problem' in result) return { diagnostics: [result.problem] };
-    if ('nonlinear' in result) {
-      trace.push(...result.trace);
-      const note = diagnostic(
-        'rate/nonlinear',
-        'info',
-        `the balance of ${conservation.catalyst} is not linear in its free form, so the rate is solved numerically at each observation with constants`,
-        { path: ['steps', rds.index] },
-      );
-      return {
-        law: { method: 'rds', nonlinear: result.nonlinear, absorbed: [], catalystBalances: [], trace },
-        diagnostics: [note],
-      };
-    }
-    if (!result.balance) continue;
-    law = result.law;
-    balances.push(result.balance);
-    trace.push(...result.trace);
-  }
-  return { law: { method: 'rds', expression: law, absorbed: [], catalystBalances: balances, trace }, diagnostics: [] };
+  const outcome = balanceCatalysts(context, rate, value, rds, fmt);
+  if ('problem' in outcome) return { diagnostics: [outcome.problem] };
+  trace.push(...outcome.trace);
+  if ('nonlinear' in outcome)
+    return {
+      law: { method: 'rds', nonlinear: outcome.nonlinear, absorbed: [], catalystBalances: [], trace },
+      diagnostics: [outcome.note],
+    };
+  const { law, balances, factored } = outcome;
+  return {
+    law: {
+      method: 'rds',
+      expression: law,
+      absorbed: [],
+      catalystBalances: balances,
+      trace,
+      ...(factored && { factored }),
+    },
+    diagnostics: [],
+  };
 }
 
 /** Replaces eliminated concentrations by their equilibrium monomials. */

@@ -41,9 +41,20 @@ export interface RateLaw {
   /** a named product of constants, k_obs, that multiplies the concentration part */
   grouped?: { name: string; value: Polynomial; law: RationalFunction };
   catalystBalances: CatalystBalance[];
+  /**
+   * The law kept in factors where a balance made it a product of powers (a site balance squared):
+   * expression = numerator / Π base^power. The normalised form keeps (1 + K_A[A] + K_B[B])² whole.
+   */
+  factored?: FactoredLaw;
   /** the conserved pools whose totals the law uses: total symbol, member species, weights */
   pools?: { total: string; species: string[]; weights: number[] }[];
   trace: TraceLine[];
+}
+
+/** A rate law as a numerator over a product of powers of polynomials. */
+export interface FactoredLaw {
+  numerator: Polynomial;
+  factors: { base: Polynomial; power: number }[];
 }
 
 /** Limits of the apparent order ∂ln r/∂ln[X] as [X] → 0 and [X] → ∞. */

@@ -40,7 +40,15 @@ export function symbolMeaning(symbol: string): SymbolMeaning | undefined {
  * concentrations by the order species first appear in the mechanism.
  */
 export function rateLawStyle(stepLabels: readonly string[], speciesOrder: readonly string[]): SymbolStyle {
+  // Sorting and writing ask for the same few symbols again and again: each is worked out once.
+  const ranks = new Map<string, [number, number, number]>();
+  const latex = new Map<string, string>();
   const rank = (symbol: string): [number, number, number] => {
+    let r = ranks.get(symbol);
+    if (!r) ranks.set(symbol, (r = rankOf(symbol)));
+    return r;
+  };
+  const rankOf = (symbol: string): [number, number, number] => {
     const m = symbolMeaning(symbol);
     if (!m) return [9, 0, 0];
     if (m.kind === 'constant')
@@ -49,7 +57,11 @@ export function rateLawStyle(stepLabels: readonly string[], speciesOrder: readon
   };
   return {
     text: (s) => s,
-    latex: symbolLatex,
+    latex: (s) => {
+      let l = latex.get(s);
+      if (l === undefined) latex.set(s, (l = symbolLatex(s)));
+      return l;
+    },
     compare: (a, b) => {
       const [x, y] = [rank(a), rank(b)];
       return x[0] - y[0] || x[1] - y[1] || x[2] - y[2] || (a < b ? -1 : a > b ? 1 : 0);

@@ -5,6 +5,7 @@
 import { approximationInvalid } from './approximation-invalid.ts';
 import { balanceAtoms } from './balance-atoms.ts';
 import { balanceCharge } from './balance-charge.ts';
+import { balanceSites } from './balance-sites.ts';
 import { constantsDetailedBalance } from './constants-detailed-balance.ts';
 import { constantsNegative } from './constants-negative.ts';
 import { dataCell } from './data-cell.ts';
@@ -81,6 +82,7 @@ export const RULES = [
   dataNotIdentifiable,
   routeSearchLimit,
   routeOffRoute,
+  balanceSites,
 ] as const;
 
 /** A rule's stable id. */

@@ -2,6 +2,7 @@
 import type { Derivation, DerivedRateLaw } from '../../engine/index.ts';
 import { methodName, predictionText, verdictMark } from '../words/index.ts';
 import { observationJson } from './record-report.ts';
+import { normalisedLines, valueText } from './normalised-text.ts';
 
 /** Renders every rate law of a derivation as plain text lines. */
 export function rateLawLines(derivation: Derivation): string[] {
@@ -12,10 +13,9 @@ export function rateLawLines(derivation: Derivation): string[] {
     for (const step of derived.presented?.trace ?? []) lines.push(`  · ${step.say}:`, `      ${step.text}`);
     if (derived.presented) {
       lines.push(`  r = ${derived.presented.text}`);
-      if (derived.presented.grouped)
-        lines.push(
-          `    = ${derived.presented.grouped.text}   with ${derived.presented.grouped.name} = ${derived.presented.grouped.valueText}`,
-        );
+      const g = derived.presented.grouped;
+      if (g) lines.push(`    = ${g.text}   with ${g.name} = ${g.valueText}${valueText(g.value, g.unitText)}`);
+      lines.push(...normalisedLines(derived));
     } else {
       lines.push('  no closed form: the steady state is solved numerically at each observation with constants');
     }

@@ -3,16 +3,22 @@
  * Pure: built from a loaded record and its derivation; the CLI and the site both use it.
  */
 import type {
+  ApparentConstant,
   Derivation,
   DerivedRateLaw,
+  NormalisedLaw,
+  NormalisedTerm,
   ObservationCheck,
   Polynomial,
   Rational,
   SimulationCheck,
 } from '../../engine/index.ts';
 import type {
+  ApparentConstantJson,
   Diagnostic,
   DiagnosticJson,
+  NormalisedLawJson,
+  NormalisedTermJson,
   ObservationJson,
   RateLawJson,
   RecordReport,
@@ -102,7 +108,13 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
   if (presented?.grouped) {
     const g = presented.grouped;
     out.grouped = { name: g.name, value_text: g.valueText, value_latex: g.valueLatex, text: g.text, latex: g.latex };
+    Object.assign(
+      out.grouped,
+      { unit: g.unitText, unit_latex: g.unitLatex },
+      g.value !== undefined && { value: sixFigures(g.value) },
+    );
   }
+  if (derived.normalised) out.normalised = normalisedJson(derived.normalised);
   if (law.absorbed.length > 0) out.absorbed = law.absorbed;
   if (law.catalystBalances.length > 0) {
     out.catalyst_balances = law.catalystBalances.map((b) => ({
@@ -114,6 +126,47 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
   if (derived.restingStates.length > 0) out.resting_states = derived.restingStates;
   if (!law.expression) out.numeric_only = true;
   return out;
+}
+
+/** A normalised law in the report's shape. */
+function normalisedJson(n: NormalisedLaw): NormalisedLawJson {
+  const terms = (ts: readonly NormalisedTerm[]): NormalisedTermJson[] =>
+    ts.map((t) => ({
+      ...(t.constant !== undefined && { constant: t.constant }),
+      power: t.power.toJSON(),
+      sign: t.sign,
+      factors: Object.fromEntries(t.concentrations.factors.map(([symbol, e]) => [symbol, e.toJSON()])),
+    }));
+  const out: NormalisedLawJson = {
+    text: n.text,
+    latex: n.latex,
+    constants: n.constants.map(constantJson),
+    numerator: terms(n.numerator),
+    factors: n.factors.map((f) => ({ power: f.power, terms: terms(f.terms) })),
+  };
+  if (n.trade)
+    out.trade = { ...n.trade, inhibitors: [...n.trade.inhibitors], constants: n.trade.constants.map(constantJson) };
+  return out;
+}
+
+function constantJson(c: ApparentConstant): ApparentConstantJson {
+  const out: ApparentConstantJson = {
+    name: c.name,
+    latex: c.latex,
+    meaning: c.meaning,
+    definition_text: c.definitionText,
+    definition_latex: c.definitionLatex,
+    unit: c.unitText,
+    unit_latex: c.unitLatex,
+  };
+  if (c.relationText !== undefined)
+    Object.assign(out, { relation_text: c.relationText, relation_latex: c.relationLatex });
+  if (c.value !== undefined) out.value = sixFigures(c.value);
+  return out;
+}
+
+function sixFigures(x: number): number {
+  return Number(x.toPrecision(6));
 }
 
 function termsJson(p: Polynomial): TermJson[] {

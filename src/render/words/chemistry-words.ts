@@ -32,6 +32,21 @@ export function methodShort(method: string): string {
   return METHODS[method]?.short ?? method.replace(/_/g, ' ');
 }
 
+const LAW_SHAPES: Readonly<Record<string, string>> = {
+  michaelis_menten: 'Michaelis–Menten',
+  competitive_inhibition: 'Michaelis–Menten with competitive inhibition',
+  uncompetitive_inhibition: 'Michaelis–Menten with uncompetitive inhibition',
+  mixed_inhibition: 'Michaelis–Menten with mixed inhibition',
+  noncompetitive_inhibition: 'Michaelis–Menten with noncompetitive inhibition',
+  substrate_inhibition: 'Michaelis–Menten with substrate inhibition',
+  reversible_michaelis_menten: 'reversible Michaelis–Menten (Haldane)',
+};
+
+/** The trade's name of a rate-law shape: "Michaelis–Menten with competitive inhibition". */
+export function lawShapeWords(shape: string): string {
+  return LAW_SHAPES[shape] ?? shape.replace(/_/g, ' ');
+}
+
 /** The law a method gives: "steady-state law". */
 export function methodLaw(method: string): string {
   return METHODS[method]?.law ?? `${method.replace(/_/g, ' ')} law`;

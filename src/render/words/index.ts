@@ -3,6 +3,7 @@ export {
   ROLE_ORDER,
   SEVERITIES,
   capitalised,
+  lawShapeWords,
   methodAbout,
   methodLaw,
   methodName,
