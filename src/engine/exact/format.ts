@@ -1,6 +1,6 @@
 import type { Rational } from './rational.ts';
 import { compareSymbols, Monomial, type Factor } from './monomial.ts';
-import { Polynomial, type Term } from './polynomial.ts';
+import { Polynomial } from './polynomial.ts';
 import { RationalFunction } from './rational-function.ts';
 
 /** How the caller wants each symbol written (e.g. `K1` → `K_{1}`, `S` → `[\mathrm{S}]`). */
@@ -78,7 +78,7 @@ export function formatLatex(value: Expression, style: SymbolStyle = defaultSymbo
 }
 
 function formatWith(value: Expression, notation: Notation): string {
-  if (value instanceof Monomial) return magnitude(value, 1n, 1n, notation);
+  if (value instanceof Monomial) return magnitude(sortFactors(value, notation), 1n, 1n, notation);
   if (value instanceof Polynomial) return polynomial(value, notation);
   const whole = value.toPolynomial();
   if (whole) return polynomial(whole, notation);
@@ -89,33 +89,32 @@ function formatWith(value: Expression, notation: Notation): string {
 
 function polynomial(p: Polynomial, notation: Notation): string {
   if (p.isZero()) return '0';
-  const ordered = p.terms.map((t) => ({ t, factors: sortFactors(t.monomial, notation) }));
+  // Sort keys are worked out once per term, not inside the comparator (which runs n log n times).
   const weight = notation.weight;
+  const ordered = p.terms.map((t) => ({
+    t,
+    factors: sortFactors(t.monomial, notation),
+    weight: weight ? weight(t.monomial) : 0,
+  }));
   ordered.sort(
     (a, b) =>
-      (weight
-        ? weight(a.t.monomial) - weight(b.t.monomial)
-        : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) || compareFactors(a.factors, b.factors, notation),
+      (weight ? a.weight - b.weight : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) ||
+      compareFactors(a.factors, b.factors, notation),
   );
   return ordered
-    .map(({ t }, i) => {
+    .map(({ t, factors }, i) => {
       const sign = t.coefficient.sign() < 0 ? '-' : '+';
-      const body = term(t, notation);
+      const c = t.coefficient.abs();
+      const body = magnitude(factors, c.num, c.den, notation);
       return i === 0 ? (sign === '-' ? `-${body}` : body) : ` ${sign} ${body}`;
     })
     .join('');
 }
 
-function term(t: Term, notation: Notation): string {
-  const c = t.coefficient.abs();
-  return magnitude(t.monomial, c.num, c.den, notation);
-}
-
 /** (num/den)·monomial without its sign: positive powers above the bar, negative ones below. */
-function magnitude(m: Monomial, num: bigint, den: bigint, notation: Notation): string {
+function magnitude(factors: readonly Factor[], num: bigint, den: bigint, notation: Notation): string {
   const factor = (s: string, e: Rational): string =>
     e.isInteger() && e.num === 1n ? notation.symbol(s) : notation.power(notation.symbol(s), e);
-  const factors = sortFactors(m, notation);
   const above = factors.filter(([, e]) => e.sign() > 0).map(([s, e]) => factor(s, e));
   const below = factors.filter(([, e]) => e.sign() < 0).map(([s, e]) => factor(s, e.neg()));
   if (num !== 1n || above.length === 0) above.unshift(num.toString());

@@ -15,6 +15,7 @@ import { observationSpecies } from './observation-species.ts';
 import { observationUnits } from './observation-units.ts';
 import { rateNonlinear } from './rate-nonlinear.ts';
 import { rateNotEliminable } from './rate-not-eliminable.ts';
+import { rateSymbolicBudget } from './rate-symbolic-budget.ts';
 import { recordSchema } from './record-schema.ts';
 import { recordYaml } from './record-yaml.ts';
 import { rolesDeclaredMismatch } from './roles-declared-mismatch.ts';
@@ -49,6 +50,7 @@ export const RULES = [
   observationSpecies,
   simulationFailed,
   constantsDetailedBalance,
+  rateSymbolicBudget,
 ] as const;
 
 /** A rule's stable id. */

@@ -6,6 +6,8 @@ it('pins the public API of the algebra module', () => {
     'Monomial',
     'Polynomial',
     'RationalFunction',
+    'STEADY_STATE_WORK',
+    'WorkBudget',
     'compareSymbols',
     'content',
     'defaultSymbolStyle',
@@ -19,5 +21,6 @@ it('pins the public API of the algebra module', () => {
     'primitivePart',
     'rationalPower',
     'solveLinear',
+    'solveShared',
   ]);
 });
