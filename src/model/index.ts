@@ -30,6 +30,7 @@ export type {
   ObservationJson,
   RateLawJson,
   RecordReport,
+  RootJson,
   SimulationJson,
   TermJson,
 } from './report.ts';

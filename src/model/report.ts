@@ -59,8 +59,12 @@ export interface RateLawJson {
   text?: string;
   latex?: string;
   grouped?: { name: string; value_text: string; value_latex: string; text: string; latex: string };
-  /** the rate law as data: terms of numerator and denominator, each a coefficient and symbol exponents */
-  structure?: { numerator: TermJson[]; denominator: TermJson[] };
+  /**
+   * the rate law as data: terms of numerator and denominator, each a coefficient and symbol
+   * exponents; a law with radicals adds `roots`, and its numerator and denominator then hold the
+   * root symbols too
+   */
+  structure?: { numerator: TermJson[]; denominator: TermJson[]; roots?: RootJson[] };
   /** limits of the apparent order as [X] → 0 (low) and [X] → ∞ (high) */
   orders: Record<string, { low: number | string; high: number | string }>;
   /** solvents whose constant concentration is absorbed into the constants */
@@ -75,6 +79,17 @@ export interface RateLawJson {
   resting_states?: { observation: string; catalyst: string; species: string; fraction: number }[];
   numeric_only?: boolean;
   derivation: { say: string; text: string; latex: string }[];
+}
+
+/** A root symbol of a law with radicals: the one positive root of a polynomial in it, and its closed form. */
+export interface RootJson {
+  /** the symbol as it appears in the structure's terms, e.g. `ρ_1` */
+  symbol: string;
+  /** the polynomial (in the symbol, constants and concentrations) whose one positive root it is */
+  polynomial: TermJson[];
+  /** the root written out, plain text and LaTeX */
+  closed_form: string;
+  closed_form_latex: string;
 }
 
 export interface TermJson {

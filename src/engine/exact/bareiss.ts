@@ -26,11 +26,17 @@ export type SolveFailure = 'singular' | 'budget';
  * Throws when the matrix is not square (a programmer mistake).
  */
 export function determinant(matrix: PolynomialMatrix): Polynomial {
+  return determinantWithin(matrix, WorkBudget.unlimited()) as Polynomial;
+}
+
+/** The determinant as `determinant` computes it, its work charged to the budget; 'budget' once spent. */
+export function determinantWithin(matrix: PolynomialMatrix, budget: WorkBudget): Polynomial | 'budget' {
   const n = matrix.length;
   if (matrix.some((row) => row.length !== n)) throw new RangeError('determinant of a non-square matrix');
   const m = matrix.map((row) => [...row]);
-  const eliminated = eliminate(m, n, n - 1, WorkBudget.unlimited());
-  if (typeof eliminated === 'string') return Polynomial.ZERO;
+  const eliminated = eliminate(m, n, n - 1, budget);
+  if (eliminated === 'budget') return 'budget';
+  if (eliminated === 'singular') return Polynomial.ZERO;
   const last = n === 0 ? Polynomial.ONE : m[n - 1]![n - 1]!;
   return eliminated.swaps % 2 === 1 ? last.neg() : last;
 }
@@ -140,16 +146,16 @@ function pivotRow(m: Polynomial[][], k: number): number | undefined {
 /** p·q, charged to the budget; undefined once it is spent. */
 function multiply(p: Polynomial, q: Polynomial, budget: WorkBudget): Polynomial | undefined {
   if (p.isZero() || q.isZero()) return Polynomial.ZERO;
-  if (!budget.charge(p.terms.length * q.terms.length)) return undefined;
+  if (!budget.chargeProduct(p, q)) return undefined;
   return p.mul(q);
 }
 
-/** The exact quotient p/q, charged to the budget (about |p/q|·|q| term products); undefined once spent. */
+/** The exact quotient p/q, charged to the budget beforehand (about |p|·|q| weighted term products); undefined once spent. */
 function quotientBy(p: Polynomial, q: Polynomial, budget: WorkBudget): Polynomial | undefined {
   if (q.equals(Polynomial.ONE) || p.isZero()) return p;
-  if (!budget.charge(p.terms.length)) return undefined;
+  if (!budget.chargeProduct(p, q)) return undefined;
   const r = divideExact(p, q);
   // Sylvester's identity guarantees this; failing here means a bug in the algebra, not bad data.
   if (r === undefined) throw new Error('Bareiss step: division by the previous pivot was not exact');
-  return budget.charge(r.terms.length * q.terms.length) ? r : undefined;
+  return r;
 }

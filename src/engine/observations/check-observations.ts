@@ -6,7 +6,7 @@ import type { Observation, Status } from '../../model/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { contradiction, judgeOrder, readObservedOrder, type ObservationCheck, type Prediction } from './judge-order.ts';
 import type { RateLawContext } from '../rate-law/context.ts';
-import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
+import { lawExpression, type DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
 import { observationValues } from '../rate-law/numeric-values.ts';
 import { numericOrderAt } from '../rate-law/numeric-order.ts';
 import { apparentOrder, orderLimitsOf, withAbsent } from '../rate-law/orders.ts';
@@ -20,7 +20,7 @@ function limitsAt(
   symbol: string | undefined,
   values: ReadonlyMap<string, number>,
 ): OrderRange | undefined {
-  const expression = derived.presented?.expression;
+  const expression = lawExpression(derived);
   if (!expression || !symbol) return derived.orders.get(species);
   const absent = expression.symbols().filter((s) => values.get(s) === 0 && s !== symbol);
   return (
@@ -80,8 +80,9 @@ export function checkObservations(
         const limits = limitsAt(derived, species, symbol, values);
         if (symbol && limits) prediction.limits = limits;
         if (symbol && context.mechanism.species.has(species)) {
-          const at = derived.law.expression
-            ? apparentOrder(derived.law.expression, symbol, values, limits?.low.toNumber())
+          const exact = lawExpression(derived);
+          const at = exact
+            ? apparentOrder(exact, symbol, values, limits?.low.toNumber())
             : derived.law.nonlinear && numericOrderAt(derived.law.nonlinear, symbol, values);
           if (typeof at === 'number') prediction.atConditions = at;
         }

@@ -8,8 +8,8 @@ import type { Mechanism } from '../mechanism/mechanism.ts';
 import type { Route } from '../route/route.ts';
 import { rateLawContext, type RateLawContext } from './context.ts';
 import { formatterFor } from './formatter.ts';
-import { orderLimitsOf, orderSymbols, withAbsent } from './orders.ts';
-import type { RationalFunction } from '../exact/index.ts';
+import { hasPositiveNumerator, orderLimitsOf, orderSymbols, withAbsent, type RateExpression } from './orders.ts';
+import { presentAlgebraicLaw, type PresentedAlgebraicLaw } from './present-algebraic.ts';
 import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
 import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
@@ -19,8 +19,10 @@ import { concentration } from './symbols.ts';
 
 export interface DerivedRateLaw {
   law: RateLaw;
-  /** absent for a nonlinear steady state, which is solved numerically */
+  /** absent for a law with radicals, and for a nonlinear steady state solved numerically */
   presented?: PresentedLaw;
+  /** a law with radicals (a nonlinear steady state in closed form), written out */
+  algebraic?: PresentedAlgebraicLaw;
   orders: Map<string, OrderRange>;
   /** the dominant catalyst form at each observation's conditions, where constants allow */
   restingStates: (RestingState & { observation: string })[];
@@ -82,6 +84,13 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
       species: c.species,
       weights: c.weights.map((w) => w.toNumber()),
     }));
+    if (law.algebraic) {
+      const algebraic = presentAlgebraicLaw(law.algebraic, fmt);
+      law.absorbed = context.solvents.filter((s) => law.algebraic!.symbols().includes(concentration(s)));
+      const orders = reportedOrders(law.algebraic, symbols, roles);
+      rateLaws.push({ law, algebraic, orders, restingStates: [] });
+      continue;
+    }
     if (!law.expression) {
       rateLaws.push({ law, orders: new Map(), restingStates: [] });
       continue;
@@ -102,12 +111,12 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
  * Each observation takes out its own absent species (check-observations.ts).
  */
 function reportedOrders(
-  expression: RationalFunction,
+  expression: RateExpression,
   symbols: readonly { species: string; symbol: string }[],
   roles: ReadonlyMap<string, Role>,
 ): Map<string, OrderRange> {
   const orders = orderLimitsOf(expression, symbols);
-  if (expression.numerator.terms.every((t) => t.coefficient.sign() > 0)) return orders;
+  if (hasPositiveNumerator(expression)) return orders;
   const products = symbols.filter((s) => roles.get(s.species) === 'product').map((s) => s.symbol);
   const initial = withAbsent(expression, products);
   for (const [species, range] of orderLimitsOf(
@@ -147,4 +156,9 @@ function confirmInhibitors(
     if (order && (order.low.sign() < 0 || order.high.sign() < 0)) out.set(sp, 'inhibitor');
   }
   return out;
+}
+
+/** The exact law of a derived rate law, rational or with radicals; undefined where it is numeric only. */
+export function lawExpression(derived: DerivedRateLaw): RateExpression | undefined {
+  return derived.presented?.expression ?? derived.algebraic?.expression;
 }

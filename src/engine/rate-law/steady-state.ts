@@ -11,7 +11,9 @@ import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import type { RateLawContext } from './context.ts';
 import type { Formatter } from './formatter.ts';
 import type { RateLaw } from './rate-law.ts';
+import { closedFormSteadyState, type NoClosedForm } from './steady-state-closed-form.ts';
 import { solveLinearSteadyState } from './steady-state-linear.ts';
+import { symbolMeaning } from './symbols.ts';
 import { nonlinearSteps, steadyStateSystem, type SteadyStateSystem } from './steady-state-system.ts';
 
 /** Derives the steady-state rate law exactly, or sets up the nonlinear system for a numeric one. */
@@ -33,7 +35,23 @@ export function steadyStateRateLaw(
       ],
     };
   const offending = nonlinearSteps(context);
-  if (offending.length > 0) return numericOnly(system, fmt, nonlinearNote(context, offending));
+  if (offending.length > 0) {
+    const closed = closedFormSteadyState(system, context, fmt, budget);
+    if ('kind' in closed) {
+      const note =
+        closed.kind === 'budget' ? budgetNote(system, budget) : nonlinearNote(context, system, offending, closed);
+      return numericOnly(system, fmt, note);
+    }
+    const law: RateLaw = {
+      method: 'steady_state',
+      absorbed: [],
+      catalystBalances: closed.catalystBalances,
+      trace: [...system.trace, ...closed.trace],
+    };
+    if (closed.expression) law.expression = closed.expression;
+    if (closed.algebraic) law.algebraic = closed.algebraic;
+    return { law, diagnostics: [] };
+  }
   const solved = solveLinearSteadyState(system, context, fmt, budget);
   if (solved === 'budget') return numericOnly(system, fmt, budgetNote(system, budget));
   if (solved === 'singular') {
@@ -76,13 +94,50 @@ function numericOnly(
   return { law, diagnostics: [note] };
 }
 
-function nonlinearNote(context: RateLawContext, steps: number[]): Diagnostic {
+/**
+ * Why a nonlinear steady state has no closed form, located at the first step that brings two
+ * internal species together, naming the species, the steps and the constants a numeric solution needs.
+ */
+function nonlinearNote(
+  context: RateLawContext,
+  system: SteadyStateSystem,
+  offending: number[],
+  why: Exclude<NoClosedForm, { kind: 'budget' }>,
+): Diagnostic {
+  const steps = context.mechanism.steps;
+  const first = steps[offending[0]!]!;
+  const named = offending.map((i) => `step ${steps[i]!.label} (${steps[i]!.text})`).join(', ');
+  const constants = [
+    ...new Set(system.equations.flatMap((e) => e.symbols()).filter((s) => symbolMeaning(s)?.kind === 'constant')),
+  ];
   return diagnostic(
     'rate/nonlinear',
-    'info',
-    'a step brings two intermediates or catalyst forms together (a recombination, say), so the steady-state equations are not linear: they are solved numerically at each observation that gives constants and concentrations, with no closed-form law',
-    { path: ['steps', steps[0] ?? 0] },
+    'warning',
+    `the steady state of ${system.species.join(', ')} is not linear: ${named} ${offending.length > 1 ? 'bring' : 'brings'} two of them together; ${reason(why)}. It is solved numerically at each observation that gives the constants (${constants.join(', ')}) and concentrations`,
+    {
+      path: ['steps', first.index],
+      note: 'give the rate constants for numeric orders, or ask for the long-chain approximation (approximation: long_chain) where this is a chain',
+    },
   );
+}
+
+function reason(why: Exclude<NoClosedForm, { kind: 'budget' }>): string {
+  switch (why.kind) {
+    case 'root':
+      if (why.problem.kind === 'degree')
+        return `elimination leaves a polynomial of degree ${why.problem.degree} in ${why.unknown}, which has no closed-form root here`;
+      if (why.problem.kind === 'sign')
+        return `elimination leaves an equation in ${why.unknown} whose positive root is not unique (${why.problem.reason})`;
+      return `elimination leaves no equation that fixes ${why.unknown}`;
+    case 'resultant':
+      return `no intermediate enters any remaining balance to the first power; eliminating by resultants leaves ${why.unknowns.map((u, i) => `degree ${why.degrees[i]} in ${u}`).join(', ')}, and the others then follow from nonlinear equations`;
+    case 'zero':
+      return `a balance holds for these species only if ${why.unknowns.join(', ')} ${why.unknowns.length > 1 ? 'are' : 'is'} zero, so there is no positive steady state`;
+    case 'underdetermined':
+      return `the balances do not fix ${why.unknowns.join(', ')} (they are dependent)`;
+    case 'inconsistent':
+      return 'the balances hold together only for special values of the constants';
+  }
 }
 
 function budgetNote(system: SteadyStateSystem, budget: WorkBudget): Diagnostic {

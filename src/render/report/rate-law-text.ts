@@ -15,6 +15,8 @@ export function rateLawLines(derivation: Derivation): string[] {
         lines.push(
           `    = ${derived.presented.grouped.text}   with ${derived.presented.grouped.name} = ${derived.presented.grouped.valueText}`,
         );
+    } else if (derived.algebraic) {
+      lines.push(`  r = ${derived.algebraic.text}`);
     } else {
       lines.push('  no closed form: the steady state is solved numerically at each observation with constants');
     }
