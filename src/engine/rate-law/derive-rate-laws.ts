@@ -14,6 +14,7 @@ import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
 import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
 import type { RestingState } from './resting-state.ts';
+import { longChainRateLaw } from './long-chain.ts';
 import { steadyStateRateLaw } from './steady-state.ts';
 import { concentration } from './symbols.ts';
 
@@ -73,12 +74,7 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
   }
   const symbols = orderSymbols(context);
   const rateLaws: DerivedRateLaw[] = [];
-  for (const method of methods) {
-    if (method === 'rds' && (!rds || (sigma[rds.index] ?? 0) === 0)) continue;
-    const result = method === 'rds' ? eliminateByPreEquilibria(context, rds!, fmt) : steadyStateRateLaw(context, fmt);
-    diagnostics.push(...result.diagnostics);
-    if (!result.law) continue;
-    const law = result.law;
+  const finish = (law: RateLaw): DerivedRateLaw => {
     law.pools = context.conservations.map((c) => ({
       total: c.total,
       species: c.species,
@@ -87,17 +83,37 @@ export function deriveRateLaws(approximation: Approximation, mechanism: Mechanis
     if (law.algebraic) {
       const algebraic = presentAlgebraicLaw(law.algebraic, fmt);
       law.absorbed = context.solvents.filter((s) => law.algebraic!.symbols().includes(concentration(s)));
-      const orders = reportedOrders(law.algebraic, symbols, roles);
-      rateLaws.push({ law, algebraic, orders, restingStates: [] });
-      continue;
+      return { law, algebraic, orders: reportedOrders(law.algebraic, symbols, roles), restingStates: [] };
     }
-    if (!law.expression) {
-      rateLaws.push({ law, orders: new Map(), restingStates: [] });
-      continue;
-    }
+    if (!law.expression) return { law, orders: new Map(), restingStates: [] };
     const presented = presentLaw(law.expression, context.solvents, fmt);
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(concentration(s)));
-    rateLaws.push({ law, presented, orders: reportedOrders(presented.expression, symbols, roles), restingStates: [] });
+    return { law, presented, orders: reportedOrders(presented.expression, symbols, roles), restingStates: [] };
+  };
+  for (const method of methods) {
+    if (method === 'rds' && (!rds || (sigma[rds.index] ?? 0) === 0)) continue;
+    const result =
+      method === 'rds'
+        ? eliminateByPreEquilibria(context, rds!, fmt)
+        : method === 'long_chain'
+          ? longChainRateLaw(context, fmt, true)
+          : steadyStateRateLaw(context, fmt);
+    diagnostics.push(...result.diagnostics);
+    if (result.law) rateLaws.push(finish(result.law));
+  }
+  // A chain also gets its long-chain law, where that says something the exact steady state does not.
+  const exact = rateLaws.find((r) => r.law.method === 'steady_state');
+  if (exact && approximation !== 'long_chain') {
+    const offered = longChainRateLaw(context, fmt, false).law;
+    if (offered && sameLaw(offered, exact.law)) {
+      exact.law.trace.push({
+        say: 'the long-chain approximation (initiation = termination, propagation alone for the carriers) gives this same law',
+        text: 'r_long-chain = r',
+        latex: 'r_{\\text{long chain}} = r',
+      });
+    } else if (offered && (offered.expression || offered.algebraic)) {
+      rateLaws.push(finish(offered));
+    }
   }
   return { context, rateLaws, symbols, roles: confirmInhibitors(roles, offRoute, rateLaws[0]), diagnostics };
 }
@@ -138,9 +154,24 @@ function reportedOrders(
 
 function chooseMethods(approximation: string, hasRds: boolean): RateLawMethod[] {
   if (approximation === 'rds') return ['rds'];
+  if (approximation === 'long_chain') return ['long_chain'];
   if (approximation === 'steady_state') return ['steady_state'];
   if (approximation === 'both') return hasRds ? ['rds', 'steady_state'] : ['steady_state'];
   return hasRds ? ['rds'] : ['steady_state'];
+}
+
+/** Two exact laws that are the same function (a law with radicals: the same outer function and roots). */
+function sameLaw(a: RateLaw, b: RateLaw): boolean {
+  if (a.expression && b.expression) return a.expression.equals(b.expression);
+  if (a.algebraic && b.algebraic) {
+    const [x, y] = [a.algebraic, b.algebraic];
+    return (
+      x.outer.equals(y.outer) &&
+      x.roots.length === y.roots.length &&
+      x.roots.every((r, i) => r.symbol === y.roots[i]!.symbol && r.polynomial.equals(y.roots[i]!.polynomial))
+    );
+  }
+  return false;
 }
 
 /** A net-zero binder off the route with a negative order in the rate law is an inhibitor. */

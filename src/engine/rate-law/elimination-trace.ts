@@ -18,6 +18,8 @@ import type { SteadyStateSystem } from './steady-state-system.ts';
 
 /** What equation i of the system is: a species' steady state, or the conservation that replaced it. */
 export function equationName(system: SteadyStateSystem, i: number): string {
+  const named = system.names?.[i];
+  if (named) return named;
   const replaced = !system.equations[i]!.equals(system.balances[i]!);
   return replaced
     ? `the conservation that replaces the balance of ${system.species[i]}`

@@ -23,6 +23,8 @@ export interface SteadyStateSystem {
   /** the rate of the overall reaction and the species it is read from */
   rate: { species: string; polynomial: Polynomial };
   trace: TraceLine[];
+  /** what each equation is, where it is not a species' balance or its conservation (the long-chain system) */
+  names?: string[];
 }
 
 /** Sets up the steady-state equations; undefined when no species gives the overall rate. */

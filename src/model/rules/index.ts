@@ -14,6 +14,7 @@ import { observationOrder } from './observation-order.ts';
 import { observationSpecies } from './observation-species.ts';
 import { observationUnits } from './observation-units.ts';
 import { rateNonlinear } from './rate-nonlinear.ts';
+import { rateNotAChain } from './rate-not-a-chain.ts';
 import { rateNotEliminable } from './rate-not-eliminable.ts';
 import { rateSymbolicBudget } from './rate-symbolic-budget.ts';
 import { recordSchema } from './record-schema.ts';
@@ -51,6 +52,7 @@ export const RULES = [
   simulationFailed,
   constantsDetailedBalance,
   rateSymbolicBudget,
+  rateNotAChain,
 ] as const;
 
 /** A rule's stable id. */
