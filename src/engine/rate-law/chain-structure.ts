@@ -31,7 +31,11 @@ export function chainStructure(context: RateLawContext): ChainStructure | { prob
   const pooled = new Set(context.conservations.flatMap((c) => c.species));
   const onRoute = mechanism.steps.filter((s) => (sigma[s.index] ?? 0) > 0);
   const carriers = context.internal.filter((sp) => !pooled.has(sp) && onRoute.some((s) => involves(s, sp)));
-  if (carriers.length === 0) return { problem: 'no intermediate takes part in the steps on the route' };
+  if (carriers.length === 0)
+    return {
+      problem:
+        'no intermediate outside a conserved catalyst takes part in the steps on the route, so nothing carries a chain',
+    };
   const oneWay: ChainStep[] = mechanism.steps.flatMap((step) => {
     const delta = carriers.reduce((sum, c) => sum.add(step.change.get(c) ?? Rational.ZERO), Rational.ZERO);
     const forward: ChainStep = { step, direction: 'forward', delta };
