@@ -1,4 +1,5 @@
-import type { Rational } from './rational.ts';
+import { Rational } from './rational.ts';
+import { monomialContent } from './polynomial-content.ts';
 import { compareSymbols, Monomial, type Factor } from './monomial.ts';
 import { Polynomial } from './polynomial.ts';
 import { RationalFunction } from './rational-function.ts';
@@ -35,6 +36,8 @@ interface Notation {
   symbol(s: string): string;
   power(base: string, exponent: Rational): string;
   product(factors: string[]): string;
+  /** a sum in brackets, as one factor of a product */
+  group(sum: string): string;
   quotient(num: string, den: string, denFactors: number): string;
   /** Top-level fraction of two polynomials, each with its number of terms. */
   fraction(num: string, numTerms: number, den: string, denTerms: number): string;
@@ -50,6 +53,7 @@ const text = (style: SymbolStyle): Notation => ({
     return e.isInteger() ? `${b}^${e}` : `${b}^(${e})`;
   },
   product: (factors) => factors.join('*'),
+  group: (sum) => `(${sum})`,
   quotient: (num, den, denFactors) => `${num}/${denFactors > 1 ? `(${den})` : den}`,
   fraction: (num, numTerms, den, denTerms) =>
     `${numTerms > 1 || num.includes('/') ? `(${num})` : num} / ${denTerms > 1 || /[*/]/.test(den) ? `(${den})` : den}`,
@@ -62,6 +66,7 @@ const latex = (style: SymbolStyle): Notation => ({
   // A base that already has a superscript (a charge, say) is braced to avoid a double superscript.
   power: (base, e) => `${base.includes('^') ? `{${base}}` : base}^{${e}}`,
   product: (factors) => factors.join(' '),
+  group: (sum) => `\\left(${sum}\\right)`,
   quotient: (num, den) => `\\frac{${num}}{${den}}`,
   fraction: (num, numTerms, den) =>
     numTerms === 1 && num.startsWith('-') ? `-\\frac{${num.slice(1)}}{${den}}` : `\\frac{${num}}{${den}}`,
@@ -82,9 +87,21 @@ function formatWith(value: Expression, notation: Notation): string {
   if (value instanceof Polynomial) return polynomial(value, notation);
   const whole = value.toPolynomial();
   if (whole) return polynomial(whole, notation);
-  const num = polynomial(value.numerator, notation);
-  const den = polynomial(value.denominator, notation);
+  const num = side(value.numerator, notation);
+  const den = side(value.denominator, notation);
   return notation.fraction(num, value.numerator.terms.length, den, value.denominator.terms.length);
+}
+
+/**
+ * One side of a fraction. A fractional power common to every term (k_5^(1/2) from a radical) is
+ * written once in front, `k_5^(1/2)*(k_3*[Br2] + k_4*[HBr])`, as a kineticist would factor it.
+ */
+function side(p: Polynomial, notation: Notation): string {
+  const common = p.terms.length > 1 ? monomialContent(p) : Monomial.ONE;
+  const fractional = Monomial.fromFactors(common.factors.filter(([, e]) => !e.isInteger()));
+  if (fractional.isOne()) return polynomial(p, notation);
+  const rest = polynomial(p.mulTerm(Rational.ONE, Monomial.ONE.div(fractional)), notation);
+  return notation.product([magnitude(sortFactors(fractional, notation), 1n, 1n, notation), notation.group(rest)]);
 }
 
 function polynomial(p: Polynomial, notation: Notation): string {

@@ -76,7 +76,7 @@ export function contradiction(check: ObservationCheck, status: Status, index: nu
   return diagnostic(
     'observation/order',
     status === 'favoured' ? 'error' : 'warning',
-    `observation ${check.observation}: order in ${check.species} is ${check.observed} ± ${check.tolerance}, but the ${check.method === 'rds' ? 'rate-determining-step' : 'steady-state'} rate law gives ${predicted}`,
+    `observation ${check.observation}: order in ${check.species} is ${check.observed} ± ${check.tolerance}, but the ${check.method === 'rds' ? 'rate-determining-step' : check.method === 'long_chain' ? 'long-chain' : 'steady-state'} rate law gives ${predicted}`,
     {
       path: ['observations', index, 'orders', check.species],
       actual: check.observed,
