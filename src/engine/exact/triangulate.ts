@@ -14,9 +14,10 @@ import { WorkBudget } from './work-budget.ts';
  * 1. Ratio elimination: an equation whose every term carries a power of some unknowns is divided
  *    by it, since the unknowns are not zero (Ogg's d[NO]/dt = [NO3](k2[NO2] − k3[NO]) leaves
  *    k2[NO2] = k3[NO], a ratio of intermediates).
- * 2. Linear elimination: an unknown that occurs to the first power in some equation, with a
- *    coefficient whose sign is fixed, is solved for as x = −b/a and substituted into the others
- *    (denominators cleared, the factor a divided back out where it divides).
+ * 2. Linear elimination: an unknown that occurs to the first power in some equation is solved
+ *    for as x = −b/a and substituted into the others (denominators cleared, the factor a divided
+ *    back out where it divides); a coefficient a of fixed sign, never zero for positive values,
+ *    is preferred to one that is non-zero only generically.
  * 3. An equation left in one unknown alone is that unknown's final polynomial.
  * 4. Otherwise a resultant eliminates an unknown between two equations; that unknown then follows
  *    from a nonlinear equation, so the result is marked as not back-substitutable in closed form.
@@ -152,9 +153,9 @@ interface Pivot {
 }
 
 /**
- * The linear pivot that keeps the other equations smallest: the unknown x and equation a·x + b
- * where a has a fixed sign (never zero for positive values), scored by how much substituting
- * x = −b/a raises the degrees of the others; an unknown the rate uses is kept for last on a tie.
+ * The linear pivot that keeps the other equations smallest: the unknown x and equation a·x + b,
+ * scored by how much substituting x = −b/a raises the degrees of the others, a coefficient a of
+ * fixed sign first; an unknown the rate uses is kept for last on a tie.
  */
 function linearPivot(
   live: readonly Live[],
@@ -167,10 +168,10 @@ function linearPivot(
       const c = coefficientsIn(equation.polynomial, symbol);
       if (!c || Math.max(...c.keys()) !== 1) continue;
       const a = c.get(1)!;
-      if (definiteSign(a) === 0) continue;
       const b = c.get(0) ?? Polynomial.ZERO;
       const growth = degreeInSymbols(a, open).add(degreeInSymbols(b, open)).toNumber() + 1;
-      let cost = preferLast.has(symbol) ? 0.5 : 0;
+      // A coefficient of unknown sign is non-zero only generically: the last choice before a resultant.
+      let cost = (preferLast.has(symbol) ? 0.5 : 0) + (definiteSign(a) === 0 ? 1000 : 0);
       for (const other of live) {
         if (other !== equation) cost += (naturalDegreeIn(other.polynomial, symbol) ?? 0) * growth;
       }

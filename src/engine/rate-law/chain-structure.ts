@@ -58,9 +58,10 @@ export function chainStructure(context: RateLawContext): ChainStructure | { prob
   return structure;
 }
 
-/** Step labels of one-way steps, e.g. `1, 4 (reverse)`. */
+/** One-way steps in words, e.g. `step 1`, `steps 4, 5 (reverse)`. */
 export function chainStepLabels(steps: readonly ChainStep[]): string {
-  return steps.map((c) => (c.direction === 'reverse' ? `${c.step.label} (reverse)` : c.step.label)).join(', ');
+  const labels = steps.map((c) => (c.direction === 'reverse' ? `${c.step.label} (reverse)` : c.step.label));
+  return `${labels.length === 1 ? 'step' : 'steps'} ${labels.join(', ')}`;
 }
 
 function involves(step: Step, species: string): boolean {

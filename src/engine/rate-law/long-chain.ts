@@ -60,10 +60,11 @@ export function longChainRateLaw(
       catalystBalances: [],
       trace,
     };
+    const spent = solved === 'budget' || (typeof solved !== 'string' && solved.kind === 'budget');
     const note = diagnostic(
-      'rate/nonlinear',
+      spent ? 'rate/symbolic-budget' : 'rate/nonlinear',
       'info',
-      'the long-chain equations have no closed form here: they are solved numerically at each observation that gives the constants',
+      `the long-chain equations ${spent ? 'need more symbolic work than the budget allows' : 'have no closed form here'}: they are solved numerically at each observation that gives the constants`,
       { path: ['steps', structure.termination[0]!.step.index] },
     );
     return { law, diagnostics: [note] };
@@ -95,7 +96,7 @@ function longChainSystem(
   const names: string[] = full.species.map(() => '');
   const trace: TraceLine[] = [
     {
-      say: `long-chain approximation: the carriers ${chain.carriers.join(', ')} are made in step ${chainStepLabels(chain.initiation)} and destroyed in step ${chainStepLabels(chain.termination)}, far more slowly than steps ${chainStepLabels(chain.propagation.filter((p) => touchesCarrier(p, chain)))} pass them on; so initiation = termination`,
+      say: `long-chain approximation: the carriers ${chain.carriers.join(', ')} are made in ${chainStepLabels(chain.initiation)} and destroyed in ${chainStepLabels(chain.termination)}, far more slowly than ${chainStepLabels(chain.propagation.filter((p) => touchesCarrier(p, chain)))} pass them on; so initiation = termination`,
       ...chainLengthLine(chain, fmt),
     },
   ];

@@ -48,7 +48,11 @@ export function apparentOrder(
 ): number | undefined {
   if (!expression.symbols().every((s) => values.has(s))) return undefined;
   if (values.get(symbol) === 0) return low;
-  if (expression instanceof AlgebraicFunction) return expression.logDerivative(symbol, values);
+  if (expression instanceof AlgebraicFunction) {
+    // A species at zero (a product at initial rates) is taken out first, its roots solved again without it.
+    const absent = expression.symbols().filter((s) => s !== symbol && values.get(s) === 0);
+    return withAbsent(expression, absent).logDerivative(symbol, values);
+  }
   const derivative = expression.logDerivative(symbol);
   if (!derivative) return undefined;
   const order = derivative.evaluate(values);

@@ -12,6 +12,7 @@ import {
   formatAlgebraicText,
   scaleRoot,
 } from '../../../src/engine/exact/index.ts';
+import { apparentOrder } from '../../../src/engine/rate-law/orders.ts';
 import { poly, rf } from './helpers.ts';
 
 const root = (symbol: string, text: string) => {
@@ -99,5 +100,7 @@ describe('laws with radicals: orders from the Newton polygon', () => {
     const law = new AlgebraicFunction(RationalFunction.of(poly('r1')), [root('r1', 'r1^2 + P*r1 - A')]);
     const zero = law.withZero('P')!;
     expect(zero.evaluate(at({ A: 4 }))).toBeCloseTo(2, 14);
+    // ρ = √A once P is gone: order ½ in A at conditions where [P] = 0.
+    expect(apparentOrder(law, 'A', at({ A: 4, P: 0 }))).toBeCloseTo(0.5, 12);
   });
 });
