@@ -31,6 +31,8 @@ export type Expression = Monomial | Polynomial | RationalFunction;
  * (`x^(1/2)`, `x^{1/2}`).
  */
 interface Notation {
+  /** written sums, by polynomial, shared by every call with the same style (see `writtenSums`) */
+  written: Map<string, string>;
   order(a: string, b: string): number;
   weight?: ((m: Monomial) => number) | undefined;
   symbol(s: string): string;
@@ -44,6 +46,7 @@ interface Notation {
 }
 
 const text = (style: SymbolStyle): Notation => ({
+  written: writtenSums(style, 'text'),
   order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
   weight: style.termWeight?.bind(style),
   symbol: (s) => style.text(s),
@@ -60,6 +63,7 @@ const text = (style: SymbolStyle): Notation => ({
 });
 
 const latex = (style: SymbolStyle): Notation => ({
+  written: writtenSums(style, 'latex'),
   order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
   weight: style.termWeight?.bind(style),
   symbol: (s) => style.latex(s),
@@ -104,7 +108,34 @@ function side(p: Polynomial, notation: Notation): string {
   return notation.product([magnitude(sortFactors(fractional, notation), 1n, 1n, notation), notation.group(rest)]);
 }
 
+/**
+ * Sums already written with a style, by polynomial. A derivation writes the same large sums many
+ * times (the King–Altman denominator under every catalyst form's fraction); the memo lives as long
+ * as the style object, and a style is made per mechanism, so nothing is kept between records.
+ */
+const memos = new WeakMap<SymbolStyle, { text: Map<string, string>; latex: Map<string, string> }>();
+
+function writtenSums(style: SymbolStyle, mode: 'text' | 'latex'): Map<string, string> {
+  let memo = memos.get(style);
+  if (!memo) {
+    memo = { text: new Map(), latex: new Map() };
+    memos.set(style, memo);
+  }
+  return memo[mode];
+}
+
 function polynomial(p: Polynomial, notation: Notation): string {
+  if (p.terms.length < 8) return writeSum(p, notation);
+  const key = p.terms.map((t) => `${t.coefficient.toString()}${t.monomial.key}`).join('+');
+  let written = notation.written.get(key);
+  if (written === undefined) {
+    written = writeSum(p, notation);
+    notation.written.set(key, written);
+  }
+  return written;
+}
+
+function writeSum(p: Polynomial, notation: Notation): string {
   if (p.isZero()) return '0';
   // Sort keys are worked out once per term, not inside the comparator (which runs n log n times).
   const weight = notation.weight;
