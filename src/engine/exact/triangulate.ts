@@ -4,7 +4,8 @@ import { content } from './polynomial-content.ts';
 import { Polynomial } from './polynomial.ts';
 import { resultant } from './resultant.ts';
 import { substituteFraction } from './substitute-fraction.ts';
-import { coefficientsIn, definiteSign, degreeInSymbols, monomialContentIn, naturalDegreeIn } from './univariate.ts';
+import { linearPivot, resultantPair, unknownsOf, type Live } from './choose-pivot.ts';
+import { monomialContentIn, naturalDegreeIn } from './univariate.ts';
 import { WorkBudget } from './work-budget.ts';
 
 /**
@@ -47,12 +48,6 @@ export type TriangulationFailure =
   | { kind: 'underdetermined'; symbols: string[] }
   /** an equation in the parameters alone is left over: the system holds only for special constants */
   | { kind: 'inconsistent'; equation: number };
-
-interface Live {
-  polynomial: Polynomial;
-  /** index of the original equation it descends from */
-  origin: number;
-}
 
 /** Eliminates the unknowns of `equations`; `preferLast` names unknowns best kept to the end (those the rate uses). */
 export function triangulate(
@@ -145,61 +140,6 @@ function normalise(e: Live, open: ReadonlySet<string>, steps: EliminationStep[])
   return [{ polynomial, origin: e.origin }];
 }
 
-interface Pivot {
-  equation: Live;
-  symbol: string;
-  a: Polynomial;
-  b: Polynomial;
-}
-
-/**
- * The linear pivot that keeps the other equations smallest: the unknown x and equation a·x + b,
- * scored by how much substituting x = −b/a raises the degrees of the others, a coefficient a of
- * fixed sign first; an unknown the rate uses is kept for last on a tie.
- */
-function linearPivot(
-  live: readonly Live[],
-  open: ReadonlySet<string>,
-  preferLast: ReadonlySet<string>,
-): Pivot | undefined {
-  let best: { pivot: Pivot; cost: number } | undefined;
-  for (const equation of live) {
-    for (const symbol of unknownsOf(equation.polynomial, open)) {
-      const c = coefficientsIn(equation.polynomial, symbol);
-      if (!c || Math.max(...c.keys()) !== 1) continue;
-      const a = c.get(1)!;
-      const b = c.get(0) ?? Polynomial.ZERO;
-      const growth = degreeInSymbols(a, open).add(degreeInSymbols(b, open)).toNumber() + 1;
-      // A coefficient of unknown sign is non-zero only generically: the last choice before a resultant.
-      let cost = (preferLast.has(symbol) ? 0.5 : 0) + (definiteSign(a) === 0 ? 1000 : 0);
-      for (const other of live) {
-        if (other !== equation) cost += (naturalDegreeIn(other.polynomial, symbol) ?? 0) * growth;
-      }
-      cost += (a.terms.length + b.terms.length) * 1e-3;
-      if (!best || cost < best.cost) best = { pivot: { equation, symbol, a, b }, cost };
-    }
-  }
-  return best?.pivot;
-}
-
-/** Two equations sharing an unknown, of the lowest degrees in it: the cheapest resultant. */
-function resultantPair(
-  live: readonly Live[],
-  open: ReadonlySet<string>,
-): { f: Live; g: Live; symbol: string } | undefined {
-  let best: { f: Live; g: Live; symbol: string; cost: number } | undefined;
-  for (const symbol of open) {
-    const holding = live
-      .map((e) => ({ e, d: naturalDegreeIn(e.polynomial, symbol) ?? 0 }))
-      .filter((x) => x.d > 0)
-      .sort((x, y) => x.d - y.d);
-    if (holding.length < 2) continue;
-    const cost = holding[0]!.d * holding[1]!.d;
-    if (!best || cost < best.cost) best = { f: holding[0]!.e, g: holding[1]!.e, symbol, cost };
-  }
-  return best && { f: best.f, g: best.g, symbol: best.symbol };
-}
-
 /** Divides p by a as often as a divides it exactly (a is the cleared denominator of a substitution). */
 function divideOut(p: Polynomial, a: Polynomial, budget: WorkBudget): Polynomial | undefined {
   if (a.isConstant() || p.isZero()) return p;
@@ -210,9 +150,4 @@ function divideOut(p: Polynomial, a: Polynomial, budget: WorkBudget): Polynomial
     if (!q || !q.hasNaturalExponents()) return out;
     out = q;
   }
-}
-
-/** The open unknowns an equation contains, in a fixed order. */
-function unknownsOf(p: Polynomial, open: ReadonlySet<string>): string[] {
-  return [...open].filter((x) => p.terms.some((t) => !t.monomial.exponent(x).isZero()));
 }
