@@ -52,12 +52,12 @@ function reason(why: Exclude<NoClosedForm, { kind: 'budget' }>): string {
   }
 }
 
-export /** The work budget of the exact steady state is spent. */
-function budgetNote(system: SteadyStateSystem, budget: WorkBudget): Diagnostic {
+/** The work budget of the exact steady state is spent. */
+export function budgetNote(system: SteadyStateSystem, budget: WorkBudget): Diagnostic {
   return diagnostic(
     'rate/symbolic-budget',
     'warning',
-    `the exact steady state of ${system.species.length} internal species needs more than ${budget.limit.toLocaleString('en-US')} term products of symbolic work, so no closed-form law is given: the steady state is solved numerically at each observation that gives constants and concentrations`,
+    `the exact steady state of ${system.species.length} internal species needs more than ${budget.limit.toLocaleString('en-US')} weighted term products of symbolic work, so no closed-form law is given: the steady state is solved numerically at each observation that gives constants and concentrations`,
     {
       path: ['steps'],
       note: 'split the mechanism, give the rate-determining step (approximation: rds), or give constants for numeric orders',
