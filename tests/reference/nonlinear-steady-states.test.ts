@@ -12,6 +12,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { recordReport } from '../../src/render/report/record-report.ts';
+import { rateLawLines } from '../../src/render/report/rate-law-text.ts';
 import { acetaldehyde, CATALYST_DIMER, ETHANE, HYDROGEN_BROMINE } from '../helpers/chain-records.ts';
 import { deriveYaml, errorRules } from '../helpers/derive-yaml.ts';
 import { expectLaw } from '../helpers/law-compare.ts';
@@ -77,6 +78,8 @@ steps:
       CH4: '[CH4]',
     });
     expect(orderTable(ss)).toMatchObject({ Cl2: ['1/2', '1/2'], CH4: ['1', '1'], M: ['0', '0'] });
+    // Initiation makes no HCl, so the long-chain law is this one, and the derivation says so.
+    expect(ss.law.trace.at(-1)!.say).toMatch(/long-chain approximation .* gives this same law/);
   });
 
   it('hydrogen–chlorine: half order in Cl2 (a recombination-terminated chain)', () => {
@@ -250,6 +253,10 @@ observations:
     expect(Math.abs(Number(terms['k_1']))).toBe(1);
     expect(law.structure!.numerator[0]!.factors).toMatchObject({ '[CH3CHO]': '3/2', ρ_1: 1 });
     expect(law.orders['CH3CHO']).toEqual({ low: '3/2', high: '3/2' });
+  });
+
+  it('prints the law with radicals in the text report', () => {
+    expect(rateLawLines(d)).toContain('  r = k_2*[CH3CHO]^(3/2)*(k_1 / (2*k_4))^(1/2)');
   });
 
   it('judges the observed order against the law with radicals at its conditions', () => {
