@@ -38,6 +38,7 @@ export type {
   ObservationJson,
   RateLawJson,
   RecordReport,
+  RootJson,
   SimulationJson,
   TermJson,
   VerdictCounts,

@@ -33,12 +33,12 @@ export type Role =
   | 'solvent'
   | 'off_route';
 /**
- * How to derive the rate law: rds (rate-determining step with fast pre-equilibria), steady_state (Bodenstein approximation for every intermediate), both, or auto (rds when a step is marked rds, otherwise steady state).
+ * How to derive the rate law: rds (rate-determining step with fast pre-equilibria), steady_state (Bodenstein approximation for every intermediate), both, auto (rds when a step is marked rds, otherwise steady state; a chain reaction also gets its long-chain law where that differs), or long_chain (the steady state of a chain reaction with long chains: initiation rate = termination rate, and the propagation steps alone fix the ratio of the chain carriers).
  *
  * This interface was referenced by `MechanismRecord`'s JSON-Schema
  * via the `definition` "Approximation".
  */
-export type Approximation = 'auto' | 'rds' | 'steady_state' | 'both';
+export type Approximation = 'auto' | 'rds' | 'steady_state' | 'both' | 'long_chain';
 /**
  * A quantity as written: a number, an optional uncertainty (± u or +/- u) and a unit, e.g. 1.1e-2 M^-1 s^-1, 56 kJ/mol, 298.15 K, 0.98 ± 0.05. A bare number is dimensionless.
  *

@@ -82,8 +82,12 @@ export interface RateLawJson {
   };
   /** the law in named apparent constants: each denominator factor from 1, terms collected by concentration */
   normalised?: NormalisedLawJson;
-  /** the rate law as data: terms of numerator and denominator, each a coefficient and symbol exponents */
-  structure?: { numerator: TermJson[]; denominator: TermJson[] };
+  /**
+   * the rate law as data: terms of numerator and denominator, each a coefficient and symbol
+   * exponents; a law with radicals adds `roots`, and its numerator and denominator then hold the
+   * root symbols too
+   */
+  structure?: { numerator: TermJson[]; denominator: TermJson[]; roots?: RootJson[] };
   /** limits of the apparent order as [X] → 0 (low) and [X] → ∞ (high) */
   orders: Record<string, { low: number | string; high: number | string }>;
   /** solvents whose constant concentration is absorbed into the constants */
@@ -142,6 +146,17 @@ export interface NormalisedTermJson {
   power: number | string;
   sign: 1 | -1;
   factors: Record<string, number | string>;
+}
+
+/** A root symbol of a law with radicals: the one positive root of a polynomial in it, and its closed form. */
+export interface RootJson {
+  /** the symbol as it appears in the structure's terms, e.g. `ρ_1` */
+  symbol: string;
+  /** the polynomial (in the symbol, constants and concentrations) whose one positive root it is */
+  polynomial: TermJson[];
+  /** the root written out, plain text and LaTeX */
+  closed_form: string;
+  closed_form_latex: string;
 }
 
 export interface TermJson {

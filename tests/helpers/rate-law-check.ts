@@ -6,6 +6,7 @@ import { expect } from 'vitest';
 import type { RationalFunction } from '../../src/engine/exact/index.ts';
 import type { Derivation } from '../../src/engine/derive.ts';
 import type { DerivedRateLaw } from '../../src/engine/rate-law/derive-rate-laws.ts';
+import type { RateLawMethod } from '../../src/engine/rate-law/rate-law.ts';
 
 /** Reads one symbol's value; throws on a symbol the formula did not declare (a typo in the test). */
 export type Lookup = (symbol: string) => number;
@@ -76,7 +77,7 @@ export function orderTable(derived: DerivedRateLaw): Record<string, [string, str
 }
 
 /** The one rate law of a method, failing when it is missing. */
-export function lawBy(d: Derivation, method: 'rds' | 'steady_state'): DerivedRateLaw {
+export function lawBy(d: Derivation, method: RateLawMethod): DerivedRateLaw {
   const found = d.rateLaws?.find((r) => r.law.method === method);
   if (!found) throw new Error(`no ${method} rate law: ${JSON.stringify(d.diagnostics)}`);
   return found;

@@ -11,7 +11,7 @@
 import { describe, expect, it } from 'vitest';
 import { apparentOrder } from '../../src/engine/rate-law/orders.ts';
 import { solveSteadyStateNumeric } from '../../src/engine/rate-law/steady-state-numeric.ts';
-import { deriveYaml, errorRules } from '../helpers/derive-yaml.ts';
+import { deriveYaml, errorRules, steadyStateEquations } from '../helpers/derive-yaml.ts';
 import {
   constantTokens,
   expectSameLaw,
@@ -393,7 +393,7 @@ ${observations}`;
     return (k2 * Br * H2 * k3 * Br2) / (k3 * Br2 + k4 * HBr);
   };
 
-  it('initial rates ([HBr] = 0): first order in H2, half order in Br2', () => {
+  it('initial rates ([HBr] = 0): first order in H2, half order in Br2, from the closed form', () => {
     const d = deriveYaml(
       chain(`  - id: initial
     concentrations: { H2: 0.10 M, Br2: 0.05 M }
@@ -402,15 +402,22 @@ ${observations}`;
     );
     expect(errorRules(d)).toEqual([]);
     const ss = lawBy(d, 'steady_state');
-    expect(ss.law.expression).toBeUndefined();
-    expect(ss.law.nonlinear).toBeDefined();
+    // The same law written symbolically (the hand derivation above): exact, with half powers.
+    expectSameLaw(ss.law.expression, {
+      symbols: ['k_1', 'k_2', 'k_3', 'k_4', 'k_5', '[H2]', '[Br2]', '[HBr]'],
+      rate: (v) =>
+        (v('k_2') * Math.sqrt((v('k_1') * v('[Br2]')) / v('k_5')) * v('[H2]') * v('k_3') * v('[Br2]')) /
+        (v('k_3') * v('[Br2]') + v('k_4') * v('[HBr]')),
+    });
+    // Limits: [Br2]^(3/2)/(k_3[Br2] + k_4[HBr]) goes from 3/2 (much HBr) to 1/2; HBr from 0 to −1.
+    expect(orderTable(ss)).toEqual({ Br2: ['3/2', '1/2'], H2: ['1', '1'], HBr: ['0', '-1'] });
     const predicted = Object.fromEntries(d.observations!.map((o) => [o.species, o.predicted]));
     expect(predicted['H2']).toBeCloseTo(1, 3);
     expect(predicted['Br2']).toBeCloseTo(0.5, 3);
     expect(d.observations!.every((o) => o.status === 'pass')).toBe(true);
   });
 
-  it('with HBr present: the numeric steady state matches Bodenstein–Lind, order in HBr negative', () => {
+  it('with HBr present: the closed form and the numeric steady state match Bodenstein–Lind', () => {
     const d = deriveYaml(
       chain(`  - id: inhibited
     concentrations: { H2: 0.10 M, Br2: 0.05 M, HBr: 0.20 M }
@@ -418,7 +425,8 @@ ${observations}`;
 `),
     );
     expect(errorRules(d)).toEqual([]);
-    const system = lawBy(d, 'steady_state').law.nonlinear!;
+    const law = lawBy(d, 'steady_state').law.expression!;
+    const system = steadyStateEquations(d);
     const { k1, k2, k3, k4, k5 } = constants;
     for (const [H2, Br2, HBr] of [
       [0.1, 0.05, 0],
@@ -442,6 +450,7 @@ ${observations}`;
         relativelyClose(solved!.rate, bodensteinLind(H2, Br2, HBr), 1e-8),
         `rate ${solved!.rate} vs ${bodensteinLind(H2, Br2, HBr)}`,
       ).toBe(true);
+      expect(relativelyClose(law.evaluate(values), bodensteinLind(H2, Br2, HBr), 1e-12)).toBe(true);
     }
     // Independent: with x = k_4[HBr]/(k_3[Br2]), the order in HBr is −x/(1 + x) and in Br2 ½ + x/(1 + x).
     const x = (k4 * 0.2) / (k3 * 0.05);

@@ -1,6 +1,7 @@
-import type { Rational } from './rational.ts';
+import { Rational } from './rational.ts';
+import { monomialContent } from './polynomial-content.ts';
 import { compareSymbols, Monomial, type Factor } from './monomial.ts';
-import { Polynomial, type Term } from './polynomial.ts';
+import { Polynomial } from './polynomial.ts';
 import { RationalFunction } from './rational-function.ts';
 
 /** How the caller wants each symbol written (e.g. `K1` → `K_{1}`, `S` → `[\mathrm{S}]`). */
@@ -30,17 +31,22 @@ export type Expression = Monomial | Polynomial | RationalFunction;
  * (`x^(1/2)`, `x^{1/2}`).
  */
 interface Notation {
+  /** written sums, by polynomial, shared by every call with the same style (see `writtenSums`) */
+  written: Map<string, string>;
   order(a: string, b: string): number;
   weight?: ((m: Monomial) => number) | undefined;
   symbol(s: string): string;
   power(base: string, exponent: Rational): string;
   product(factors: string[]): string;
+  /** a sum in brackets, as one factor of a product */
+  group(sum: string): string;
   quotient(num: string, den: string, denFactors: number): string;
   /** Top-level fraction of two polynomials, each with its number of terms. */
   fraction(num: string, numTerms: number, den: string, denTerms: number): string;
 }
 
 const text = (style: SymbolStyle): Notation => ({
+  written: writtenSums(style, 'text'),
   order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
   weight: style.termWeight?.bind(style),
   symbol: (s) => style.text(s),
@@ -50,18 +56,21 @@ const text = (style: SymbolStyle): Notation => ({
     return e.isInteger() ? `${b}^${e}` : `${b}^(${e})`;
   },
   product: (factors) => factors.join('*'),
+  group: (sum) => `(${sum})`,
   quotient: (num, den, denFactors) => `${num}/${denFactors > 1 ? `(${den})` : den}`,
   fraction: (num, numTerms, den, denTerms) =>
     `${numTerms > 1 || num.includes('/') ? `(${num})` : num} / ${denTerms > 1 || /[*/]/.test(den) ? `(${den})` : den}`,
 });
 
 const latex = (style: SymbolStyle): Notation => ({
+  written: writtenSums(style, 'latex'),
   order: (a, b) => style.compare?.(a, b) ?? compareSymbols(a, b),
   weight: style.termWeight?.bind(style),
   symbol: (s) => style.latex(s),
   // A base that already has a superscript (a charge, say) is braced to avoid a double superscript.
   power: (base, e) => `${base.includes('^') ? `{${base}}` : base}^{${e}}`,
   product: (factors) => factors.join(' '),
+  group: (sum) => `\\left(${sum}\\right)`,
   quotient: (num, den) => `\\frac{${num}}{${den}}`,
   fraction: (num, numTerms, den) =>
     numTerms === 1 && num.startsWith('-') ? `-\\frac{${num.slice(1)}}{${den}}` : `\\frac{${num}}{${den}}`,
@@ -78,44 +87,82 @@ export function formatLatex(value: Expression, style: SymbolStyle = defaultSymbo
 }
 
 function formatWith(value: Expression, notation: Notation): string {
-  if (value instanceof Monomial) return magnitude(value, 1n, 1n, notation);
+  if (value instanceof Monomial) return magnitude(sortFactors(value, notation), 1n, 1n, notation);
   if (value instanceof Polynomial) return polynomial(value, notation);
   const whole = value.toPolynomial();
   if (whole) return polynomial(whole, notation);
-  const num = polynomial(value.numerator, notation);
-  const den = polynomial(value.denominator, notation);
+  const num = side(value.numerator, notation);
+  const den = side(value.denominator, notation);
   return notation.fraction(num, value.numerator.terms.length, den, value.denominator.terms.length);
 }
 
+/**
+ * One side of a fraction. A fractional power common to every term (k_5^(1/2) from a radical) is
+ * written once in front, `k_5^(1/2)*(k_3*[Br2] + k_4*[HBr])`, as a kineticist would factor it.
+ */
+function side(p: Polynomial, notation: Notation): string {
+  const common = p.terms.length > 1 ? monomialContent(p) : Monomial.ONE;
+  const fractional = Monomial.fromFactors(common.factors.filter(([, e]) => !e.isInteger()));
+  if (fractional.isOne()) return polynomial(p, notation);
+  const rest = polynomial(p.mulTerm(Rational.ONE, Monomial.ONE.div(fractional)), notation);
+  return notation.product([magnitude(sortFactors(fractional, notation), 1n, 1n, notation), notation.group(rest)]);
+}
+
+/**
+ * Sums already written with a style, by polynomial. A derivation writes the same large sums many
+ * times (the King–Altman denominator under every catalyst form's fraction); the memo lives as long
+ * as the style object, and a style is made per mechanism, so nothing is kept between records.
+ */
+const memos = new WeakMap<SymbolStyle, { text: Map<string, string>; latex: Map<string, string> }>();
+
+function writtenSums(style: SymbolStyle, mode: 'text' | 'latex'): Map<string, string> {
+  let memo = memos.get(style);
+  if (!memo) {
+    memo = { text: new Map(), latex: new Map() };
+    memos.set(style, memo);
+  }
+  return memo[mode];
+}
+
 function polynomial(p: Polynomial, notation: Notation): string {
+  if (p.terms.length < 8) return writeSum(p, notation);
+  const key = p.terms.map((t) => `${t.coefficient.toString()}${t.monomial.key}`).join('+');
+  let written = notation.written.get(key);
+  if (written === undefined) {
+    written = writeSum(p, notation);
+    notation.written.set(key, written);
+  }
+  return written;
+}
+
+function writeSum(p: Polynomial, notation: Notation): string {
   if (p.isZero()) return '0';
-  const ordered = p.terms.map((t) => ({ t, factors: sortFactors(t.monomial, notation) }));
+  // Sort keys are worked out once per term, not inside the comparator (which runs n log n times).
   const weight = notation.weight;
+  const ordered = p.terms.map((t) => ({
+    t,
+    factors: sortFactors(t.monomial, notation),
+    weight: weight ? weight(t.monomial) : 0,
+  }));
   ordered.sort(
     (a, b) =>
-      (weight
-        ? weight(a.t.monomial) - weight(b.t.monomial)
-        : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) || compareFactors(a.factors, b.factors, notation),
+      (weight ? a.weight - b.weight : b.t.monomial.totalDegree.compare(a.t.monomial.totalDegree)) ||
+      compareFactors(a.factors, b.factors, notation),
   );
   return ordered
-    .map(({ t }, i) => {
+    .map(({ t, factors }, i) => {
       const sign = t.coefficient.sign() < 0 ? '-' : '+';
-      const body = term(t, notation);
+      const c = t.coefficient.abs();
+      const body = magnitude(factors, c.num, c.den, notation);
       return i === 0 ? (sign === '-' ? `-${body}` : body) : ` ${sign} ${body}`;
     })
     .join('');
 }
 
-function term(t: Term, notation: Notation): string {
-  const c = t.coefficient.abs();
-  return magnitude(t.monomial, c.num, c.den, notation);
-}
-
 /** (num/den)·monomial without its sign: positive powers above the bar, negative ones below. */
-function magnitude(m: Monomial, num: bigint, den: bigint, notation: Notation): string {
+function magnitude(factors: readonly Factor[], num: bigint, den: bigint, notation: Notation): string {
   const factor = (s: string, e: Rational): string =>
     e.isInteger() && e.num === 1n ? notation.symbol(s) : notation.power(notation.symbol(s), e);
-  const factors = sortFactors(m, notation);
   const above = factors.filter(([, e]) => e.sign() > 0).map(([s, e]) => factor(s, e));
   const below = factors.filter(([, e]) => e.sign() < 0).map(([s, e]) => factor(s, e.neg()));
   if (num !== 1n || above.length === 0) above.unshift(num.toString());

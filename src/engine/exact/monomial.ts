@@ -12,15 +12,23 @@ export type Factor = readonly [symbol: string, exponent: Rational];
 export class Monomial {
   static readonly ONE = new Monomial([]);
 
-  /** Canonical text of the factors: equal monomials, and only they, have equal keys. */
-  readonly key: string;
-  /** Sum of the exponents. */
-  readonly totalDegree: Rational;
+  // Worked out on first use: most intermediate products of an elimination never need them.
+  private cachedKey: string | undefined;
+  private cachedDegree: Rational | undefined;
 
-  private constructor(readonly factors: readonly Factor[]) {
+  private constructor(readonly factors: readonly Factor[]) {}
+
+  /** Canonical text of the factors: equal monomials, and only they, have equal keys. */
+  get key(): string {
     // JSON quoting keeps the key unambiguous whatever characters a symbol holds.
-    this.key = factors.map(([s, e]) => `${JSON.stringify(s)}^${e.toString()}`).join('*');
-    this.totalDegree = factors.reduce((sum, [, e]) => sum.add(e), Rational.ZERO);
+    this.cachedKey ??= this.factors.map(([s, e]) => `${JSON.stringify(s)}^${e.toString()}`).join('*');
+    return this.cachedKey;
+  }
+
+  /** Sum of the exponents. */
+  get totalDegree(): Rational {
+    this.cachedDegree ??= this.factors.reduce((sum, [, e]) => sum.add(e), Rational.ZERO);
+    return this.cachedDegree;
   }
 
   /** symbol^exponent, exponent 1 by default (a number is read exactly as a double: pass 1/3 as a Rational). */

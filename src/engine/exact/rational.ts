@@ -58,13 +58,17 @@ export class Rational {
       : Rational.of(sign * mantissa, 1n << BigInt(-exponent));
   }
 
+  // Integers (most exponents and coefficients) skip the gcd of the normalising constructor.
   add(o: Rational): Rational {
+    if (this.den === 1n && o.den === 1n) return new Rational(this.num + o.num, 1n);
     return Rational.of(this.num * o.den + o.num * this.den, this.den * o.den);
   }
   sub(o: Rational): Rational {
+    if (this.den === 1n && o.den === 1n) return new Rational(this.num - o.num, 1n);
     return Rational.of(this.num * o.den - o.num * this.den, this.den * o.den);
   }
   mul(o: Rational): Rational {
+    if (this.den === 1n && o.den === 1n) return new Rational(this.num * o.num, 1n);
     return Rational.of(this.num * o.num, this.den * o.den);
   }
   div(o: Rational): Rational {
@@ -80,7 +84,7 @@ export class Rational {
     return Rational.of(this.den, this.num);
   }
   compare(o: Rational): -1 | 0 | 1 {
-    const d = this.num * o.den - o.num * this.den;
+    const d = this.den === o.den ? this.num - o.num : this.num * o.den - o.num * this.den;
     return d < 0n ? -1 : d > 0n ? 1 : 0;
   }
   equals(o: Rational): boolean {

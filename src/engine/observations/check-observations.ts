@@ -14,11 +14,11 @@ import {
 } from './judge-order.ts';
 import { orderBounds } from './order-bounds.ts';
 import type { RateLawContext } from '../rate-law/context.ts';
-import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
+import { lawExpression, type DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
 import { observationValues } from '../rate-law/numeric-values.ts';
 import { numericOrderAt } from '../rate-law/numeric-order.ts';
-import { apparentOrder, orderLimitsOf, withAbsent } from '../rate-law/orders.ts';
-import type { RationalFunction } from '../exact/index.ts';
+import { apparentOrder, orderLimitsOf, withAbsent, type RateExpression } from '../rate-law/orders.ts';
+import { RationalFunction } from '../exact/index.ts';
 import type { OrderRange } from '../rate-law/rate-law.ts';
 import { restingStates, type RestingState } from '../rate-law/resting-state.ts';
 
@@ -27,8 +27,8 @@ function lawAt(
   derived: DerivedRateLaw,
   symbol: string,
   values: ReadonlyMap<string, number>,
-): RationalFunction | undefined {
-  const expression = derived.presented?.expression;
+): RateExpression | undefined {
+  const expression = lawExpression(derived);
   if (!expression) return undefined;
   const absent = expression.symbols().filter((s) => values.get(s) === 0 && s !== symbol);
   return withAbsent(expression, absent);
@@ -38,7 +38,7 @@ function lawAt(
 function limitsAt(
   derived: DerivedRateLaw,
   species: string,
-  law: RationalFunction | undefined,
+  law: RateExpression | undefined,
   symbol: string,
 ): OrderRange | undefined {
   return (law && orderLimitsOf(law, [{ species, symbol }]).get(species)) ?? derived.orders.get(species);
@@ -125,12 +125,18 @@ function predict(
   const law = lawAt(derived, symbol, values);
   const limits = limitsAt(derived, species, law, symbol);
   if (limits) prediction.limits = limits;
-  if (law) prediction.bounds = orderBounds(law, symbol);
-  const at = derived.law.expression
-    ? apparentOrder(derived.law.expression, symbol, values, limits?.low.toNumber())
+  if (law instanceof RationalFunction) prediction.bounds = orderBounds(law, symbol);
+  else if (law) {
+    // A law with radicals: its orders at the limits are exact, but no bound between them is worked out.
+    prediction.bounds = 'unbounded';
+    prediction.openReason = 'the law holds a radical, so without constants only its limiting orders are known';
+  }
+  const exact = derived.law.expression ?? derived.algebraic?.expression;
+  const at = exact
+    ? apparentOrder(exact, symbol, values, limits?.low.toNumber())
     : derived.law.nonlinear && numericOrderAt(derived.law.nonlinear, symbol, values);
   if (typeof at === 'number' && Number.isFinite(at)) prediction.atConditions = at;
-  else if (!derived.law.expression)
+  else if (!exact)
     prediction.missing =
       'the steady state has no closed form, so the order comes only from solving it numerically at these conditions, which needs every rate constant and concentration';
   return prediction;

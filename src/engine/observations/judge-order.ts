@@ -45,6 +45,8 @@ export interface Prediction {
   bounds?: [Rational, Rational] | 'unbounded';
   /** why nothing could be predicted */
   missing?: string;
+  /** why the constants leave the order open where `bounds` is 'unbounded' */
+  openReason?: string;
 }
 
 /** Compares one observed order with its prediction. */
@@ -76,7 +78,7 @@ export function judgeOrder(
       ...base,
       basis: 'limits',
       status: 'not_excluded',
-      reason: 'the law has terms of both signs, so without constants it allows any order',
+      reason: prediction.openReason ?? 'the law has terms of both signs, so without constants it allows any order',
       ...shown,
     };
   return { ...base, basis: 'none', status: 'unknown', reason: prediction.missing ?? 'no rate law predicts it' };
@@ -133,7 +135,9 @@ export function observationIndex(record: MechanismRecord): Map<string, number> {
 }
 
 function lawWords(check: ObservationCheck): string {
-  return `${check.method === 'rds' ? 'rate-determining-step' : 'steady-state'} rate law`;
+  const method =
+    check.method === 'rds' ? 'rate-determining-step' : check.method === 'long_chain' ? 'long-chain' : 'steady-state';
+  return `${method} rate law`;
 }
 
 function round(x: number): number {

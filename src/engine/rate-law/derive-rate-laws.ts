@@ -10,21 +10,25 @@ import { rateLawContext, type RateLawContext } from './context.ts';
 import { formatterFor, type Formatter } from './formatter.ts';
 import { normaliseLaw } from './normalise-law.ts';
 import type { NormalisedLaw } from './normalised-law.ts';
-import { orderLimitsOf, orderSymbols, withAbsent } from './orders.ts';
+import { hasPositiveNumerator, orderLimitsOf, orderSymbols, withAbsent, type RateExpression } from './orders.ts';
+import { presentAlgebraicLaw, type PresentedAlgebraicLaw } from './present-algebraic.ts';
 import { RationalFunction } from '../exact/index.ts';
 import { eliminateByPreEquilibria } from './pre-equilibrium.ts';
 import { presentLaw, type PresentedLaw } from './present.ts';
 import type { OrderRange, RateLaw, RateLawMethod } from './rate-law.ts';
 import type { RestingState } from './resting-state.ts';
+import { longChainRateLaw } from './long-chain.ts';
 import { steadyStateRateLaw } from './steady-state.ts';
 import { concentration } from './symbols.ts';
 
 export interface DerivedRateLaw {
   law: RateLaw;
-  /** absent for a nonlinear steady state, which is solved numerically */
+  /** absent for a law with radicals, and for a nonlinear steady state solved numerically */
   presented?: PresentedLaw;
   /** the law in named apparent constants (k_obs, K_X; k_cat, K_M … for an enzyme-like shape) */
   normalised?: NormalisedLaw;
+  /** a law with radicals (a nonlinear steady state in closed form), written out */
+  algebraic?: PresentedAlgebraicLaw;
   orders: Map<string, OrderRange>;
   /** the dominant catalyst form at each observation's conditions, where constants allow */
   restingStates: (RestingState & { observation: string })[];
@@ -85,26 +89,48 @@ export function deriveRateLaws(
   }
   const symbols = orderSymbols(context);
   const rateLaws: DerivedRateLaw[] = [];
-  for (const method of methods) {
-    if (method === 'rds' && (!rds || (sigma[rds.index] ?? 0) === 0)) continue;
-    const result = method === 'rds' ? eliminateByPreEquilibria(context, rds!, fmt) : steadyStateRateLaw(context, fmt);
-    diagnostics.push(...result.diagnostics);
-    if (!result.law) continue;
-    const law = result.law;
+  const finish = (law: RateLaw): DerivedRateLaw => {
     law.pools = context.conservations.map((c) => ({
       total: c.total,
       species: c.species,
       weights: c.weights.map((w) => w.toNumber()),
     }));
-    if (!law.expression) {
-      rateLaws.push({ law, orders: new Map(), restingStates: [] });
-      continue;
+    if (law.algebraic) {
+      const algebraic = presentAlgebraicLaw(law.algebraic, fmt);
+      law.absorbed = context.solvents.filter((s) => law.algebraic!.symbols().includes(concentration(s)));
+      return { law, algebraic, orders: reportedOrders(law.algebraic, symbols, roles), restingStates: [] };
     }
+    if (!law.expression) return { law, orders: new Map(), restingStates: [] };
     const presented = presentLaw(law.expression, context.solvents, fmt, constants);
     law.absorbed = context.solvents.filter((s) => law.expression!.symbols().includes(concentration(s)));
     const orders = reportedOrders(presented.expression, symbols, roles);
     const normalised = normalisedForm(law, context, fmt, constants);
-    rateLaws.push({ law, presented, ...(normalised && { normalised }), orders, restingStates: [] });
+    return { law, presented, ...(normalised && { normalised }), orders, restingStates: [] };
+  };
+  for (const method of methods) {
+    if (method === 'rds' && (!rds || (sigma[rds.index] ?? 0) === 0)) continue;
+    const result =
+      method === 'rds'
+        ? eliminateByPreEquilibria(context, rds!, fmt)
+        : method === 'long_chain'
+          ? longChainRateLaw(context, fmt, true)
+          : steadyStateRateLaw(context, fmt);
+    diagnostics.push(...result.diagnostics);
+    if (result.law) rateLaws.push(finish(result.law));
+  }
+  // A chain also gets its long-chain law, where that says something the exact steady state does not.
+  const exact = rateLaws.find((r) => r.law.method === 'steady_state');
+  if (exact && approximation !== 'long_chain') {
+    const offered = longChainRateLaw(context, fmt, false).law;
+    if (offered && sameLaw(offered, exact.law)) {
+      exact.law.trace.push({
+        say: 'the long-chain approximation (initiation = termination, propagation alone for the carriers) gives this same law',
+        text: 'r_long-chain = r',
+        latex: 'r_{\\text{long chain}} = r',
+      });
+    } else if (offered && (offered.expression || offered.algebraic)) {
+      rateLaws.push(finish(offered));
+    }
   }
   return { context, rateLaws, symbols, roles: confirmInhibitors(route.roles, offRoute, rateLaws[0]), diagnostics };
 }
@@ -118,12 +144,12 @@ export function deriveRateLaws(
  * Each observation takes out its own absent species (check-observations.ts).
  */
 function reportedOrders(
-  expression: RationalFunction,
+  expression: RateExpression,
   symbols: readonly { species: string; symbol: string }[],
   roles: ReadonlyMap<string, Role>,
 ): Map<string, OrderRange> {
   const orders = orderLimitsOf(expression, symbols);
-  if (expression.numerator.terms.every((t) => t.coefficient.sign() > 0)) return orders;
+  if (hasPositiveNumerator(expression)) return orders;
   const products = symbols.filter((s) => roles.get(s.species) === 'product').map((s) => s.symbol);
   const initial = withAbsent(expression, products);
   for (const [species, range] of orderLimitsOf(
@@ -162,9 +188,24 @@ function normalisedForm(
 
 function chooseMethods(approximation: string, hasRds: boolean): RateLawMethod[] {
   if (approximation === 'rds') return ['rds'];
+  if (approximation === 'long_chain') return ['long_chain'];
   if (approximation === 'steady_state') return ['steady_state'];
   if (approximation === 'both') return hasRds ? ['rds', 'steady_state'] : ['steady_state'];
   return hasRds ? ['rds'] : ['steady_state'];
+}
+
+/** Two exact laws that are the same function (a law with radicals: the same outer function and roots). */
+function sameLaw(a: RateLaw, b: RateLaw): boolean {
+  if (a.expression && b.expression) return a.expression.equals(b.expression);
+  if (a.algebraic && b.algebraic) {
+    const [x, y] = [a.algebraic, b.algebraic];
+    return (
+      x.outer.equals(y.outer) &&
+      x.roots.length === y.roots.length &&
+      x.roots.every((r, i) => r.symbol === y.roots[i]!.symbol && r.polynomial.equals(y.roots[i]!.polynomial))
+    );
+  }
+  return false;
 }
 
 /** A net-zero binder off the route with a negative order in the rate law is an inhibitor. */
@@ -180,4 +221,9 @@ function confirmInhibitors(
     if (order && (order.low.sign() < 0 || order.high.sign() < 0)) out.set(sp, 'inhibitor');
   }
   return out;
+}
+
+/** The exact law of a derived rate law, rational or with radicals; undefined where it is numeric only. */
+export function lawExpression(derived: DerivedRateLaw): RateExpression | undefined {
+  return derived.presented?.expression ?? derived.algebraic?.expression;
 }

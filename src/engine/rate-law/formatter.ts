@@ -1,5 +1,16 @@
 /** Writes expressions of one mechanism's rate laws consistently, in text and LaTeX. */
-import { formatLatex, formatText, type Expression, type SymbolStyle } from '../exact/index.ts';
+import {
+  formatAlgebraicLatex,
+  formatAlgebraicText,
+  formatLatex,
+  formatText,
+  radicalLatex,
+  radicalText,
+  type AlgebraicFunction,
+  type Radical,
+  type Expression,
+  type SymbolStyle,
+} from '../exact/index.ts';
 import type { Mechanism } from '../mechanism/mechanism.ts';
 import type { TraceLine } from './rate-law.ts';
 import { rateLawStyle } from './symbols.ts';
@@ -8,6 +19,11 @@ export interface Formatter {
   style: SymbolStyle;
   text(e: Expression): string;
   latex(e: Expression): string;
+  /** a law with radicals, the closed forms of its roots inline */
+  algebraicText(f: AlgebraicFunction): string;
+  algebraicLatex(f: AlgebraicFunction): string;
+  /** a closed form with radicals */
+  radical(r: Radical): { text: string; latex: string };
   /** a trace line "left = right" */
   line(say: string, left: [string, string], right: Expression): TraceLine;
 }
@@ -24,6 +40,9 @@ export function formatterFor(mechanism: Mechanism): Formatter {
     style,
     text,
     latex,
+    algebraicText: (f) => formatAlgebraicText(f, style),
+    algebraicLatex: (f) => formatAlgebraicLatex(f, style),
+    radical: (r) => ({ text: radicalText(r, style), latex: radicalLatex(r, style) }),
     line: (say, [leftText, leftLatex], right) => ({
       say,
       text: `${leftText} = ${text(right)}`,

@@ -6,12 +6,20 @@
 import { Polynomial } from '../exact/index.ts';
 import { netOverRoute } from '../route/overall-equation.ts';
 import { Rational } from '../exact/rational.ts';
+import type { Step } from '../mechanism/mechanism.ts';
 import type { RateLawContext } from './context.ts';
-import { netRate } from './mass-action.ts';
+import { forwardRate, netRate, reverseRate } from './mass-action.ts';
 
-/** The overall rate as a polynomial in constants and concentrations, and the species it is read from. */
+/** Which one-way parts of the steps count towards the rate (all of them by default). */
+export type StepFilter = (step: Step, direction: 'forward' | 'reverse') => boolean;
+
+/**
+ * The overall rate as a polynomial in constants and concentrations, and the species it is read
+ * from; `include` keeps only some one-way steps (the long-chain approximation keeps propagation).
+ */
 export function overallRatePolynomial(
   context: RateLawContext,
+  include?: StepFilter,
 ): { species: string; polynomial: Polynomial } | undefined {
   const { mechanism, sigma, internal, solvents } = context;
   const net = netOverRoute(mechanism, sigma);
@@ -21,8 +29,12 @@ export function overallRatePolynomial(
   const chosen = ranked[0];
   if (!chosen) return undefined;
   const [species, nu] = chosen;
-  const formation = Polynomial.sum(
-    mechanism.steps.map((s) => netRate(s).scale(s.change.get(species) ?? Rational.ZERO)),
-  );
+  const rateOf = (s: Step) =>
+    include
+      ? (include(s, 'forward') ? forwardRate(s) : Polynomial.ZERO).sub(
+          include(s, 'reverse') ? reverseRate(s) : Polynomial.ZERO,
+        )
+      : netRate(s);
+  const formation = Polynomial.sum(mechanism.steps.map((s) => rateOf(s).scale(s.change.get(species) ?? Rational.ZERO)));
   return { species, polynomial: formation.scale(nu.inverse()) };
 }

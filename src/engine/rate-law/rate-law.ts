@@ -1,8 +1,9 @@
 /** What a rate-law derivation produces, whichever method made it. */
-import type { Polynomial, RationalFunction } from '../exact/index.ts';
+import type { AlgebraicFunction, Polynomial, RationalFunction } from '../exact/index.ts';
 import type { Rational } from '../exact/rational.ts';
 
-export type RateLawMethod = 'rds' | 'steady_state';
+/** `long_chain`: the steady state of a chain under the long-chain approximation (long-chain.ts). */
+export type RateLawMethod = 'rds' | 'steady_state' | 'long_chain';
 
 /** One line of a derivation, in words and in LaTeX. */
 export interface TraceLine {
@@ -35,6 +36,8 @@ export interface RateLaw {
   method: RateLawMethod;
   /** the exact rate of the overall reaction; absent when only a numeric solution exists */
   expression?: RationalFunction;
+  /** the exact rate where it has radicals (a nonlinear steady state); `expression` is then absent */
+  algebraic?: AlgebraicFunction;
   nonlinear?: NonlinearSystem;
   /** solvent concentrations that stay constant and are absorbed into the constants */
   absorbed: string[];

@@ -40,20 +40,16 @@ export function symbolMeaning(symbol: string): SymbolMeaning | undefined {
  * concentrations by the order species first appear in the mechanism.
  */
 export function rateLawStyle(stepLabels: readonly string[], speciesOrder: readonly string[]): SymbolStyle {
-  // Sorting and writing ask for the same few symbols again and again: each is worked out once.
+  // Comparators and term weights run many times per symbol: read each symbol's meaning once.
   const ranks = new Map<string, [number, number, number]>();
   const latex = new Map<string, string>();
   const rank = (symbol: string): [number, number, number] => {
     let r = ranks.get(symbol);
-    if (!r) ranks.set(symbol, (r = rankOf(symbol)));
+    if (r === undefined) {
+      r = rankOf(symbolMeaning(symbol), stepLabels, speciesOrder);
+      ranks.set(symbol, r);
+    }
     return r;
-  };
-  const rankOf = (symbol: string): [number, number, number] => {
-    const m = symbolMeaning(symbol);
-    if (!m) return [9, 0, 0];
-    if (m.kind === 'constant')
-      return [0, indexOr(stepLabels, m.label), m.which === 'k' ? 0 : m.which === 'k_rev' ? 1 : 2];
-    return [1, indexOr(speciesOrder, m.species), m.kind === 'total' ? 1 : 0];
   };
   return {
     text: (s) => s,
@@ -67,9 +63,20 @@ export function rateLawStyle(stepLabels: readonly string[], speciesOrder: readon
       return x[0] - y[0] || x[1] - y[1] || x[2] - y[2] || (a < b ? -1 : a > b ? 1 : 0);
     },
     // Sums read from the constant term up: 1 + K_1[S], k_-1 + k_2 + k_1[S].
-    termWeight: (m) =>
-      m.factors.reduce((n, [s, e]) => (symbolMeaning(s)?.kind === 'constant' ? n : n + e.toNumber()), 0),
+    termWeight: (m) => m.factors.reduce((n, [s, e]) => (rank(s)[0] === 0 ? n : n + e.toNumber()), 0),
   };
+}
+
+/** Constants first (by step, then k, k_rev, K), then concentrations by species (free before total). */
+function rankOf(
+  m: SymbolMeaning | undefined,
+  stepLabels: readonly string[],
+  speciesOrder: readonly string[],
+): [number, number, number] {
+  if (!m) return [9, 0, 0];
+  if (m.kind === 'constant')
+    return [0, indexOr(stepLabels, m.label), m.which === 'k' ? 0 : m.which === 'k_rev' ? 1 : 2];
+  return [1, indexOr(speciesOrder, m.species), m.kind === 'total' ? 1 : 0];
 }
 
 /** LaTeX of one symbol: `k_{-1}`, `K_{\mathrm{bind}}`, `[\mathrm{H_2O_2}]`, `[\mathrm{E}]_\mathrm{T}`. */

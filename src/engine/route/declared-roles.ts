@@ -26,6 +26,10 @@ export function declaredMismatches(
     if (!declared || declared === derived) continue;
     // An inhibitor is confirmed only by a negative order in the rate law, after the roles.
     if (declared === 'inhibitor' && INHIBITOR_CANDIDATES.has(derived)) continue;
+    // A declared intermediate only has to cancel on the route; one that is made and used only off
+    // it (a chain's initiation radical, a dead-end complex) does, so the declaration holds and the
+    // species keeps the role the route gives it.
+    if (declared === 'intermediate' && derived === 'off_route') continue;
     const why = reason(derived, net.get(symbol), unhonoured.get(symbol));
     out.push(
       diagnostic(

@@ -7,7 +7,9 @@
  */
 import type { Observation } from '../../model/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
-import type { DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
+import { lawExpression, type DerivedRateLaw } from '../rate-law/derive-rate-laws.ts';
+import { rateValue } from '../rate-law/orders.ts';
+import type { RateLawMethod } from '../rate-law/rate-law.ts';
 import { solveSteadyStateNumeric } from '../rate-law/steady-state-numeric.ts';
 import { concentration } from '../rate-law/symbols.ts';
 import { explainFailure } from './explain-failure.ts';
@@ -26,7 +28,7 @@ export interface SimulationCheck {
   /** time at which the initial rate was read, in s */
   time?: number;
   orders: Record<string, number>;
-  approximationError: Partial<Record<'rds' | 'steady_state', number>>;
+  approximationError: Partial<Record<RateLawMethod, number>>;
 }
 
 /** Simulates every observation that has constants and concentrations. */
@@ -95,7 +97,12 @@ export function checkApproximations(
 }
 
 function describe(derived: DerivedRateLaw): string {
-  return derived.law.method === 'rds' ? 'the rate-determining-step rate law' : 'the steady-state rate law';
+  const method = derived.law.method;
+  return method === 'rds'
+    ? 'the rate-determining-step rate law'
+    : method === 'long_chain'
+      ? 'the long-chain rate law'
+      : 'the steady-state rate law';
 }
 
 /** Apparent orders by simulation: central log–log slope over starting concentrations × 1.05^±1. */
@@ -134,12 +141,8 @@ export function lawRateAt(
       pool.total,
       pool.species.reduce((sum, sp, i) => sum + pool.weights[i]! * at(sp, setup.y0), 0),
     );
-  if (derived.law.expression) {
-    const e = derived.law.expression;
-    if (!e.symbols().every((s) => values.has(s))) return undefined;
-    const r = e.evaluate(values);
-    return Number.isFinite(r) ? r : undefined;
-  }
+  const exact = lawExpression(derived);
+  if (exact) return rateValue(exact, values);
   if (derived.law.nonlinear) {
     for (const u of derived.law.nonlinear.unknowns) values.delete(u);
     return solveSteadyStateNumeric(derived.law.nonlinear, values)?.rate;

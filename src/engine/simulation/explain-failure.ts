@@ -14,8 +14,15 @@ export function explainFailure(
   setup: SimulationSetup,
   state: Float64Array,
 ): string {
-  return derived.law.method === 'rds' ? explainRds(basis, setup, state) : explainSteadyState(basis, setup, state);
+  if (derived.law.method === 'rds') return explainRds(basis, setup, state);
+  const why = explainSteadyState(basis, setup, state);
+  // With the carriers at steady state, what is left for the long-chain law is the length of the chains.
+  return derived.law.method === 'long_chain' && why === STEADY_STATE_HOLDS_NOT
+    ? 'the chains are too short at these constants for initiation and termination to be negligible next to propagation'
+    : why;
 }
+
+const STEADY_STATE_HOLDS_NOT = 'the steady state does not hold at these constants';
 
 function explainRds({ mechanism, route }: SimulationBasis, setup: SimulationSetup, state: Float64Array): string {
   const sigma = route.sigma;
@@ -65,5 +72,5 @@ function explainSteadyState({ route }: SimulationBasis, setup: SimulationSetup, 
     return state[i]! > 0 && Math.abs(dydt[i]!) * 1e3 > state[i]!;
   });
   if (drifting) return `the steady state of ${drifting} is not reached at 1 % conversion`;
-  return 'the steady state does not hold at these constants';
+  return STEADY_STATE_HOLDS_NOT;
 }

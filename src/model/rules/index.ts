@@ -26,9 +26,11 @@ import { observationOrder } from './observation-order.ts';
 import { observationSpecies } from './observation-species.ts';
 import { observationUnits } from './observation-units.ts';
 import { rateNonlinear } from './rate-nonlinear.ts';
+import { rateNotAChain } from './rate-not-a-chain.ts';
 import { rateNotEliminable } from './rate-not-eliminable.ts';
 import { recordDuplicateId } from './record-duplicate-id.ts';
 import { recordFile } from './record-file.ts';
+import { rateSymbolicBudget } from './rate-symbolic-budget.ts';
 import { recordSchema } from './record-schema.ts';
 import { recordYaml } from './record-yaml.ts';
 import { rolesDeclaredMismatch } from './roles-declared-mismatch.ts';
@@ -83,6 +85,8 @@ export const RULES = [
   routeSearchLimit,
   routeOffRoute,
   balanceSites,
+  rateSymbolicBudget,
+  rateNotAChain,
 ] as const;
 
 /** A rule's stable id. */

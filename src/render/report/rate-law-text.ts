@@ -16,6 +16,8 @@ export function rateLawLines(derivation: Derivation): string[] {
       const g = derived.presented.grouped;
       if (g) lines.push(`    = ${g.text}   with ${g.name} = ${g.valueText}${valueText(g.value, g.unitText)}`);
       lines.push(...normalisedLines(derived));
+    } else if (derived.algebraic) {
+      lines.push(`  r = ${derived.algebraic.text}`);
     } else {
       lines.push('  no closed form: the steady state is solved numerically at each observation with constants');
     }

@@ -105,6 +105,21 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
       denominator: termsJson(presented.expression.denominator),
     };
   }
+  if (derived.algebraic) {
+    const { expression, text, latex, roots } = derived.algebraic;
+    Object.assign(out, { text, latex });
+    // The outer fraction in the root symbols, and each root with the polynomial it is the positive root of.
+    out.structure = {
+      numerator: termsJson(expression.outer.numerator),
+      denominator: termsJson(expression.outer.denominator),
+      roots: expression.roots.map((root, i) => ({
+        symbol: root.symbol,
+        polynomial: termsJson(root.polynomial),
+        closed_form: roots[i]!.text,
+        closed_form_latex: roots[i]!.latex,
+      })),
+    };
+  }
   if (presented?.grouped) {
     const g = presented.grouped;
     out.grouped = { name: g.name, value_text: g.valueText, value_latex: g.valueLatex, text: g.text, latex: g.latex };
@@ -124,7 +139,7 @@ export function rateLawJson(derived: DerivedRateLaw): RateLawJson {
     }));
   }
   if (derived.restingStates.length > 0) out.resting_states = derived.restingStates;
-  if (!law.expression) out.numeric_only = true;
+  if (!law.expression && !law.algebraic) out.numeric_only = true;
   return out;
 }
 

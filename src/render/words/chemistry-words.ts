@@ -19,6 +19,13 @@ const METHODS: Readonly<Record<string, { name: string; short: string; law: strin
     about:
       'Every intermediate is taken to be at steady state (its net rate of formation is zero); conserved catalysts enter through their total concentration.',
   },
+  long_chain: {
+    name: 'long-chain approximation',
+    short: 'long chain',
+    law: 'long-chain law',
+    about:
+      'The chain carriers are at steady state and the chains are long: initiation balances termination, the propagation steps alone fix the ratio of the carriers, and the rate is that of propagation.',
+  },
 };
 
 /** A rate-law method in words, lower case: "steady-state approximation"; "no rate law" for none. */

@@ -7,7 +7,8 @@ import fc from 'fast-check';
 import { Monomial, Polynomial, RationalFunction } from '../../../src/engine/exact/index.ts';
 import { Rational } from '../../../src/engine/exact/rational.ts';
 
-type Node = { num: Rational } | { sym: string } | { op: string; args: Node[] };
+/** A parsed expression: a number, a symbol, or an operator (+ - * / ^ neg) with its arguments. */
+export type Node = { num: Rational } | { sym: string } | { op: string; args: Node[] };
 
 /** A polynomial from text such as `2*x^2*y - 3/2*z + k^(1/2)/S`; division only by a single term. */
 export function poly(text: string): Polynomial {
@@ -25,7 +26,7 @@ export function q(num: number, den = 1): Rational {
 }
 
 /** Recursive descent over + - * / ^ and parentheses; ^ binds tighter than unary minus on its left. */
-function parse(text: string): Node {
+export function parse(text: string): Node {
   const tokens = text.match(/\d+|[A-Za-z_][A-Za-z0-9_]*|[-+*/^()]/g) ?? [];
   let at = 0;
   const peek = () => tokens[at];

@@ -57,6 +57,9 @@ describe('cross-check with mathjs', () => {
         const text = `(${toMathjs(n)}) / (${toMathjs(d)})`;
         const value = math.evaluate(text, scope(at)) as number;
         fc.pre(Number.isFinite(value) && Math.abs(value) > 1e-6);
+        // Near a pole both sides lose every digit to cancellation in the denominator: not a comparison.
+        const size = d.terms.reduce((sum, t) => sum + Math.abs(t.coefficient.toNumber() * t.monomial.evaluate(at)), 0);
+        fc.pre(Math.abs(d.evaluate(at)) > 1e-6 * size);
         const slope = math.derivative(text, 'x', { simplify: false }).evaluate(scope(at)) as number;
         fc.pre(Number.isFinite(slope));
         expect(close(f.evaluate(at), value, 1e-9)).toBe(true);
