@@ -23,12 +23,19 @@ export interface IntegrateOptions {
   outputTimes?: readonly number[];
   /** Clip small negative overshoots at accepted steps; larger ones make the step be rejected. */
   nonNegative?: boolean;
+  /**
+   * Ends the integration at the first reported point (an output time, or an accepted step when there are none)
+   * where it holds: the caller's target (an extent of reaction) is reached, and nothing past it is computed.
+   */
+  until?: (t: number, y: Float64Array) => boolean;
 }
 
 /** How the integration ended, the reported solution, and work counters (steps = accepted steps). */
 export interface IntegrateResult {
   status: 'ok' | 'max-steps' | 'step-too-small' | 'non-finite';
   message?: string;
+  /** true when `until` ended the integration before tEnd, at the last reported point */
+  stopped?: boolean;
   t: number[];
   y: Float64Array[];
   steps: number;
@@ -53,15 +60,20 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
   let t = t0;
   let y = Float64Array.from(y0);
   let nextOutput = 0;
-  const report = () => {
+  const until = options.until;
+  /** Records the points reached; true when `until` holds at one of them (the integration ends there). */
+  const report = (): boolean => {
     if (!outputs) {
       result.t.push(t);
       result.y.push(Float64Array.from(y));
+      return until !== undefined && until(t, y);
     }
-    for (; outputs && nextOutput < outputs.length && outputs[nextOutput]! <= t; nextOutput++) {
+    for (; nextOutput < outputs.length && outputs[nextOutput]! <= t; nextOutput++) {
       result.t.push(outputs[nextOutput]!);
       result.y.push(Float64Array.from(y));
+      if (until !== undefined && until(outputs[nextOutput]!, y)) return true;
     }
+    return false;
   };
   if (!Number.isFinite(t0) || !Number.isFinite(tEnd))
     return stop('non-finite', `the time span ${t0} to ${tEnd} is not finite`);
@@ -72,7 +84,7 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
   const badRate = firstNonFinite(f0);
   if (badRate >= 0)
     return stop('non-finite', `the right-hand side of component ${badRate} is not finite at t = ${fmt(t)}`);
-  report();
+  if (report()) return { ...result, stopped: true };
 
   const span = tEnd - t0;
   const embeddedOrder = ROSENBROCK_TABLEAU.embeddedOrder;
@@ -141,7 +153,7 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
     h = Math.min(span, hTry < h ? Math.max(proposed, h) : proposed);
     afterRejection = false;
     lastFailure = 'error';
-    report();
+    if (report()) return { ...result, stopped: true };
   }
   return result;
 }

@@ -14,11 +14,11 @@ import { solveSteadyStateNumeric } from '../rate-law/steady-state-numeric.ts';
 import { concentration } from '../rate-law/symbols.ts';
 import { explainFailure } from './explain-failure.ts';
 import { simulatedInitialRate } from './initial-rate.ts';
-import { rateProbe, simulationSetup, type SimulationBasis, type SimulationSetup } from './simulation-setup.ts';
+import { simulatedOrders } from './simulated-orders.ts';
+import { simulationSetup, type SimulationBasis, type SimulationSetup } from './simulation-setup.ts';
 
 /** Relative error above which an approximation is reported invalid (10 %, configurable). */
 export const DEFAULT_APPROXIMATION_THRESHOLD = 0.1;
-const PERTURBATION = 1.05;
 
 export interface SimulationCheck {
   observation: string;
@@ -103,26 +103,6 @@ function describe(derived: DerivedRateLaw): string {
     : method === 'long_chain'
       ? 'the long-chain rate law'
       : 'the steady-state rate law';
-}
-
-/** Apparent orders by simulation: central log–log slope over starting concentrations × 1.05^±1. */
-function simulatedOrders(basis: SimulationBasis, setup: SimulationSetup, species: string[]): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const sp of species) {
-    const i = setup.model.species.indexOf(sp);
-    if (i < 0 || !(setup.y0[i]! > 0)) continue;
-    const rates = [PERTURBATION, 1 / PERTURBATION].map((f) => {
-      const y0 = Float64Array.from(setup.y0);
-      y0[i] = y0[i]! * f;
-      // Each run is read at the same fraction of its own largest extent, as the base run is.
-      const probe = rateProbe(basis, setup.model.species, y0, setup.held);
-      const r = 'missing' in probe ? undefined : simulatedInitialRate(setup.model, y0, probe);
-      return r?.status === 'ok' ? r.rate : Number.NaN;
-    });
-    const slope = Math.log(rates[0]! / rates[1]!) / Math.log(PERTURBATION * PERTURBATION);
-    if (Number.isFinite(slope)) out[sp] = Math.round(slope * 1e4) / 1e4;
-  }
-  return out;
 }
 
 /** The rate law's value at the simulated state (external concentrations, pool totals from the start). */

@@ -42,6 +42,8 @@ export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, p
     atol: COARSE_ABSOLUTE_TOLERANCE * Math.max(1, probe.maxExtent),
     nonNegative: true,
     maxSteps: 50_000,
+    // Nothing past the output where the target is passed is used: stop there.
+    until: (_t, y) => extent(y) >= target,
   });
   const hit = coarse.y.findIndex((y) => extent(y) >= target);
   if (hit < 0) {

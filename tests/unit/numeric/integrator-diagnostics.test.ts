@@ -64,6 +64,20 @@ describe('integrateStiff diagnostics', () => {
     r.t.forEach((t, i) => expect(r.y[i]![0]).toBeCloseTo(Math.exp(-(t - 1)), 6));
   });
 
+  it('stops at the first reported point where `until` holds, computing nothing past it', () => {
+    // y' = −y from 1: y falls below 1/2 at ln 2 ≈ 0.693 s; the output after it is 0.75 s.
+    const decay = linearSystem([[-1]]);
+    const outputTimes = Array.from({ length: 40 }, (_, i) => (i + 1) / 4);
+    const r = integrateStiff(decay, Float64Array.of(1), { tEnd: 10, outputTimes, until: (_t, y) => y[0]! < 0.5 });
+    expect(r).toMatchObject({ status: 'ok', stopped: true });
+    expect(r.t.at(-1)).toBe(0.75);
+    expect(r.y.at(-2)![0]).toBeGreaterThanOrEqual(0.5);
+    const free = integrateStiff(decay, Float64Array.of(1), { tEnd: 10, until: (_t, y) => y[0]! < 0.5 });
+    expect(free.stopped).toBe(true);
+    expect(free.t.at(-1)!).toBeGreaterThan(Math.LN2);
+    expect(free.t.at(-1)!).toBeLessThan(10);
+  });
+
   it('returns the initial state alone when the span is empty', () => {
     const r = integrateStiff(stiffPair, Float64Array.of(1, 0, 0), { tEnd: 0 });
     expect(r).toMatchObject({ status: 'ok', t: [0], steps: 0 });
