@@ -3,12 +3,11 @@
  * content/mechanisms) with constants and observations, the time of the whole simulation check
  * (initial rate, orders, approximation errors) and of the simulated orders alone, per observation,
  * and of the concentration series; and the integrator's share of double-double solves.
- * Run with `npm run bench:simulation [-- FOLDER]`. Medians of several runs; figures vary with the
- * machine's load (two shared cores), so run it twice and report both.
+ * Run with `npm run bench:simulation [-- FOLDER]`. Medians of several runs of CPU time (user +
+ * system), which a loaded machine (two shared cores) disturbs less than wall time; run it twice.
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { performance } from 'node:perf_hooks';
 import { deriveMechanism, simulationBasis } from '../src/engine/derive.ts';
 import { checkApproximations } from '../src/engine/simulation/approximation-validity.ts';
 import { concentrationSeries } from '../src/engine/simulation/concentration-series.ts';
@@ -24,18 +23,20 @@ function median(values: number[]): number {
   return s[Math.floor(s.length / 2)]!;
 }
 
+/** Median CPU time (user + system) of the run, in ms: on a loaded machine it varies less than wall time. */
 function timed(run: () => unknown): number {
   const times: number[] = [];
   for (let i = 0; i < REPEATS; i++) {
-    const start = performance.now();
+    const start = process.cpuUsage();
     run();
-    times.push(performance.now() - start);
+    const used = process.cpuUsage(start);
+    times.push((used.user + used.system) / 1000);
   }
   return median(times);
 }
 
 const ms = (x: number) => `${x.toFixed(1).padStart(8)} ms`;
-console.log(`node ${process.version}; ${folder}; medians of ${REPEATS}\n`);
+console.log(`node ${process.version}; ${folder}; CPU time, medians of ${REPEATS}\n`);
 let totalCheck = 0;
 let totalOrders = 0;
 let totalSeries = 0;

@@ -9,7 +9,9 @@
  * needs cond·ε < 1): the total enzyme of a 1e9 s^-1 pre-equilibrium drifted by 4e-6 over 2e7 s
  * (tests/reference/fast-equilibrium-integration.test.ts). Twice the digits hold it to rounding.
  * The arithmetic is Dekker's (Numer. Math. 18, 1971) with Knuth's two-sum, as described by Hida,
- * Li & Bailey for double-double libraries (all from memory).
+ * Li & Bailey for double-double libraries (all from memory). Every operation returns the high
+ * word and leaves the low word in a module variable, so the loops allocate nothing (a pair array
+ * per operation was 4–7 % of a check in garbage collection alone).
  */
 import { pivotRow } from './lu.ts';
 
@@ -26,8 +28,6 @@ export interface ExtendedLuWorkspace {
   xLo: Float64Array;
   rHi: Float64Array;
   rLo: Float64Array;
-  /** The result of the last arithmetic operation: [hi, lo]. */
-  out: Float64Array;
 }
 
 /** Scratch space for n equations. */
@@ -45,27 +45,25 @@ export function createExtendedLuWorkspace(n: number): ExtendedLuWorkspace {
     xLo: vector(),
     rHi: vector(),
     rLo: vector(),
-    out: new Float64Array(2),
   };
 }
 
 /** Sets the matrix to diag(d) − J, exactly (each diagonal entry as an unrounded double-double sum). */
 export function setShiftedNegative(ws: ExtendedLuWorkspace, d: number, jacobian: Float64Array): void {
-  const { n, matrixHi, matrixLo, out } = ws;
+  const { n, matrixHi, matrixLo } = ws;
   for (let k = 0; k < n * n; k++) {
     matrixHi[k] = -jacobian[k]!;
     matrixLo[k] = 0;
   }
   for (let i = 0; i < n; i++) {
-    twoSum(d, -jacobian[i * n + i]!, out);
-    matrixHi[i * n + i] = out[0]!;
-    matrixLo[i * n + i] = out[1]!;
+    matrixHi[i * n + i] = twoSum(d, -jacobian[i * n + i]!);
+    matrixLo[i * n + i] = low;
   }
 }
 
 /** Factors the matrix into the workspace with partial pivoting; false when a pivot is zero or not finite. */
 export function extendedLuFactor(ws: ExtendedLuWorkspace): boolean {
-  const { n, factorsHi: hi, factorsLo: lo, pivots, out } = ws;
+  const { n, factorsHi: hi, factorsLo: lo, pivots } = ws;
   hi.set(ws.matrixHi);
   lo.set(ws.matrixLo);
   for (let k = 0; k < n; k++) {
@@ -82,15 +80,13 @@ export function extendedLuFactor(ws: ExtendedLuWorkspace): boolean {
     }
     for (let i = k + 1; i < n; i++) {
       if (hi[i * n + k] === 0) continue;
-      divide(hi[i * n + k]!, lo[i * n + k]!, hi[k * n + k]!, lo[k * n + k]!, out);
-      const [fHi, fLo] = [out[0]!, out[1]!];
+      const fHi = divide(hi[i * n + k]!, lo[i * n + k]!, hi[k * n + k]!, lo[k * n + k]!);
+      const fLo = low;
       hi[i * n + k] = fHi;
       lo[i * n + k] = fLo;
       for (let j = k + 1; j < n; j++) {
-        multiply(fHi, fLo, hi[k * n + j]!, lo[k * n + j]!, out);
-        add(hi[i * n + j]!, lo[i * n + j]!, -out[0]!, -out[1]!, out);
-        hi[i * n + j] = out[0]!;
-        lo[i * n + j] = out[1]!;
+        hi[i * n + j] = subtractProduct(hi[i * n + j]!, lo[i * n + j]!, fHi, fLo, hi[k * n + j]!, lo[k * n + j]!);
+        lo[i * n + j] = low;
       }
     }
   }
@@ -103,30 +99,51 @@ export function extendedLuFactor(ws: ExtendedLuWorkspace): boolean {
  * to within a unit or two in every component, however small it is beside the others.
  */
 export function extendedLuSolve(ws: ExtendedLuWorkspace, b: Float64Array, x: Float64Array): void {
-  const { n, matrixHi, matrixLo, xHi, xLo, rHi, rLo, out } = ws;
+  const { n, matrixHi, matrixLo, xHi, xLo, rHi, rLo } = ws;
   xHi.set(b);
   xLo.fill(0);
   substitute(ws, xHi, xLo);
   for (let i = 0; i < n; i++) {
-    rHi[i] = b[i]!;
-    rLo[i] = 0;
+    let sHi = b[i]!;
+    let sLo = 0;
     for (let j = 0; j < n; j++) {
-      multiply(matrixHi[i * n + j]!, matrixLo[i * n + j]!, xHi[j]!, xLo[j]!, out);
-      add(rHi[i]!, rLo[i]!, -out[0]!, -out[1]!, out);
-      rHi[i] = out[0]!;
-      rLo[i] = out[1]!;
+      sHi = subtractProduct(sHi, sLo, matrixHi[i * n + j]!, matrixLo[i * n + j]!, xHi[j]!, xLo[j]!);
+      sLo = low;
     }
+    rHi[i] = sHi;
+    rLo[i] = sLo;
   }
   substitute(ws, rHi, rLo);
   for (let i = 0; i < n; i++) {
-    add(xHi[i]!, xLo[i]!, rHi[i]!, rLo[i]!, out);
-    x[i] = out[0]! + out[1]!;
+    const sum = add(xHi[i]!, xLo[i]!, rHi[i]!, rLo[i]!);
+    x[i] = sum + low;
+  }
+}
+
+/**
+ * The residual r = b − A x of a solution in doubles against the double-double matrix, each
+ * product exact and the sum carried in double-double, rounded once at the end: the correction
+ * an iterative refinement needs to reach full accuracy even where A is given to more digits than
+ * a double holds (diagonal entries 1/(hγ) − J_ii).
+ */
+export function extendedResidual(ws: ExtendedLuWorkspace, b: Float64Array, x: Float64Array, r: Float64Array): void {
+  const { n, matrixHi, matrixLo } = ws;
+  for (let i = 0; i < n; i++) {
+    let sHi = b[i]!;
+    let sLo = 0;
+    for (let j = 0; j < n; j++) {
+      const xj = x[j]!;
+      if (xj === 0) continue;
+      sHi = subtractProduct(sHi, sLo, matrixHi[i * n + j]!, matrixLo[i * n + j]!, xj, 0);
+      sLo = low;
+    }
+    r[i] = sHi + sLo;
   }
 }
 
 /** Forward and back substitution in place on the double-double vector (vHi, vLo). */
 function substitute(ws: ExtendedLuWorkspace, vHi: Float64Array, vLo: Float64Array): void {
-  const { n, factorsHi: hi, factorsLo: lo, pivots, out } = ws;
+  const { n, factorsHi: hi, factorsLo: lo, pivots } = ws;
   // The factorisation swaps whole rows, multipliers included: every swap comes before elimination.
   for (let k = 0; k < n; k++) {
     const p = pivots[k]!;
@@ -136,24 +153,23 @@ function substitute(ws: ExtendedLuWorkspace, vHi: Float64Array, vLo: Float64Arra
     }
   }
   for (let k = 0; k < n; k++) {
-    if (vHi[k] === 0) continue;
+    const vkHi = vHi[k]!;
+    if (vkHi === 0) continue;
+    const vkLo = vLo[k]!;
     for (let i = k + 1; i < n; i++) {
-      multiply(hi[i * n + k]!, lo[i * n + k]!, vHi[k]!, vLo[k]!, out);
-      add(vHi[i]!, vLo[i]!, -out[0]!, -out[1]!, out);
-      vHi[i] = out[0]!;
-      vLo[i] = out[1]!;
+      vHi[i] = subtractProduct(vHi[i]!, vLo[i]!, hi[i * n + k]!, lo[i * n + k]!, vkHi, vkLo);
+      vLo[i] = low;
     }
   }
   for (let i = n - 1; i >= 0; i--) {
-    let [sHi, sLo] = [vHi[i]!, vLo[i]!];
+    let sHi = vHi[i]!;
+    let sLo = vLo[i]!;
     for (let j = i + 1; j < n; j++) {
-      multiply(hi[i * n + j]!, lo[i * n + j]!, vHi[j]!, vLo[j]!, out);
-      add(sHi, sLo, -out[0]!, -out[1]!, out);
-      [sHi, sLo] = [out[0]!, out[1]!];
+      sHi = subtractProduct(sHi, sLo, hi[i * n + j]!, lo[i * n + j]!, vHi[j]!, vLo[j]!);
+      sLo = low;
     }
-    divide(sHi, sLo, hi[i * n + i]!, lo[i * n + i]!, out);
-    vHi[i] = out[0]!;
-    vLo[i] = out[1]!;
+    vHi[i] = divide(sHi, sLo, hi[i * n + i]!, lo[i * n + i]!);
+    vLo[i] = low;
   }
 }
 
@@ -163,16 +179,19 @@ function swap(v: Float64Array, i: number, j: number): void {
   v[j] = tmp;
 }
 
-/** a + b = out[0] + out[1] exactly (Knuth's two-sum). */
-function twoSum(a: number, b: number, out: Float64Array): void {
+/** The low word of the last double-double result; each operation below returns the high word. */
+let low = 0;
+
+/** a + b exactly, as the returned sum and the error in `low` (Knuth's two-sum). */
+function twoSum(a: number, b: number): number {
   const s = a + b;
   const bb = s - a;
-  out[0] = s;
-  out[1] = a - (s - bb) + (b - bb);
+  low = a - (s - bb) + (b - bb);
+  return s;
 }
 
-/** a × b = out[0] + out[1] exactly, by Dekker's splitting into 26-bit halves (no fused multiply-add in JavaScript). */
-function twoProduct(a: number, b: number, out: Float64Array): void {
+/** a × b exactly, as the returned product and the error in `low`, by Dekker's splitting into 26-bit halves (no fused multiply-add in JavaScript). */
+function twoProduct(a: number, b: number): number {
   const p = a * b;
   const ca = SPLITTER * a;
   const aHi = ca - (ca - a);
@@ -180,37 +199,42 @@ function twoProduct(a: number, b: number, out: Float64Array): void {
   const cb = SPLITTER * b;
   const bHi = cb - (cb - b);
   const bLo = b - bHi;
-  out[0] = p;
-  out[1] = aHi * bHi - p + aHi * bLo + aLo * bHi + aLo * bLo;
+  low = aHi * bHi - p + aHi * bLo + aLo * bHi + aLo * bLo;
+  return p;
 }
 const SPLITTER = 134217729; // 2^27 + 1
 
 /** Renormalises s + e with |e| ≤ ulp(s)/2 assumed (fast two-sum). */
-function normalise(s: number, e: number, out: Float64Array): void {
+function normalise(s: number, e: number): number {
   const hi = s + e;
-  out[0] = hi;
-  out[1] = e - (hi - s);
+  low = e - (hi - s);
+  return hi;
 }
 
-function add(aHi: number, aLo: number, bHi: number, bLo: number, out: Float64Array): void {
-  twoSum(aHi, bHi, out);
-  const [s, e] = [out[0]!, out[1]!];
-  twoSum(aLo, bLo, out);
-  const [t, f] = [out[0]!, out[1]!];
-  normalise(s, e + t, out);
-  normalise(out[0]!, out[1]! + f, out);
+function add(aHi: number, aLo: number, bHi: number, bLo: number): number {
+  const s = twoSum(aHi, bHi);
+  const e = low;
+  const t = twoSum(aLo, bLo);
+  const f = low;
+  const hi = normalise(s, e + t);
+  return normalise(hi, low + f);
 }
 
-function multiply(aHi: number, aLo: number, bHi: number, bLo: number, out: Float64Array): void {
-  twoProduct(aHi, bHi, out);
-  normalise(out[0]!, out[1]! + (aHi * bLo + aLo * bHi), out);
+function multiply(aHi: number, aLo: number, bHi: number, bLo: number): number {
+  const p = twoProduct(aHi, bHi);
+  return normalise(p, low + (aHi * bLo + aLo * bHi));
 }
 
-function divide(aHi: number, aLo: number, bHi: number, bLo: number, out: Float64Array): void {
+/** a − b × c, each rounded to double-double as `add(a, −multiply(b, c))` is. */
+function subtractProduct(aHi: number, aLo: number, bHi: number, bLo: number, cHi: number, cLo: number): number {
+  const pHi = multiply(bHi, bLo, cHi, cLo);
+  return add(aHi, aLo, -pHi, -low);
+}
+
+function divide(aHi: number, aLo: number, bHi: number, bLo: number): number {
   // Long division: a quotient digit, the remainder in double-double, a second digit from it.
   const q1 = aHi / bHi;
-  multiply(bHi, bLo, q1, 0, out);
-  add(aHi, aLo, -out[0]!, -out[1]!, out);
-  const q2 = out[0]! / bHi;
-  normalise(q1, q2, out);
+  const pHi = multiply(bHi, bLo, q1, 0);
+  const rHi = add(aHi, aLo, -pHi, -low);
+  return normalise(q1, rHi / bHi);
 }
