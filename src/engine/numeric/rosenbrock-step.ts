@@ -1,27 +1,26 @@
 /**
  * One step of the Rosenbrock method in transformed form (Hairer & Wanner II, section IV.7):
  * a single LU factorisation of I/(hγ) − J serves every stage, and each stage is one linear solve,
- * so the step stays stable however stiff the kinetics is. The factorisation and solves are carried
- * in double-double (extended-lu.ts): a fast pre-equilibrium beside a long step makes the matrix
- * near-singular along the conservation laws, and a radical at 1e-15 M must not carry the rounding
- * of a reactant's equation at 1e-3 M; in either case an error the embedded estimate, built from the
- * same stages, cannot see.
+ * so the step stays stable however stiff the kinetics is. The solves are refined to working
+ * precision in every component, in double-double where doubles do not converge (iteration-matrix.ts):
+ * a fast pre-equilibrium beside a long step makes the matrix near-singular along the conservation
+ * laws, and a radical at 1e-15 M must not carry the rounding of a reactant's equation at 1e-3 M; in
+ * either case an error the embedded estimate, built from the same stages, cannot see.
  */
 import {
-  createExtendedLuWorkspace,
-  extendedLuFactor,
-  extendedLuSolve,
-  setShiftedNegative,
-  type ExtendedLuWorkspace,
-} from './extended-lu.ts';
+  createIterationMatrix,
+  factorIterationMatrix,
+  solveIterationMatrix,
+  type IterationMatrix,
+} from './iteration-matrix.ts';
 import { ROSENBROCK_METHOD, type TransformedMethod } from './rosenbrock-method.ts';
 import type { OdeSystem } from './ode-system.ts';
 
 /** Scratch arrays of one integration, allocated once so that steps allocate nothing. */
 export interface StepWorkspace {
   n: number;
-  /** The iteration matrix I/(hγ) − J and its factors, in double-double. */
-  lu: ExtendedLuWorkspace;
+  /** The iteration matrix I/(hγ) − J and its factors (doubles, refined; double-double where needed). */
+  lu: IterationMatrix;
   stages: Float64Array[];
   argument: Float64Array;
 }
@@ -33,7 +32,7 @@ export type StepOutcome = 'ok' | 'singular' | 'non-finite';
 export function createWorkspace(n: number, method: TransformedMethod = ROSENBROCK_METHOD): StepWorkspace {
   return {
     n,
-    lu: createExtendedLuWorkspace(n),
+    lu: createIterationMatrix(n),
     stages: Array.from({ length: method.stages }, () => new Float64Array(n)),
     argument: new Float64Array(n),
   };
@@ -57,8 +56,8 @@ export function rosenbrockStep(
   method: TransformedMethod = ROSENBROCK_METHOD,
 ): StepOutcome {
   const { n, lu, stages, argument } = ws;
-  setShiftedNegative(lu, 1 / (h * method.gamma), jacobian);
-  if (!extendedLuFactor(lu)) return 'singular';
+  // One factorisation serves all the stages.
+  if (!factorIterationMatrix(lu, 1 / (h * method.gamma), jacobian)) return 'singular';
 
   for (let s = 0; s < method.stages; s++) {
     const u = stages[s]!;
@@ -75,7 +74,7 @@ export function rosenbrockStep(
       system.rhs(t + method.stageTimes[s]! * h, argument, u);
     }
     for (let j = 0; j < s; j++) addScaled(u, cRow[j]! / h, stages[j]!);
-    extendedLuSolve(lu, u, u);
+    solveIterationMatrix(lu, u, u);
   }
 
   y1.set(y0);

@@ -41,6 +41,8 @@ export interface IntegrateResult {
   steps: number;
   rejected: number;
   jacobianEvaluations: number;
+  /** linear solves of the stages: by refined doubles, and in double-double (near-singular iteration matrices) */
+  solves: { refined: number; extended: number };
 }
 
 /** Integrates y' = f(t, y) from t0 to tEnd with error control; a misuse of the API (sizes, tEnd < t0) throws. */
@@ -54,7 +56,15 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
   const maxSteps = options.maxSteps ?? 100_000;
   const nonNegative = options.nonNegative ?? false;
   const outputs = options.outputTimes?.filter((s) => s >= t0 && s <= tEnd).sort((a, b) => a - b);
-  const result: IntegrateResult = { status: 'ok', t: [], y: [], steps: 0, rejected: 0, jacobianEvaluations: 0 };
+  const result: IntegrateResult = {
+    status: 'ok',
+    t: [],
+    y: [],
+    steps: 0,
+    rejected: 0,
+    jacobianEvaluations: 0,
+    solves: { refined: 0, extended: 0 },
+  };
   const stop = (status: IntegrateResult['status'], message: string) => ({ ...result, status, message });
 
   let t = t0;
@@ -93,6 +103,8 @@ export function integrateStiff(system: OdeSystem, y0: Float64Array, options: Int
     span > 0 ? initialStep(y, f0, t0, span, ROSENBROCK_TABLEAU.order, tol, (s, v, d) => system.rhs(s, v, d)) : 0;
   let h = Math.min(span, given !== undefined && given > 0 ? given : estimate());
   const ws = createWorkspace(n);
+  // The counters are the workspace's own, read through the result.
+  result.solves = ws.lu.counts;
   const jacobian = new Float64Array(n * n);
   let y1 = new Float64Array(n);
   const err = new Float64Array(n);
