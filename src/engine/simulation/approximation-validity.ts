@@ -1,8 +1,8 @@
 /**
  * How good each derived rate law is at an observation's conditions (DESIGN.md item 7): the
- * simulated initial rate, apparent orders by simulation (each starting concentration scaled by
- * 1.05^±1, log–log slope), and the relative error |r_law − r_sim| / r_sim of every rate law,
- * evaluated at the simulated state at 1 % conversion. Errors above the threshold become
+ * simulated initial rate (extrapolated to zero conversion), initial-rate orders by simulation
+ * (each starting concentration scaled by 1.05^±1, log–log slope), and the relative error
+ * |r_law − r_sim| / r_sim of every rate law, both evaluated at the simulated state at 1 % conversion. Errors above the threshold become
  * `approximation/invalid` warnings that say which assumption fails.
  */
 import type { Observation } from '../../model/index.ts';
@@ -24,8 +24,9 @@ export interface SimulationCheck {
   observation: string;
   status: 'ok' | 'failed' | 'skipped';
   message?: string;
+  /** the simulated rate extrapolated to zero conversion, in M s^-1 */
   initialRate?: number;
-  /** time at which the initial rate was read, in s */
+  /** time of the reading at 1 % conversion, where the rate laws are checked against the simulation, in s */
   time?: number;
   orders: Record<string, number>;
   approximationError: Partial<Record<RateLawMethod, number>>;
@@ -48,7 +49,7 @@ export function checkApproximations(
       return;
     }
     const result = simulatedInitialRate(setup.model, setup.y0, setup.probe);
-    if (result.status !== 'ok' || !(result.rate > 0)) {
+    if (result.status !== 'ok' || !(result.readingRate > 0)) {
       const message = result.status === 'ok' ? 'the simulated rate is not positive' : result.message;
       checks.push({ ...base, status: 'failed', message });
       diagnostics.push(
@@ -74,7 +75,8 @@ export function checkApproximations(
     for (const derived of basis.rateLaws) {
       const approx = lawRateAt(derived, setup, result.state, constants);
       if (approx === undefined) continue;
-      const error = Math.abs(approx - result.rate) / result.rate;
+      // Law and simulation at one and the same state: the reading's, not the extrapolated rate.
+      const error = Math.abs(approx - result.readingRate) / result.readingRate;
       check.approximationError[derived.law.method] = Math.round(error * 1e4) / 1e4;
       if (error > threshold) {
         diagnostics.push(

@@ -3,10 +3,15 @@
  * mass-action ODEs from the observation's starting concentrations (intermediates absent, a
  * catalyst all in its free form) until the overall reaction has advanced by 1 % of its maximum
  * extent — by then any fast transient (pre-equilibria settling, the steady state building up)
- * has long passed in a valid approximation, and depletion is still negligible — and take the
- * rate of the overall reaction there, r = (d[P]/dt)/ν_P, with the state at that moment.
+ * has long passed in a valid approximation — and read the rate of the overall reaction there,
+ * r = (d[P]/dt)/ν_P, with the state at that moment (against which the rate laws are checked).
+ * The initial rate itself is that rate extrapolated to zero conversion (extrapolate.ts) from
+ * readings at about 1, 2, 3 and 4 % of the extent, so that a rate that changes with conversion
+ * (autocatalysis, inhibition by a product, depletion of a reactant) gives the initial-rate
+ * value and orders, as an experimentalist's initial slopes do.
  */
-import { integrateStiff } from '../numeric/stiff-integrator.ts';
+import { integrateStiff, type IntegrateOptions } from '../numeric/stiff-integrator.ts';
+import { extrapolateToZero } from './extrapolate.ts';
 import type { MassActionModel } from './mass-action-system.ts';
 
 /** The fraction of the maximum extent at which the initial rate is read. */
@@ -18,6 +23,8 @@ const COARSE_ABSOLUTE_TOLERANCE = 1e-14;
 // Radicals and bound catalyst sit many decades below the reactants: the refined pass resolves
 // each species relative to its own size along the coarse pass.
 const RELATIVE_TO_OWN_SCALE = 1e-9;
+/** Further readings, as multiples of the first extent: about 1, 2, 3 and 4 % (the cubic through them is extrapolated). */
+const FURTHER_READINGS = [2, 3, 4];
 
 export interface RateProbe {
   /** which species gives the overall rate, and its coefficient in the overall equation */
@@ -28,9 +35,18 @@ export interface RateProbe {
 }
 
 export type InitialRate =
-  { status: 'ok'; rate: number; time: number; state: Float64Array } | { status: 'failed'; message: string };
+  | {
+      status: 'ok';
+      /** the rate extrapolated to zero conversion, in M s^-1 (the reading's rate where no extrapolation can be made) */
+      rate: number;
+      /** the rate at the reading (1 % conversion), with the time and the state there */
+      readingRate: number;
+      time: number;
+      state: Float64Array;
+    }
+  | { status: 'failed'; message: string };
 
-/** Simulates until 1 % conversion and returns the rate and the state there. */
+/** Simulates until 1 % conversion, reads the rate and the state there, and extrapolates the rate to zero conversion. */
 export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, probe: RateProbe): InitialRate {
   const target = CONVERSION_FOR_INITIAL_RATE * probe.maxExtent;
   const extent = (y: Float64Array) => (y[probe.product]! - y0[probe.product]!) / probe.coefficient;
@@ -72,9 +88,32 @@ export function simulatedInitialRate(model: MassActionModel, y0: Float64Array, p
   const index = at < 0 ? refined.y.length - 1 : at;
   const state = refined.y[index] ?? coarse.y[hit]!;
   const time = refined.t[index] ?? coarse.t[hit]!;
-  const dydt = new Float64Array(state.length);
-  model.system.rhs(time, state, dydt);
-  return { status: 'ok', rate: dydt[probe.product]! / probe.coefficient, time, state };
+  const rateAt = (t: number, y: Float64Array) => {
+    const dydt = new Float64Array(y.length);
+    model.system.rhs(t, y, dydt);
+    return dydt[probe.product]! / probe.coefficient;
+  };
+  const readingRate = rateAt(time, state);
+  const readings = [{ extent: extent(state), rate: readingRate }];
+  // Later readings at the times the reading's rate would reach 2, 3 and 4 % of the extent: wherever
+  // the extents really fall, they are distinct and small, which is all the extrapolation needs.
+  if (readingRate > 0) {
+    const times = FURTHER_READINGS.map((m) => time + ((m - 1) * target) / readingRate);
+    const further = integrateStiff(model.system, state, {
+      t0: time,
+      tEnd: times.at(-1)!,
+      outputTimes: times,
+      rtol: 1e-8,
+      atol,
+      nonNegative: true,
+      maxSteps: 50_000,
+    } satisfies IntegrateOptions);
+    if (further.status === 'ok')
+      further.t.forEach((t, k) => readings.push({ extent: extent(further.y[k]!), rate: rateAt(t, further.y[k]!) }));
+  }
+  const initial = readings.length > FURTHER_READINGS.length ? extrapolateToZero(readings) : undefined;
+  const rate = initial !== undefined && initial > 0 && Number.isFinite(initial) ? initial : readingRate;
+  return { status: 'ok', rate, readingRate, time, state };
 }
 
 /** Absolute tolerance per species: a small fraction of the largest value it reached. */
