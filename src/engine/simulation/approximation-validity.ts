@@ -13,7 +13,7 @@ import type { RateLawMethod } from '../rate-law/rate-law.ts';
 import { solveSteadyStateNumeric } from '../rate-law/steady-state-numeric.ts';
 import { concentration } from '../rate-law/symbols.ts';
 import { explainFailure } from './explain-failure.ts';
-import { simulatedInitialRate } from './initial-rate.ts';
+import { rememberedInitialRate } from './remembered-runs.ts';
 import { simulatedOrders } from './simulated-orders.ts';
 import { simulationSetup, type SimulationBasis, type SimulationSetup } from './simulation-setup.ts';
 
@@ -48,7 +48,7 @@ export function checkApproximations(
       checks.push({ ...base, status: 'skipped', message: `not simulated: needs ${setup.missing}` });
       return;
     }
-    const result = simulatedInitialRate(setup.model, setup.y0, setup.probe);
+    const result = rememberedInitialRate(basis.mechanism, setup.model, setup.y0, setup.probe);
     if (result.status !== 'ok' || !(result.readingRate > 0)) {
       const message = result.status === 'ok' ? 'the simulated rate is not positive' : result.message;
       checks.push({ ...base, status: 'failed', message });

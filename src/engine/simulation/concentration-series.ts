@@ -9,7 +9,7 @@
  */
 import type { Observation, Role } from '../../model/index.ts';
 import { integrateStiff } from '../numeric/stiff-integrator.ts';
-import { simulatedInitialRate } from './initial-rate.ts';
+import { rememberedInitialRate } from './remembered-runs.ts';
 import type { MassActionModel } from './mass-action-system.ts';
 import { simulationSetup, type SimulationBasis } from './simulation-setup.ts';
 
@@ -67,7 +67,8 @@ export function concentrationSeries(
   const setup = simulationSetup(basis, constants, observation);
   if ('missing' in setup) return { ...base, status: 'skipped', message: `not simulated: needs ${setup.missing}` };
   const { model, y0, probe } = setup;
-  const initial = simulatedInitialRate(model, y0, probe);
+  // The check's run of this observation, when it made one.
+  const initial = rememberedInitialRate(basis.mechanism, model, y0, probe);
   if (initial.status !== 'ok' || !(initial.rate > 0))
     return {
       ...base,

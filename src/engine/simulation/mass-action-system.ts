@@ -21,6 +21,9 @@ interface Side {
 
 export interface MassActionModel {
   species: string[];
+  /** the constants and the held species the model was built with (what a run depends on besides y0) */
+  rates: RateConstants;
+  held: string[];
   system: OdeSystem;
   /** forward and reverse rates of each step at a state */
   stepFluxes(y: Float64Array): { forward: number; reverse: number }[];
@@ -75,7 +78,7 @@ export function massActionModel(
       }
     },
   };
-  return { species, system, stepFluxes };
+  return { species, rates: constants, held: species.filter((sp) => held.has(sp)), system, stepFluxes };
 }
 
 /** Π y^ν over a side; with `differentiate`, the factor of that species is replaced by y^(ν−1). */

@@ -2,7 +2,7 @@
  * Apparent orders by simulation: each starting concentration scaled by 1.05^±1 and the central
  * log–log slope of the simulated initial rate.
  */
-import { simulatedInitialRate } from './initial-rate.ts';
+import { rememberedInitialRate } from './remembered-runs.ts';
 import { rateProbe, type SimulationBasis, type SimulationSetup } from './simulation-setup.ts';
 
 const PERTURBATION = 1.05;
@@ -22,7 +22,7 @@ export function simulatedOrders(
       y0[i] = y0[i]! * f;
       // Each run is read at the same fraction of its own largest extent, as the base run is.
       const probe = rateProbe(basis, setup.model.species, y0, setup.held);
-      const r = 'missing' in probe ? undefined : simulatedInitialRate(setup.model, y0, probe);
+      const r = 'missing' in probe ? undefined : rememberedInitialRate(basis.mechanism, setup.model, y0, probe);
       return r?.status === 'ok' ? r.rate : Number.NaN;
     });
     const slope = Math.log(rates[0]! / rates[1]!) / Math.log(PERTURBATION * PERTURBATION);
