@@ -121,23 +121,28 @@ export function extendedLuSolve(ws: ExtendedLuWorkspace, b: Float64Array, x: Flo
 }
 
 /**
- * The residual r = b − A x of a solution in doubles against the double-double matrix, each
- * product exact and the sum carried in double-double, rounded once at the end: the correction
- * an iterative refinement needs to reach full accuracy even where A is given to more digits than
- * a double holds (diagonal entries 1/(hγ) − J_ii).
+ * The residual r = b − A x of a solution in doubles against the double-double matrix, rounded once
+ * at the end: each product exact by two-product, the sum by two-sum with the errors gathered
+ * apart (Ogita, Rump & Oishi's Dot2, SIAM J. Sci. Comput. 26, 2005; from memory), which is as
+ * accurate as summing in twice the working precision. Only the diagonal has low words (the shift
+ * 1/(hγ) − J_ii); they enter the gathered errors. This is the correction an iterative refinement
+ * needs to reach full accuracy where A is given to more digits than a double holds.
  */
 export function extendedResidual(ws: ExtendedLuWorkspace, b: Float64Array, x: Float64Array, r: Float64Array): void {
   const { n, matrixHi, matrixLo } = ws;
   for (let i = 0; i < n; i++) {
-    let sHi = b[i]!;
-    let sLo = 0;
+    let sum = b[i]!;
+    let errors = -matrixLo[i * n + i]! * x[i]!;
     for (let j = 0; j < n; j++) {
       const xj = x[j]!;
-      if (xj === 0) continue;
-      sHi = subtractProduct(sHi, sLo, matrixHi[i * n + j]!, matrixLo[i * n + j]!, xj, 0);
-      sLo = low;
+      const a = matrixHi[i * n + j]!;
+      if (xj === 0 || a === 0) continue;
+      const product = twoProduct(a, -xj);
+      const productError = low;
+      sum = twoSum(sum, product);
+      errors += low + productError;
     }
-    r[i] = sHi + sLo;
+    r[i] = sum + errors;
   }
 }
 
