@@ -6,7 +6,7 @@
  * run is the run that would be made; the mechanism is held weakly, and its runs go with it.
  */
 import type { Mechanism } from '../mechanism/mechanism.ts';
-import { simulatedInitialRate, type InitialRate, type RateProbe } from './initial-rate.ts';
+import { simulatedInitialRate, type InitialRate, type RateProbe, type ReadingPlacement } from './initial-rate.ts';
 import type { MassActionModel } from './mass-action-system.ts';
 
 const runs = new WeakMap<Mechanism, Map<string, InitialRate>>();
@@ -17,14 +17,15 @@ export function rememberedInitialRate(
   model: MassActionModel,
   y0: Float64Array,
   probe: RateProbe,
+  placement: ReadingPlacement = 'grid',
 ): InitialRate {
   let known = runs.get(mechanism);
   if (!known) runs.set(mechanism, (known = new Map()));
   // JSON writes each double so that it reads back to the same double.
-  const key = JSON.stringify([model.rates.forward, model.rates.reverse, model.held, Array.from(y0), probe]);
+  const key = JSON.stringify([model.rates.forward, model.rates.reverse, model.held, Array.from(y0), probe, placement]);
   const remembered = known.get(key);
   if (remembered) return remembered;
-  const run = simulatedInitialRate(model, y0, probe);
+  const run = simulatedInitialRate(model, y0, probe, placement);
   known.set(key, run);
   return run;
 }

@@ -22,7 +22,7 @@ export function simulatedOrders(
       y0[i] = y0[i]! * f;
       // Each run is read at the same fraction of its own largest extent, as the base run is.
       const probe = rateProbe(basis, setup.model.species, y0, setup.held);
-      const r = 'missing' in probe ? undefined : rememberedInitialRate(basis.mechanism, setup.model, y0, probe);
+      const r = 'missing' in probe ? undefined : rememberedInitialRate(basis.mechanism, setup.model, y0, probe, 'free');
       return r?.status === 'ok' ? r.rate : Number.NaN;
     });
     const slope = Math.log(rates[0]! / rates[1]!) / Math.log(PERTURBATION * PERTURBATION);
