@@ -6,19 +6,15 @@
  */
 import { createRequire } from 'node:module';
 import type { Ajv2020, Options } from 'ajv/dist/2020.js';
-import type { ErrorObject, ValidateFunction } from 'ajv';
+import type { ValidateFunction } from 'ajv';
 import schema from '../../schemas/mechanism.schema.json' with { type: 'json' };
 import type { MechanismRecord } from '../model/index.ts';
-import { precompiledValidator } from './precompiled-validator.ts';
+import { precompiledValidator, type RecordValidator } from './precompiled-validator.ts';
+
+export type { RecordValidator } from './precompiled-validator.ts';
 
 /** The JSON Schema of a record (schemas/mechanism.schema.json). */
 export const recordSchema: Readonly<Record<string, unknown>> = schema;
-
-/** Validates data against the record schema; `errors` lists every problem (ajv `allErrors`). */
-export interface RecordValidator {
-  (data: unknown): data is MechanismRecord;
-  errors?: ErrorObject[] | null;
-}
 
 /**
  * ajv and its formats, loaded on first use: loading them costs a large part of a short run's start,
