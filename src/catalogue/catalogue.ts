@@ -14,7 +14,7 @@ import {
 } from '../engine/index.ts';
 import type { Observation } from '../model/index.ts';
 import { findRecordFiles, isPublishable } from '../records/index.ts';
-import { checkRecordFile, type CheckedRecord } from './check-records.ts';
+import { checkRecordFiles, type CheckedRecord, type Pipeline } from './check-records.ts';
 
 /** One record of the catalogue: checked and derived, with its source text and its simulated series. */
 export interface CatalogueRecord extends CheckedRecord {
@@ -42,12 +42,16 @@ export interface Catalogue {
   systems: CatalogueSystem[];
 }
 
-/** Loads, checks and derives every publishable record of a folder, then judges the rivals of each system. */
-export async function loadCatalogue(folder: string): Promise<Catalogue> {
+/**
+ * Loads, checks and derives every publishable record of a folder (through the pipeline's cache
+ * and deriver), then judges the rivals of each system — always afresh, since any rival's change
+ * changes the pooled observations.
+ */
+export async function loadCatalogue(folder: string, pipeline: Pipeline = {}): Promise<Catalogue> {
   const { files } = await findRecordFiles([folder]);
   const records: CatalogueRecord[] = [];
-  for (const file of files) {
-    const checked = await checkRecordFile(file);
+  for (const checked of await checkRecordFiles(files, {}, pipeline)) {
+    const file = checked.file;
     // A file name that cannot be a page (unsafe, too long, an id given twice) stays out; `build` reports it.
     if (!isPublishable(checked)) continue;
     // Names relative to where the command ran (`build` runs Astro from the package folder).
@@ -58,15 +62,26 @@ export async function loadCatalogue(folder: string): Promise<Catalogue> {
     const diagnostics = checked.diagnostics.map((d) => (d.file === undefined ? d : { ...d, file: rename(d.file) }));
     // The text the loader read (never a second read: the file may have changed, or be a pipe).
     const record: CatalogueRecord = { ...checked, file: named, diagnostics, source: checked.loaded.source };
-    const basis = checked.derivation && simulationBasis(checked.derivation);
-    const series =
-      checked.record && basis
-        ? firstObservationSeries(checked.record.observations ?? [], basis, checked.derivation!.constants ?? new Map())
-        : undefined;
+    const series = seriesOf(checked, pipeline);
     if (series) record.series = series;
     records.push(record);
   }
   return { records, systems: judgeSystems(records) };
+}
+
+/** The record's plotted concentration series: from the cache, or simulated and stored. */
+function seriesOf(checked: CheckedRecord, { cache }: Pipeline): ConcentrationSeries | undefined {
+  const { cacheKey: key } = checked;
+  const stored =
+    key !== undefined ? (cache?.read(key, 'series') as { series?: ConcentrationSeries } | undefined) : undefined;
+  if (stored && typeof stored === 'object') return stored.series;
+  const basis = checked.derivation && simulationBasis(checked.derivation);
+  const series =
+    checked.record && basis
+      ? firstObservationSeries(checked.record.observations ?? [], basis, checked.derivation!.constants ?? new Map())
+      : undefined;
+  if (key !== undefined) cache?.write(key, 'series', series === undefined ? {} : { series });
+  return series;
 }
 
 function judgeSystems(records: readonly CatalogueRecord[]): CatalogueSystem[] {

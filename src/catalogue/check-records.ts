@@ -1,10 +1,15 @@
 /**
  * Loads and derives a set of record files: the shared first half of `check`, `derive` and the
- * site build. Every file is checked even when others fail.
+ * site build. Every file is checked even when others fail. Each record is loaded and its cache
+ * key made first; the records the cache does not hold are derived (in worker threads, when the
+ * caller brings a `deriver` and there are enough of them), stored, and then every record gets
+ * its data read and its diagnostics placed, in the order the files were given.
  */
 import { deriveMechanism, type Derivation, type DeriveOptions, type KineticData } from '../engine/index.ts';
 import { diagnostic, type Diagnostic, type MechanismRecord } from '../model/index.ts';
 import { loadRecordFile, placeDiagnostics, recordId, type LoadedRecord } from '../records/index.ts';
+import type { DerivationCache } from './derivation-cache.ts';
+import { derivationKey } from './derivation-key.ts';
 import { readRecordData } from './read-record-data.ts';
 
 /** One record file as checked: what was loaded, the record where it is valid, its derivation and every diagnostic placed. */
@@ -18,16 +23,124 @@ export interface CheckedRecord {
   data?: KineticData[];
   /** every diagnostic of the record, with file, line and column */
   diagnostics: Diagnostic[];
+  /** the record's key in the derivation cache, where a cache was used */
+  cacheKey?: string;
+}
+
+/** A derivation to be made elsewhere (another thread): the valid record, by its file. */
+export interface DerivationJob {
+  file: string;
+  record: MechanismRecord;
+}
+
+/**
+ * What came of a job: the derivation (and its encoded bytes, for the cache), the failure, or
+ * undefined where the record is to be derived in this thread after all.
+ */
+export type DerivationOutcome = { derivation: Derivation; encoded?: Uint8Array } | { error: Error } | undefined;
+
+/** Derives many records at once (a pool of threads), the outcomes in the jobs' order; `done` after each. */
+export type Deriver = (
+  jobs: readonly DerivationJob[],
+  options: DeriveOptions,
+  done: () => void,
+) => Promise<DerivationOutcome[]>;
+
+/** How records are derived: a cache, a deriver for many at once, and progress. All optional. */
+export interface Pipeline {
+  cache?: DerivationCache;
+  deriver?: Deriver;
+  /** the fewest records to derive that make handing them to the deriver worth it (default 8) */
+  deriverThreshold?: number;
+  /** called after each record is derived or found in the cache */
+  progress?: (done: number, total: number) => void;
 }
 
 /** Loads, validates and derives one record file; engine diagnostics get file, line and column. */
-export async function checkRecordFile(path: string, options: DeriveOptions = {}): Promise<CheckedRecord> {
-  let loaded: LoadedRecord | undefined;
+export async function checkRecordFile(
+  path: string,
+  options: DeriveOptions = {},
+  pipeline: Pipeline = {},
+): Promise<CheckedRecord> {
+  const [checked] = await checkRecordFiles([path], options, pipeline);
+  return checked!;
+}
+
+interface Pending {
+  path: string;
+  loaded?: LoadedRecord;
+  key?: string;
+  derivation?: Derivation;
+  failure?: unknown;
+}
+
+/** Checks files, each once, deriving only what the cache does not hold; the order stays the files' order. */
+export async function checkRecordFiles(
+  paths: readonly string[],
+  options: DeriveOptions = {},
+  pipeline: Pipeline = {},
+): Promise<CheckedRecord[]> {
+  const { cache } = pipeline;
+  const pending: Pending[] = [];
+  let done = 0;
+  const tick = () => pipeline.progress?.(++done, paths.length);
+  for (const path of paths) {
+    const item: Pending = { path };
+    pending.push(item);
+    try {
+      item.loaded = await loadRecordFile(path);
+      if (!item.loaded.record || !cache) continue;
+      item.key = await derivationKey(item.loaded, options, cache.engine);
+      const stored = cache.read(item.key, 'derivation') as Derivation | undefined;
+      if (stored) {
+        item.derivation = stored;
+        tick();
+      }
+    } catch (error) {
+      item.failure = error;
+    }
+  }
+  const misses = pending.filter((p) => p.loaded?.record && !p.derivation && p.failure === undefined);
+  const useDeriver = pipeline.deriver && misses.length >= (pipeline.deriverThreshold ?? 8);
+  if (useDeriver) {
+    const jobs = misses.map((p) => ({ file: p.path, record: p.loaded!.record! }));
+    const outcomes = await pipeline.deriver!(jobs, options, tick);
+    outcomes.forEach((outcome, i) => {
+      const item = misses[i]!;
+      if (outcome === undefined) deriveHere(item, options, cache, () => undefined);
+      else if ('error' in outcome) item.failure = outcome.error;
+      else {
+        item.derivation = outcome.derivation;
+        if (cache && item.key && outcome.encoded) cache.writeEncoded(item.key, 'derivation', outcome.encoded);
+      }
+    });
+  } else for (const item of misses) deriveHere(item, options, cache, tick);
+  const out: CheckedRecord[] = [];
+  for (const item of pending) {
+    if (!item.loaded?.record && item.failure === undefined) tick();
+    out.push(await finish(item));
+  }
+  return out;
+}
+
+/** Derives a record in this thread and stores it. */
+function deriveHere(item: Pending, options: DeriveOptions, cache: DerivationCache | undefined, tick: () => void): void {
   try {
-    loaded = await loadRecordFile(path);
+    item.derivation = deriveMechanism(item.loaded!.record!, options);
+    if (cache && item.key) cache.write(item.key, 'derivation', item.derivation);
+  } catch (error) {
+    item.failure = error;
+  }
+  tick();
+}
+
+/** A record with its data read and every diagnostic placed; a failure on the way is an internal failure. */
+async function finish(item: Pending): Promise<CheckedRecord> {
+  const { path, loaded, derivation } = item;
+  if (item.failure !== undefined || !loaded) return internalFailure(path, loaded, item.failure);
+  try {
     const base = { id: loaded.id, file: loaded.file, loaded };
-    if (!loaded.record) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
-    const derivation = deriveMechanism(loaded.record, options);
+    if (!loaded.record || !derivation) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
     const species = derivation.mechanism && [...derivation.mechanism.species.keys()];
     const read = await readRecordData(loaded, species);
     const diagnostics = placeDiagnostics(loaded, [
@@ -41,6 +154,7 @@ export async function checkRecordFile(path: string, options: DeriveOptions = {})
       derivation,
       ...(read.data.length > 0 ? { data: read.data } : {}),
       diagnostics,
+      ...(item.key !== undefined ? { cacheKey: item.key } : {}),
     };
   } catch (error) {
     return internalFailure(path, loaded, error);
@@ -59,14 +173,4 @@ function internalFailure(path: string, loaded: LoadedRecord | undefined, error: 
   const read = loaded ?? { id: recordId(path), file: path, source: '', diagnostics: [], locate: () => undefined };
   const diagnostics = [...placeDiagnostics(read, read.diagnostics), failure];
   return { id: read.id, file: path, loaded: { ...read, diagnostics }, diagnostics };
-}
-
-/** Checks files one after another (the engine is CPU-bound; order stays stable). */
-export async function checkRecordFiles(
-  paths: readonly string[],
-  options: DeriveOptions = {},
-): Promise<CheckedRecord[]> {
-  const out: CheckedRecord[] = [];
-  for (const p of paths) out.push(await checkRecordFile(p, options));
-  return out;
 }

@@ -4,7 +4,21 @@
  * each other's observations, and the tool's version.
  */
 export { loadCatalogue, type Catalogue, type CatalogueRecord, type CatalogueSystem } from './catalogue.ts';
-export { checkRecordFile, checkRecordFiles, type CheckedRecord } from './check-records.ts';
+export {
+  checkRecordFile,
+  checkRecordFiles,
+  type CheckedRecord,
+  type DerivationJob,
+  type DerivationOutcome,
+  type Deriver,
+  type Pipeline,
+} from './check-records.ts';
+export { catalogueCache } from './catalogue-cache.ts';
+export { defaultCacheFolder, openDerivationCache, type CachePart, type DerivationCache } from './derivation-cache.ts';
+export { decodeDerivationValue, encodeDerivationValue } from './derivation-codec.ts';
+export { deriveEncoded, receiveOutcome, type EncodedOutcome } from './derivation-job.ts';
+export { derivationKey } from './derivation-key.ts';
+export { engineSourceHash, engineVersion } from './engine-version.ts';
 export { toolVersion } from './tool-version.ts';
 export {
   findRecordFiles,

@@ -9,7 +9,7 @@ import { existsSync, statSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { findRecordFiles, recordFileProblems } from '../catalogue/index.ts';
+import { catalogueCache, findRecordFiles, loadCatalogue, recordFileProblems } from '../catalogue/index.ts';
 import type { CatalogueReport } from '../model/index.ts';
 import { diagnosticRow, summaryLine } from '../render/index.ts';
 import { withBuildWorkspace } from './build-workspace.ts';
@@ -17,6 +17,8 @@ import { EXIT } from './exit-status.ts';
 import { checkOutFolder } from './out-folder.ts';
 import { PathError, UsageError, type Output } from './output.ts';
 import { clearStaleSiblings, swapSiteInto } from './swap-site.ts';
+import { threadDeriver } from './derivation-pool.ts';
+import { progressLine } from './progress.ts';
 
 /** The package's own folder (where astro.config.mjs is), from this file's place in src/cli/ or lib/. */
 function packageRoot(): string {
@@ -35,6 +37,10 @@ export interface BuildOptions {
   strict: boolean;
   /** replace a non-empty out folder that no earlier build made */
   force: boolean;
+  /** use the derivation cache (default true) */
+  cache?: boolean;
+  /** threads deriving records not in the cache (default: one per core) */
+  workers?: number;
 }
 
 /** Builds the site; exit 1 only with --strict and errors in some record. */
@@ -50,6 +56,7 @@ export async function buildCommand(options: BuildOptions, out: Output): Promise<
   const target = checkOutFolder(options.out, { content, packageRoot: root, cwd, force: options.force });
   // Files whose name cannot be a page (an unsafe or doubled id) are left out of the site; say so here.
   const leftOut = (await Promise.all(files.map(recordFileProblems))).flat();
+  await deriveIntoCache(content, cwd, root, options, files.length, out);
   const report = await withBuildWorkspace(root, out, async (work) => {
     await clearStaleSiblings(target);
     const site = await astroBuild(root, work, content, cwd);
@@ -70,6 +77,33 @@ export async function buildCommand(options: BuildOptions, out: Output): Promise<
   const errors = report.summary.errors + leftOut.length;
   if (errors > 0) out.stderr(`${errors} error(s) in the records: see ${options.out}/checks/ or run mechatlas check\n`);
   return options.strict && errors > 0 ? EXIT.findings : EXIT.clean;
+}
+
+/**
+ * Derives every record not yet in the cache, across threads, before Astro starts: the site's
+ * loader then reads each derivation (and plotted series) from the cache instead of deriving in
+ * Astro's one thread. Without the cache, the loader derives everything itself.
+ */
+async function deriveIntoCache(
+  content: string,
+  cwd: string,
+  root: string,
+  options: BuildOptions,
+  total: number,
+  out: Output,
+): Promise<void> {
+  // The site's loader runs in this process from the package's sources: it finds the cache and
+  // the engine's sources through these.
+  process.env['MECHATLAS_PACKAGE_ROOT'] = root;
+  if (options.cache === false) process.env['MECHATLAS_NO_CACHE'] = '1';
+  else delete process.env['MECHATLAS_NO_CACHE'];
+  const cache = catalogueCache({ cwd, enabled: options.cache !== false });
+  if (!cache) return;
+  const deriver = threadDeriver(options.workers);
+  const progress = progressLine(out, total);
+  process.env['MECHATLAS_CWD'] = cwd;
+  await loadCatalogue(content, { cache, ...(deriver && { deriver }), progress: progress.update });
+  progress.end();
 }
 
 /** Runs Astro's build of the package's site over `content` into `<work>/site`, from the package folder. */

@@ -1,5 +1,7 @@
 /** `mechatlas check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]`. */
-import { checkRecordFiles, findRecordFiles } from '../catalogue/index.ts';
+import { catalogueCache, checkRecordFiles, findRecordFiles } from '../catalogue/index.ts';
+import { threadDeriver } from './derivation-pool.ts';
+import { progressLine } from './progress.ts';
 import { catalogueReport } from '../render/index.ts';
 import { markdownReport } from '../render/index.ts';
 import { sarifReport } from '../render/index.ts';
@@ -23,6 +25,10 @@ export interface CheckOptions {
   base?: string;
   /** relative error above which an approximation is reported invalid */
   approximationThreshold?: number;
+  /** use the derivation cache (default true; `--no-cache` turns it off) */
+  cache?: boolean;
+  /** threads deriving records not in the cache (default: one per core) */
+  workers?: number;
 }
 
 /** Runs the check and returns the exit code: 0 no error, 1 an error in any record, 3 mechatlas failed on one. */
@@ -39,10 +45,21 @@ export async function checkCommand(options: CheckOptions, out: Output): Promise<
   const threshold = options.approximationThreshold;
   if (threshold !== undefined && !(threshold > 0))
     throw new UsageError('--approximation-threshold must be a positive number, e.g. 0.1 for 10 %');
+  const progress = progressLine(out, selected.length, {
+    json: options.format === 'json' || options.format === 'sarif',
+  });
+  const cache = catalogueCache({ enabled: options.cache !== false });
+  const deriver = threadDeriver(options.workers);
   const checked = await checkRecordFiles(
     selected,
     threshold === undefined ? {} : { approximationThreshold: threshold },
+    {
+      ...(cache && { cache }),
+      ...(deriver && { deriver }),
+      progress: progress.update,
+    },
   );
+  progress.end();
   const report = catalogueReport(checked, toolVersion());
   out.stdout(render(report as never));
   return reportStatus(report.records);

@@ -18,18 +18,23 @@ const USAGE = `usage: mechatlas <command> [options]
 
 commands:
   check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]
-        [--approximation-threshold 0.1]
+        [--approximation-threshold 0.1] [--no-cache] [--workers N]
                       check records (default folder content/mechanisms); --base keeps
                       the records changed since GITREF; the threshold is the relative
                       error above which an approximation is reported invalid
-  derive FILE         print one record's derivation step by step
+  derive FILE [--no-cache]
+                      print one record's derivation step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
                       write the record's mass-action model as SBML Level 3 Version 2
-  build [--content DIR] [--out DIR] [--strict] [--force]
+  build [--content DIR] [--out DIR] [--strict] [--force] [--no-cache] [--workers N]
                       build the catalogue site (default content/mechanisms into dist);
                       --strict fails when a record has errors; --force replaces a
                       non-empty folder that an earlier build did not make
+
+  Derivations are kept in .mechatlas-cache/ in the working folder (safe to delete);
+  --no-cache derives everything afresh; --workers sets the threads that derive
+  records not in the cache (default one per core).
 
 options:
   -h, --help          this text
@@ -94,6 +99,7 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
           format: { type: 'string', default: 'text' },
           base: { type: 'string' },
           'approximation-threshold': { type: 'string' },
+          ...PIPELINE_OPTIONS,
         },
       });
       const threshold = values['approximation-threshold'];
@@ -103,14 +109,19 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
           format: values.format,
           ...(values.base !== undefined && { base: values.base }),
           ...(threshold !== undefined && { approximationThreshold: Number(threshold) }),
+          ...pipelineOptions(values),
         },
         out,
       );
     }
     case 'derive': {
-      const { positionals } = parseArgs({ args: rest, allowPositionals: true, options: {} });
+      const { values, positionals } = parseArgs({
+        args: rest,
+        allowPositionals: true,
+        options: { 'no-cache': PIPELINE_OPTIONS['no-cache'] },
+      });
       if (positionals.length !== 1) throw new UsageError('derive takes exactly one record file');
-      return deriveCommand(positionals[0]!, out);
+      return deriveCommand(positionals[0]!, out, { cache: !values['no-cache'] });
     }
     case 'new': {
       const { values, positionals } = parseArgs({
@@ -140,16 +151,36 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
           out: { type: 'string', default: 'dist' },
           strict: { type: 'boolean', default: false },
           force: { type: 'boolean', default: false },
+          ...PIPELINE_OPTIONS,
         },
       });
       return buildCommand(
-        { content: values.content, out: values.out, strict: values.strict, force: values.force },
+        {
+          content: values.content,
+          out: values.out,
+          strict: values.strict,
+          force: values.force,
+          ...pipelineOptions(values),
+        },
         out,
       );
     }
     default:
       throw new UsageError(`unknown command '${command}'`);
   }
+}
+
+/** The options of the commands that derive many records: the cache, and the threads. */
+const PIPELINE_OPTIONS = {
+  'no-cache': { type: 'boolean', default: false },
+  workers: { type: 'string' },
+} as const;
+
+function pipelineOptions(values: { 'no-cache'?: boolean; workers?: string }): { cache: boolean; workers?: number } {
+  const workers = values.workers === undefined ? undefined : Number(values.workers);
+  if (workers !== undefined && !(Number.isInteger(workers) && workers >= 1 && workers <= 256))
+    throw new UsageError('--workers must be a whole number of threads, 1 or more');
+  return { cache: !values['no-cache'], ...(workers !== undefined && { workers }) };
 }
 
 function isParseArgsError(error: unknown): boolean {

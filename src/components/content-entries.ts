@@ -1,40 +1,74 @@
 /**
- * Typed access to the site's content collections (filled by src/content.config.ts from the
- * catalogue). The collections store plain JSON; the one place their types are restored is here.
+ * Typed access to the catalogue the pages render: read once per build from src/site (which loads,
+ * derives — through the derivation cache — and builds the page models once per process), made
+ * plain JSON once (what the pages saw when they read content collections), and shared by
+ * reference with every page. Reading a content collection deep-copies every entry on each call,
+ * and species and mechanism pages each read whole collections: quadratic in the catalogue.
+ * The lists handed out are frozen (typed as plain arrays for the pages), since every page shares them.
  */
-import { getCollection } from 'astro:content';
-import type { RecordView, SpeciesPage, SystemView } from '../site/index.ts';
+import { loadCatalogue, type Catalogue, type RecordView, type SpeciesPage, type SystemView } from '../site/index.ts';
 
-/** What each collection holds. */
+/** What each list of entries holds. */
 interface Collections {
   mechanisms: RecordView;
   species: SpeciesPage;
   systems: SystemView;
 }
 
-/** Every entry of a collection as its id and its typed data, in the collection's order. */
+interface Shared {
+  entries: { [K in keyof Collections]: readonly { id: string; data: Collections[K] }[] };
+  records: readonly RecordView[];
+  species: readonly SpeciesPage[];
+  systems: readonly SystemView[];
+  slugs: ReadonlyMap<string, string>;
+}
+
+let shared: Promise<Shared> | undefined;
+
+function share(catalogue: Catalogue): Shared {
+  const plain = JSON.parse(JSON.stringify(catalogue)) as Catalogue;
+  const records = Object.freeze([...plain.records].sort((a, b) => a.id.localeCompare(b.id)));
+  const species = Object.freeze([...plain.species].sort((a, b) => a.symbol.localeCompare(b.symbol)));
+  const systems = Object.freeze([...plain.systems].sort((a, b) => a.system.localeCompare(b.system)));
+  return {
+    entries: {
+      mechanisms: Object.freeze(plain.records.map((r) => ({ id: r.id, data: r }))),
+      species: Object.freeze(plain.species.map((s) => ({ id: s.slug, data: s }))),
+      systems: Object.freeze(plain.systems.map((s) => ({ id: s.system, data: s }))),
+    },
+    records,
+    species,
+    systems,
+    slugs: new Map(species.map((s) => [s.symbol, s.slug])),
+  };
+}
+
+function catalogue(): Promise<Shared> {
+  shared ??= loadCatalogue().then(share);
+  return shared;
+}
+
+/** Every entry of a list as its id and its data, in the catalogue's order (a new array; the entries are shared). */
 export async function entries<K extends keyof Collections>(name: K): Promise<{ id: string; data: Collections[K] }[]> {
-  const stored = await getCollection(name);
-  // The loader stored exactly these shapes (content.config.ts); Astro types them as plain records.
-  return stored.map((e) => ({ id: e.id, data: e.data as unknown as Collections[K] }));
+  return [...((await catalogue()).entries[name] as readonly { id: string; data: Collections[K] }[])];
 }
 
 /** Every record, sorted by id. */
 export async function atlasRecords(): Promise<RecordView[]> {
-  return (await entries('mechanisms')).map((e) => e.data).sort((a, b) => a.id.localeCompare(b.id));
+  return (await catalogue()).records as RecordView[];
 }
 
 /** Every species, sorted by symbol. */
 export async function atlasSpecies(): Promise<SpeciesPage[]> {
-  return (await entries('species')).map((e) => e.data).sort((a, b) => a.symbol.localeCompare(b.symbol));
+  return (await catalogue()).species as SpeciesPage[];
 }
 
 /** Every reaction system, sorted by name. */
 export async function atlasSystems(): Promise<SystemView[]> {
-  return (await entries('systems')).map((e) => e.data).sort((a, b) => a.system.localeCompare(b.system));
+  return (await catalogue()).systems as SystemView[];
 }
 
 /** Species symbol → page slug, for links. */
 export async function atlasSlugs(): Promise<Map<string, string>> {
-  return new Map((await atlasSpecies()).map((s) => [s.symbol, s.slug]));
+  return (await catalogue()).slugs as Map<string, string>;
 }

@@ -3,7 +3,7 @@
  * record, the species across records with their roles, and the systems with their rivals side
  * by side. Every value comes from the catalogue layer; nothing here derives chemistry.
  */
-import { loadCatalogue as loadRecords, type Catalogue as LoadedCatalogue } from '../catalogue/index.ts';
+import { catalogueCache, loadCatalogue as loadRecords, type Catalogue as LoadedCatalogue } from '../catalogue/index.ts';
 import type { ObservationJson } from '../model/index.ts';
 import { observationJson } from '../render/index.ts';
 import { recordView, type RecordView } from './record-view.ts';
@@ -39,11 +39,16 @@ export interface Catalogue {
 
 const cache = new Map<string, Promise<Catalogue>>();
 
-/** The catalogue of a folder of records (default: the demo content), built once. */
+/**
+ * The catalogue of a folder of records (default: the demo content), built once per process; the
+ * derivations come from the derivation cache where it holds them (`mechatlas build` fills it
+ * before Astro starts), and the plots are drawn once per record.
+ */
 export function loadCatalogue(folder = process.env['MECHATLAS_CONTENT'] ?? 'content/mechanisms'): Promise<Catalogue> {
   let pending = cache.get(folder);
   if (!pending) {
-    pending = loadRecords(folder).then(siteCatalogue);
+    const derivations = catalogueCache();
+    pending = loadRecords(folder, derivations ? { cache: derivations } : {}).then(siteCatalogue);
     cache.set(folder, pending);
   }
   return pending;

@@ -16,6 +16,7 @@ vi.mock('../../src/engine/index.ts', async (importOriginal) => {
   };
 });
 
+process.env['MECHATLAS_NO_CACHE'] = '1'; // the fault is injected into deriving: a cached derivation would hide it
 const { checkRecordFiles } = await import('../../src/catalogue/index.ts');
 const { runMain } = await import('../cli/run-cli.ts');
 

@@ -1,6 +1,6 @@
 /**
  * Benchmark: how long checking a catalogue takes, and how the route search grows with steps.
- * Run with `npm run bench`. Figures vary with the machine's load: run it twice and report both.
+ * Run with `npm run bench:demo`. Figures vary with the machine's load: run it twice and report both.
  * The synthetic records are generated here (not stored); they are not chemistry, only load.
  */
 import { readdirSync, readFileSync } from 'node:fs';
@@ -47,7 +47,7 @@ for (const n of [4, 8, 12, 16]) {
   time(`  n = ${n}`, 3, () => deriveMechanism(loaded.record!));
 }
 
-/** `npm run bench -- --site 10`: build the site of the demo copied ten times (ids suffixed) and time it. */
+/** `npm run bench:demo -- --site 10`: build the site of the demo copied ten times (ids suffixed) and time it. */
 const siteCopies = Number(process.argv[process.argv.indexOf('--site') + 1] ?? 0);
 if (process.argv.includes('--site') && siteCopies > 0) {
   const { mkdtempSync, writeFileSync, mkdirSync, rmSync } = await import('node:fs');
