@@ -16,7 +16,15 @@ export {
 } from './report/record-report.ts';
 export { sarifReport } from './report/sarif.ts';
 export { primaryChecks, tallyVerdicts } from './report/verdict-tally.ts';
-export { byPosition, diagnosticRow, summaryLine, textReport } from './report/text.ts';
+export { byPosition, diagnosticRow, findingLines, positionWords } from './report/finding-text.ts';
+export {
+  blockingWords,
+  findingCounts,
+  summaryLine,
+  summarySentences,
+  type FindingCounts,
+} from './report/summary-words.ts';
+export { findingsSection, RECORD_SECTIONS, recordHeading, textReport, type TextSection } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
 export { sbmlDocument } from './sbml/sbml.ts';

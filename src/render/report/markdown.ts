@@ -1,7 +1,8 @@
 /** The markdown reporter, for a pull-request comment: a summary, then each record's findings. */
 import type { CatalogueReport } from '../../model/index.ts';
 import { escapeControlCharacters } from './control-characters.ts';
-import { byPosition, summaryLine } from './text.ts';
+import { byPosition } from './finding-text.ts';
+import { summaryLine } from './summary-words.ts';
 
 const MARK: Record<string, string> = { error: '✗ error', warning: '⚠ warning', info: 'ℹ note' };
 
