@@ -6,6 +6,7 @@ import { sarifReport } from '../render/index.ts';
 import { textReport } from '../render/index.ts';
 import { reportStatus } from './exit-status.ts';
 import { changedSince } from './git-changes.ts';
+import { recordsAtBase } from './records-at-base.ts';
 import { PathError, UsageError, type Output } from './output.ts';
 import { toolVersion } from '../catalogue/index.ts';
 
@@ -44,6 +45,14 @@ export async function checkCommand(options: CheckOptions, out: Output): Promise<
     threshold === undefined ? {} : { approximationThreshold: threshold },
   );
   const report = catalogueReport(checked, toolVersion());
-  out.stdout(render(report as never));
+  // The review shows each changed record's chemistry before → after: the base's records are checked too.
+  if (options.format === 'markdown' && options.base !== undefined) {
+    const records = await recordsAtBase(
+      options.base,
+      selected,
+      threshold === undefined ? {} : { approximationThreshold: threshold },
+    );
+    out.stdout(markdownReport(report, { base: { ref: options.base, records } }));
+  } else out.stdout(render(report as never));
   return reportStatus(report.records);
 }

@@ -6,7 +6,15 @@
 export { catalogueReport, reportOf } from './report/catalogue-report.ts';
 export { escapeControlCharacters } from './report/control-characters.ts';
 export { derivationText, type DerivedRecord } from './report/derivation-text.ts';
-export { markdownReport } from './report/markdown.ts';
+export { markdownReport, type MarkdownOptions } from './report/markdown.ts';
+export { MARKDOWN_SECTIONS, recordSection, type MarkdownSection } from './report/markdown-record.ts';
+export {
+  comparedFacts,
+  comparedVerdicts,
+  verdictWords,
+  type ComparedFact,
+  type ComparedVerdict,
+} from './report/record-comparison.ts';
 export {
   diagnosticJson,
   observationJson,

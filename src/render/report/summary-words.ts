@@ -43,17 +43,25 @@ export function blockingWords(counts: FindingCounts): string {
   return `${have} ${error.findings === 1 ? 'an error' : 'errors'} that block${error.findings === 1 ? 's' : ''}${error.findings > error.records ? ` (${error.findings} in all)` : ''}`;
 }
 
+/** The findings that do not block, in one clause: "3 warnings in 1 record, 8 notes in 5 records" (empty: none). */
+export function otherFindingsWords(counts: FindingCounts): string {
+  return (['warning', 'info'] as const)
+    .filter((s) => counts[s].findings > 0)
+    .map((s) => inRecords(counts[s], s))
+    .join(', ');
+}
+
 /**
  * The summary on one line: "13 records checked: nothing blocks; 3 warnings in 1 record, 8 notes in
  * 5 records; observed orders: 31 consistent, 3 contradicted".
  */
-export function summaryLine(report: CatalogueReport): string {
+export function summaryLine(report: CatalogueReport, checked = 'record'): string {
   const counts = findingCounts(report.records);
-  const rest = (['warning', 'info'] as const).filter((s) => counts[s].findings > 0).map((s) => inRecords(counts[s], s));
+  const others = otherFindingsWords(counts);
   const orders = report.summary.observations && verdictCounts(report.summary.observations);
   return [
-    `${plural(counts.records, 'record')} checked: ${blockingWords(counts)}`,
-    ...(rest.length > 0 ? [rest.join(', ')] : []),
+    `${plural(counts.records, checked)} checked: ${blockingWords(counts)}`,
+    ...(others ? [others] : []),
     ...(orders ? [`observed orders: ${orders}`] : []),
   ].join('; ');
 }
