@@ -68,6 +68,8 @@ describe('public API', () => {
       'checkRecordFile',
       'checkRecordFiles',
       'findRecordFiles',
+      'formatRecordFile',
+      'formatRecordText',
       'isPublishable',
       'loadCatalogue',
       'recordFileProblems',

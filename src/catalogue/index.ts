@@ -8,8 +8,11 @@ export { checkRecordFile, checkRecordFiles, type CheckedRecord } from './check-r
 export { toolVersion } from './tool-version.ts';
 export {
   findRecordFiles,
+  formatRecordFile,
+  formatRecordText,
   isPublishable,
   MAX_ID_LENGTH,
   recordFileProblems,
   recordIdProblem,
+  type FormattedRecordFile,
 } from '../records/index.ts';

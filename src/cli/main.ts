@@ -7,6 +7,7 @@ import { buildCommand } from './build-command.ts';
 import { checkCommand } from './check-command.ts';
 import { deriveCommand } from './derive-command.ts';
 import { exportCommand } from './export-command.ts';
+import { fmtCommand } from './fmt-command.ts';
 import { newCommand } from './new-command.ts';
 import { EXIT } from './exit-status.ts';
 import { describeFileSystemError } from './file-system-error.ts';
@@ -26,6 +27,11 @@ commands:
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
                       write the record's mass-action model as SBML Level 3 Version 2
+  fmt [DIR|FILE…] [--check]
+                      put records in one layout (fields in the schema's order,
+                      two-space indentation, quotes only where needed), keeping
+                      every value and comment; --check writes nothing and exits 1
+                      when a file would change
   build [--content DIR] [--out DIR] [--strict] [--force]
                       build the catalogue site (default content/mechanisms into dist);
                       --strict fails when a record has errors; --force replaces a
@@ -146,6 +152,14 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
         { content: values.content, out: values.out, strict: values.strict, force: values.force },
         out,
       );
+    }
+    case 'fmt': {
+      const { values, positionals } = parseArgs({
+        args: rest,
+        allowPositionals: true,
+        options: { check: { type: 'boolean', default: false } },
+      });
+      return fmtCommand({ targets: positionals, check: values.check }, out);
     }
     default:
       throw new UsageError(`unknown command '${command}'`);
