@@ -8,6 +8,7 @@ import { checkCommand } from './check-command.ts';
 import { deriveCommand } from './derive-command.ts';
 import { exportCommand } from './export-command.ts';
 import { fmtCommand } from './fmt-command.ts';
+import { liveCommand } from './live-command.ts';
 import { newCommand } from './new-command.ts';
 import { EXIT } from './exit-status.ts';
 import { describeFileSystemError } from './file-system-error.ts';
@@ -36,6 +37,10 @@ commands:
                       build the catalogue site (default content/mechanisms into dist);
                       --strict fails when a record has errors; --force replaces a
                       non-empty folder that an earlier build did not make
+  live [--content DIR] [--port 4321] [--host 127.0.0.1]
+                      serve the catalogue on this computer while you write: saving
+                      a record updates its page (law, verdicts, diagnostics), its
+                      species and its system; Ctrl-C stops
 
 options:
   -h, --help          this text
@@ -160,6 +165,18 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
         options: { check: { type: 'boolean', default: false } },
       });
       return fmtCommand({ targets: positionals, check: values.check }, out);
+    }
+    case 'live': {
+      const { values } = parseArgs({
+        args: rest,
+        allowPositionals: false,
+        options: {
+          content: { type: 'string', default: 'content/mechanisms' },
+          port: { type: 'string', default: '4321' },
+          host: { type: 'string', default: '127.0.0.1' },
+        },
+      });
+      return liveCommand({ content: values.content, port: Number(values.port), host: values.host }, out);
     }
     default:
       throw new UsageError(`unknown command '${command}'`);
