@@ -22,8 +22,9 @@ commands:
   check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]
         [--approximation-threshold 0.1]
                       check records (default folder content/mechanisms); --base keeps
-                      the records changed since GITREF; the threshold is the relative
-                      error above which an approximation is reported invalid
+                      the records changed since GITREF (markdown then shows each one
+                      before → after, for a pull request); the threshold is the
+                      relative error above which an approximation is reported invalid
   derive FILE         print one record's derivation step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
