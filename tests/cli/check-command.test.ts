@@ -27,7 +27,7 @@ describe('mechatlas check', () => {
     expect(rows[1]).toBe('  tests/fixtures/not-ok/balance-atoms.yaml');
     expect(rows[3]).toMatch(/^ {2}error {4}\[balance\/atoms\] atoms do not balance/);
     expect(rows[4]).toMatch(/^ +at line 7, column \d+$/);
-    expect(rows.at(-1)).toBe('1 record has an error that blocks.');
+    expect(rows.at(-1)).toBe('1 record has an error that blocks: fix it first (exit status 1).');
   });
 
   it('checks every record even when some fail', async () => {

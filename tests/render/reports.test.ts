@@ -58,7 +58,7 @@ describe('reports', () => {
       '           how to fix: write step 1 as reversible (<=>)',
       '',
       'Checked 1 record.',
-      '1 record has an error that blocks.',
+      '1 record has an error that blocks: fix it first (exit status 1).',
       'Observed orders against the derived laws: 1 consistent, 2 not excluded, 1 no prediction.',
     ]);
   });

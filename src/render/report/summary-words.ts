@@ -78,7 +78,9 @@ export function summarySentences(report: CatalogueReport): string[] {
   const out = [checked];
   if (clean < records)
     out.push(
-      counts.error.records === 0 ? 'Nothing blocks: no record has an error.' : `${capital(blockingWords(counts))}.`,
+      counts.error.records === 0
+        ? 'Nothing blocks: no record has an error.'
+        : `${capital(blockingWords(counts))}: fix ${counts.error.findings === 1 ? 'it' : 'them'} first (exit status 1).`,
     );
   const { warning, info } = counts;
   if (warning.findings > 0)
