@@ -47,12 +47,13 @@ export async function checkCommand(options: CheckOptions, out: Output): Promise<
   const report = catalogueReport(checked, toolVersion());
   // The review shows each changed record's chemistry before → after: the base's records are checked too.
   if (options.format === 'markdown' && options.base !== undefined) {
-    const records = await recordsAtBase(
+    const atBase = await recordsAtBase(
       options.base,
       selected,
+      targets,
       threshold === undefined ? {} : { approximationThreshold: threshold },
     );
-    out.stdout(markdownReport(report, { base: { ref: options.base, records } }));
+    out.stdout(markdownReport(report, { base: { ref: options.base, ...atBase } }));
   } else out.stdout(render(report as never));
   return reportStatus(report.records);
 }

@@ -31,35 +31,50 @@ function textAtCommit(commit: string, root: string, file: string): string | unde
   }
 }
 
-/** Each file's record at REF, checked and reported under the file's present name; `null` where REF does not hold it. */
+/** The changed records at the base, and the records the change removes, checked as they stood at the base. */
+export interface BaseRecords {
+  /** each changed file's record at the base, under the file's present name; `null` where the base does not hold it */
+  records: Map<string, RecordReport | null>;
+  /** the records under `targets` that the base holds and the working tree no longer does */
+  removed: RecordReport[];
+}
+
+/** Each changed file's record at REF, and the records removed since REF under the folders and files checked. */
 export async function recordsAtBase(
   ref: string,
   files: readonly string[],
+  targets: readonly string[],
   options: Parameters<typeof checkRecordFile>[1] = {},
-): Promise<Map<string, RecordReport | null>> {
-  const out = new Map<string, RecordReport | null>();
-  if (files.length === 0) return out;
+): Promise<BaseRecords> {
   const commit = verifiedCommit(ref);
   const root = git(['rev-parse', '--show-toplevel']).trim();
+  const removedFiles = git(['diff', '--name-only', '--diff-filter=D', '--end-of-options', commit, '--', ...targets])
+    .split('\n')
+    .filter((f) => /\.ya?ml$/i.test(f))
+    .map((f) => relative(process.cwd(), resolve(root, f)));
   const scratch = await mkdtemp(join(tmpdir(), 'mechatlas-base-'));
   try {
-    for (const [i, file] of files.entries()) {
+    // A folder per record keeps two records of one name in different folders apart.
+    let n = 0;
+    const atBase = async (file: string): Promise<RecordReport | null> => {
       const text = textAtCommit(commit, root, file);
-      if (text === undefined) {
-        out.set(file, null);
-        continue;
-      }
-      // A folder per record keeps two records of one name in different folders apart.
-      const copy = join(scratch, String(i), relative(root, resolve(file)));
+      if (text === undefined) return null;
+      const copy = join(scratch, String(n++), relative(root, resolve(file)));
       await mkdir(dirname(copy), { recursive: true });
       await writeFile(copy, text);
       const checked = await checkRecordFile(copy, options);
       const report = recordReport({ ...checked, file });
-      const named = report.diagnostics.map((d) => (d.file === copy ? { ...d, file } : d));
-      out.set(file, { ...report, diagnostics: named });
+      return { ...report, diagnostics: report.diagnostics.map((d) => (d.file === copy ? { ...d, file } : d)) };
+    };
+    const records = new Map<string, RecordReport | null>();
+    for (const file of files) records.set(file, await atBase(file));
+    const removed: RecordReport[] = [];
+    for (const file of removedFiles) {
+      const report = await atBase(file);
+      if (report) removed.push(report);
     }
+    return { records, removed };
   } finally {
     await rm(scratch, { recursive: true, force: true });
   }
-  return out;
 }

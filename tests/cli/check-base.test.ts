@@ -24,7 +24,7 @@ describe('mechatlas check --base', () => {
     expect(runCli(['check', '--base', 'no-such-ref', join(repo, 'records')], repo).code).toBe(2);
   });
 
-  it('with --format markdown, shows each changed record before → after, and a new record as new', () => {
+  it('with --format markdown, shows each changed record before → after, a new record as new, a removed one as removed', () => {
     const repo = mkdtempSync(join(tmpdir(), 'mechatlas-git-'));
     const git = (...args: string[]) => execFileSync('git', args, { cwd: repo, stdio: 'pipe' });
     git('init', '-q');
@@ -42,11 +42,13 @@ describe('mechatlas check --base', () => {
       join(repo, 'records', 'added.yaml'),
       'title: Added\nsystem: s\nstatus: proposed\nnotation: labels\nsteps:\n  - equation: A -> B\n',
     );
+    git('rm', '-q', join('records', 'record-minimal.yaml'));
     git('add', '.');
     const { code, stdout } = runCli(['check', '--format', 'markdown', '--base', 'HEAD', join(repo, 'records')], repo);
     expect(code).toBe(0);
     expect(stdout.split('\n')[0]).toMatch(/^\*\*mechatlas review\*\* — ✓ 2 changed records checked: nothing blocks/);
-    expect(stdout).toContain('Compared with `HEAD`: 2 records changed, 1 of them new.');
+    expect(stdout).toContain('Compared with `HEAD`: 2 records changed, 1 of them new; 1 record removed.');
+    expect(stdout).toMatch(/<summary>− removed · <b>.*<\/b> · <code>.*record-minimal\.yaml<\/code><\/summary>/);
     expect(stdout).toContain('| **status** ✎ | `proposed` | **`favoured`** |');
     expect(stdout).toContain('| overall equation | `O + O2 -> O3` | `O + O2 -> O3` |');
     expect(stdout).toMatch(/<summary>.*<b>Added<\/b>.*· new record<\/summary>/);

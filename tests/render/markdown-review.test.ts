@@ -91,6 +91,14 @@ describe('markdown review', () => {
     expect(md).toContain('| **status** ✎ | — | **`favoured`** |');
   });
 
+  it('shows a record the change removes, as it stood at the base', () => {
+    const base = { ref: 'main', records: new Map<string, RecordReport | null>(), removed: [before] };
+    const md = markdownReport(reportOf([], '0'), { base });
+    expect(md).toContain('Compared with `main`: 0 records changed; 1 record removed.');
+    expect(md).toContain('<summary>− removed · <b>Binding first</b> · <code>records/route.yaml</code></summary>');
+    expect(md).toContain('| overall equation | `A + B -> P (catalysts: Cat)` | — |');
+  });
+
   it('without a base, shows this revision alone', () => {
     const md = markdownReport(reportOf([after], '0'));
     expect(md).toContain('| | this revision |');

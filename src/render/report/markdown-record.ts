@@ -94,3 +94,19 @@ export function recordSection(
   const body = sections.map((s) => s(after, before)).filter((lines) => lines.length > 0);
   return ['<details>', `<summary>${summary}</summary>`, ...body.flatMap((lines) => ['', ...lines]), '', '</details>'];
 }
+
+/** A record the change removes: its section holds what it said at the base. */
+export function removedSection(before: RecordReport): string[] {
+  const rows = comparedFacts(before).map((f) => `| ${f.what} | ${valueCell(f.after)} | — |`);
+  const summary = `− removed · <b>${inlineHtml(before.title ?? before.id)}</b> · <code>${inlineHtml(before.file)}</code>`;
+  return [
+    '<details>',
+    `<summary>${summary}</summary>`,
+    '',
+    '| | before | after |',
+    '|---|---|---|',
+    ...rows,
+    '',
+    '</details>',
+  ];
+}

@@ -6,15 +6,18 @@
 import type { CatalogueReport, RecordReport } from '../../model/index.ts';
 import { plural, SEVERITIES } from '../words/index.ts';
 import { codeSpan } from './markdown-text.ts';
-import { recordSection, type MarkdownSection } from './markdown-record.ts';
+import { recordSection, removedSection, type MarkdownSection } from './markdown-record.ts';
 import { findingCounts, summaryLine } from './summary-words.ts';
 
 /** GitHub keeps comments under 65,536 characters; past this many records the rest are only named. */
 const MAX_SECTIONS = 60;
 
 export interface MarkdownOptions {
-  /** the revision compared with, and each record there by file (`null`: the change adds it) */
-  base?: { ref: string; records: ReadonlyMap<string, RecordReport | null> };
+  /**
+   * the revision compared with, each changed record there by file (`null`: the change adds it),
+   * and the records the change removes, as they stood there
+   */
+  base?: { ref: string; records: ReadonlyMap<string, RecordReport | null>; removed?: readonly RecordReport[] };
   sections?: readonly MarkdownSection[];
 }
 
@@ -23,17 +26,20 @@ export function markdownReport(report: CatalogueReport, options: MarkdownOptions
   const counts = findingCounts(report.records);
   const mark = counts.error.records > 0 ? '✗' : '✓';
   const out = [`**mechatlas review** — ${mark} ${summaryLine(report, options.base ? 'changed record' : 'record')}`];
+  const removed = options.base?.removed ?? [];
   if (options.base) {
     const added = report.records.filter((r) => options.base!.records.get(r.file) === null).length;
+    const gone = removed.length > 0 ? `; ${plural(removed.length, 'record')} removed` : '';
     out.push(
       '',
-      `Compared with ${codeSpan(options.base.ref)}: ${plural(counts.records, 'record')} changed${added > 0 ? `, ${added} of them new` : ''}.`,
+      `Compared with ${codeSpan(options.base.ref)}: ${plural(counts.records, 'record')} changed${added > 0 ? `, ${added} of them new` : ''}${gone}.`,
     );
   }
   // What blocks first, then what deserves a look; the file order otherwise.
   const ordered = [...report.records].sort((a, b) => urgency(a) - urgency(b));
   const shown = ordered.slice(0, MAX_SECTIONS);
   for (const r of shown) out.push('', ...recordSection(r, options.base?.records.get(r.file), options.sections));
+  for (const r of removed) out.push('', ...removedSection(r));
   const left = ordered.slice(MAX_SECTIONS);
   if (left.length > 0)
     out.push('', `${plural(left.length, 'more record')} not shown: ${left.map((r) => codeSpan(r.file)).join(', ')}.`);
