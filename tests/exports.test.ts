@@ -77,6 +77,8 @@ describe('public API', () => {
       'engineSourceHash',
       'engineVersion',
       'findRecordFiles',
+      'formatRecordFile',
+      'formatRecordText',
       'isPublishable',
       'loadCatalogue',
       'openDerivationCache',

@@ -22,8 +22,11 @@ export { engineSourceHash, engineVersion } from './engine-version.ts';
 export { toolVersion } from './tool-version.ts';
 export {
   findRecordFiles,
+  formatRecordFile,
+  formatRecordText,
   isPublishable,
   MAX_ID_LENGTH,
   recordFileProblems,
   recordIdProblem,
+  type FormattedRecordFile,
 } from '../records/index.ts';

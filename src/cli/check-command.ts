@@ -8,6 +8,7 @@ import { sarifReport } from '../render/index.ts';
 import { textReport } from '../render/index.ts';
 import { reportStatus } from './exit-status.ts';
 import { changedSince } from './git-changes.ts';
+import { recordsAtBase } from './records-at-base.ts';
 import { PathError, UsageError, type Output } from './output.ts';
 import { toolVersion } from '../catalogue/index.ts';
 
@@ -61,6 +62,15 @@ export async function checkCommand(options: CheckOptions, out: Output): Promise<
   );
   progress.end();
   const report = catalogueReport(checked, toolVersion());
-  out.stdout(render(report as never));
+  // The review shows each changed record's chemistry before → after: the base's records are checked too.
+  if (options.format === 'markdown' && options.base !== undefined) {
+    const atBase = await recordsAtBase(
+      options.base,
+      selected,
+      targets,
+      threshold === undefined ? {} : { approximationThreshold: threshold },
+    );
+    out.stdout(markdownReport(report, { base: { ref: options.base, ...atBase } }));
+  } else out.stdout(render(report as never));
   return reportStatus(report.records);
 }

@@ -7,6 +7,8 @@ import { buildCommand } from './build-command.ts';
 import { checkCommand } from './check-command.ts';
 import { deriveCommand } from './derive-command.ts';
 import { exportCommand } from './export-command.ts';
+import { fmtCommand } from './fmt-command.ts';
+import { liveCommand } from './live-command.ts';
 import { newCommand } from './new-command.ts';
 import { EXIT } from './exit-status.ts';
 import { describeFileSystemError } from './file-system-error.ts';
@@ -20,17 +22,27 @@ commands:
   check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]
         [--approximation-threshold 0.1] [--no-cache] [--workers N]
                       check records (default folder content/mechanisms); --base keeps
-                      the records changed since GITREF; the threshold is the relative
-                      error above which an approximation is reported invalid
+                      the records changed since GITREF (markdown then shows each one
+                      before → after, for a pull request); the threshold is the
+                      relative error above which an approximation is reported invalid
   derive FILE [--no-cache]
                       print one record's derivation step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
                       write the record's mass-action model as SBML Level 3 Version 2
+  fmt [DIR|FILE…] [--check]
+                      put records in one layout (fields in the schema's order,
+                      two-space indentation, quotes only where needed), keeping
+                      every value and comment; --check writes nothing and exits 1
+                      when a file would change
   build [--content DIR] [--out DIR] [--strict] [--force] [--no-cache] [--workers N]
                       build the catalogue site (default content/mechanisms into dist);
                       --strict fails when a record has errors; --force replaces a
                       non-empty folder that an earlier build did not make
+  live [--content DIR] [--port 4321] [--host 127.0.0.1]
+                      serve the catalogue on this computer while you write: saving
+                      a record updates its page (law, verdicts, diagnostics), its
+                      species and its system; Ctrl-C stops
 
   Derivations are kept in .mechatlas-cache/ in the working folder (safe to delete);
   --no-cache derives everything afresh; --workers sets the threads that derive
@@ -164,6 +176,26 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
         },
         out,
       );
+    }
+    case 'fmt': {
+      const { values, positionals } = parseArgs({
+        args: rest,
+        allowPositionals: true,
+        options: { check: { type: 'boolean', default: false } },
+      });
+      return fmtCommand({ targets: positionals, check: values.check }, out);
+    }
+    case 'live': {
+      const { values } = parseArgs({
+        args: rest,
+        allowPositionals: false,
+        options: {
+          content: { type: 'string', default: 'content/mechanisms' },
+          port: { type: 'string', default: '4321' },
+          host: { type: 'string', default: '127.0.0.1' },
+        },
+      });
+      return liveCommand({ content: values.content, port: Number(values.port), host: values.host }, out);
     }
     default:
       throw new UsageError(`unknown command '${command}'`);

@@ -4,6 +4,8 @@ export { closestName, editDistance } from './closest-name.ts';
 export { describeSchemaError } from './describe-schema-error.ts';
 export type { DescribedError, SchemaProblem } from './describe-schema-error.ts';
 export { findRecordFiles } from './find-record-files.ts';
+export { formatRecordText, type FormattedRecord } from './format-record.ts';
+export { formatRecordFile, type FormattedRecordFile } from './format-record-file.ts';
 export { loadRecordFile, loadRecordSource } from './load-record.ts';
 export type { LoadedRecord } from './load-record.ts';
 export type {

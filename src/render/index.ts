@@ -6,7 +6,15 @@
 export { catalogueReport, reportOf } from './report/catalogue-report.ts';
 export { escapeControlCharacters } from './report/control-characters.ts';
 export { derivationText, type DerivedRecord } from './report/derivation-text.ts';
-export { markdownReport } from './report/markdown.ts';
+export { markdownReport, type MarkdownOptions } from './report/markdown.ts';
+export { MARKDOWN_SECTIONS, recordSection, type MarkdownSection } from './report/markdown-record.ts';
+export {
+  comparedFacts,
+  comparedVerdicts,
+  verdictWords,
+  type ComparedFact,
+  type ComparedVerdict,
+} from './report/record-comparison.ts';
 export {
   diagnosticJson,
   observationJson,
@@ -16,7 +24,15 @@ export {
 } from './report/record-report.ts';
 export { sarifReport } from './report/sarif.ts';
 export { primaryChecks, tallyVerdicts } from './report/verdict-tally.ts';
-export { byPosition, diagnosticRow, summaryLine, textReport } from './report/text.ts';
+export { byPosition, diagnosticRow, findingLines, positionWords } from './report/finding-text.ts';
+export {
+  blockingWords,
+  findingCounts,
+  summaryLine,
+  summarySentences,
+  type FindingCounts,
+} from './report/summary-words.ts';
+export { findingsSection, RECORD_SECTIONS, recordHeading, textReport, type TextSection } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
 export { sbmlDocument } from './sbml/sbml.ts';

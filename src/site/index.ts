@@ -11,6 +11,7 @@ export { renderNotes } from './notes.ts';
 export { observationRows, type ObservationRow } from './observation-rows.ts';
 export { recordView, type ObservationView, type RecordView, type SpeciesView, type StepView } from './record-view.ts';
 export {
+  forgetCatalogue,
   loadCatalogue,
   siteCatalogue,
   type Catalogue,

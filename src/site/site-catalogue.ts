@@ -54,6 +54,11 @@ export function loadCatalogue(folder = process.env['MECHATLAS_CONTENT'] ?? 'cont
   return pending;
 }
 
+/** Forgets the catalogue of a folder, so the next load reads its records again (a record was saved while serving). */
+export function forgetCatalogue(folder = process.env['MECHATLAS_CONTENT'] ?? 'content/mechanisms'): void {
+  cache.delete(folder);
+}
+
 /** The page models of a loaded catalogue. */
 export function siteCatalogue(loaded: LoadedCatalogue): Catalogue {
   const records = loaded.records.map(recordView);

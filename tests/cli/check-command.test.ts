@@ -24,8 +24,10 @@ describe('mechatlas check', () => {
     const { code, stdout } = await runMain(['check', file]);
     expect(code).toBe(1);
     const rows = stdout.trim().split('\n');
-    expect(rows[0]).toMatch(/^tests\/fixtures\/not-ok\/balance-atoms\.yaml:7:\d+ {2}error {2}.+ {2}balance\/atoms$/);
-    expect(rows.at(-1)).toBe('1 record checked: 1 error, 0 warnings, 0 notes');
+    expect(rows[1]).toBe('  tests/fixtures/not-ok/balance-atoms.yaml');
+    expect(rows[3]).toMatch(/^ {2}error {4}\[balance\/atoms\] atoms do not balance/);
+    expect(rows[4]).toMatch(/^ +at line 7, column \d+$/);
+    expect(rows.at(-1)).toBe('1 record has an error that blocks: fix it first (exit status 1).');
   });
 
   it('checks every record even when some fail', async () => {
@@ -78,7 +80,8 @@ describe('mechatlas new', () => {
     const file = join(dir, 'my-proposal.yaml');
     expect(readFileSync(file, 'utf8')).toContain('title:');
     const check = await runMain(['check', file]);
-    expect(check.stdout).toContain('0 errors');
+    expect(check.code).toBe(0);
+    expect(check.stdout).toBe('Checked 1 record: nothing to report.\n');
     expect((await runMain(['new', 'my-proposal', '--dir', dir])).code).toBe(2);
     expect((await runMain(['new', 'Bad Id', '--dir', dir])).code).toBe(2);
   });

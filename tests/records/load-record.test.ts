@@ -23,6 +23,8 @@ describe('the public API', () => {
       'editDistance',
       'findAliasProblems',
       'findRecordFiles',
+      'formatRecordFile',
+      'formatRecordText',
       'isPublishable',
       'isRecordId',
       'keyText',

@@ -1,30 +1,48 @@
-/** The markdown reporter, for a pull-request comment: a summary, then each record's findings. */
-import type { CatalogueReport } from '../../model/index.ts';
-import { escapeControlCharacters } from './control-characters.ts';
-import { byPosition, summaryLine } from './text.ts';
+/**
+ * The markdown review, for a pull-request comment: a first line a reviewer can read in a
+ * notification (whether anything blocks, and what else there is), then one collapsible section
+ * per record under review with its chemistry before → after, its verdicts and its findings.
+ */
+import type { CatalogueReport, RecordReport } from '../../model/index.ts';
+import { plural, SEVERITIES } from '../words/index.ts';
+import { codeSpan } from './markdown-text.ts';
+import { recordSection, removedSection, type MarkdownSection } from './markdown-record.ts';
+import { findingCounts, summaryLine } from './summary-words.ts';
 
-const MARK: Record<string, string> = { error: '✗ error', warning: '⚠ warning', info: 'ℹ note' };
+/** GitHub keeps comments under 65,536 characters; past this many records the rest are only named. */
+const MAX_SECTIONS = 60;
+
+export interface MarkdownOptions {
+  /**
+   * the revision compared with, each changed record there by file (`null`: the change adds it),
+   * and the records the change removes, as they stood there
+   */
+  base?: { ref: string; records: ReadonlyMap<string, RecordReport | null>; removed?: readonly RecordReport[] };
+  sections?: readonly MarkdownSection[];
+}
 
 /** Renders the report as GitHub-flavoured markdown. */
-export function markdownReport(report: CatalogueReport): string {
-  const out = ['## mechatlas review', '', summaryLine(report), ''];
-  out.push('| record | system | status | overall equation | errors | warnings |', '|---|---|---|---|---|---|');
-  for (const r of report.records) {
-    const n = (s: string) => r.diagnostics.filter((d) => d.severity === s).length;
+export function markdownReport(report: CatalogueReport, options: MarkdownOptions = {}): string {
+  const counts = findingCounts(report.records);
+  const mark = counts.error.records > 0 ? '✗' : '✓';
+  const out = [`**mechatlas review** — ${mark} ${summaryLine(report, options.base ? 'changed record' : 'record')}`];
+  const removed = options.base?.removed ?? [];
+  if (options.base) {
+    const added = report.records.filter((r) => options.base!.records.get(r.file) === null).length;
+    const gone = removed.length > 0 ? `; ${plural(removed.length, 'record')} removed` : '';
     out.push(
-      `| ${cell(r.id)} | ${cell(r.system ?? '')} | ${cell(r.status ?? '')} | ${cell(r.overall?.text ?? '—')} | ${n('error')} | ${n('warning')} |`,
+      '',
+      `Compared with ${codeSpan(options.base.ref)}: ${plural(counts.records, 'record')} changed${added > 0 ? `, ${added} of them new` : ''}${gone}.`,
     );
   }
-  for (const r of report.records) {
-    const findings = [...r.diagnostics].sort(byPosition);
-    if (findings.length === 0) continue;
-    out.push('', `### ${cell(r.id)}`, '', '| where | severity | message | rule |', '|---|---|---|---|');
-    for (const d of findings) {
-      out.push(
-        `| ${codeSpan(`${d.file ?? r.file}:${d.line ?? 1}:${d.column ?? 1}`)} | ${MARK[d.severity] ?? d.severity} | ${cell(d.message)}${d.note ? `<br>_how to fix:_ ${cell(d.note)}` : ''} | ${codeSpan(d.rule)} |`,
-      );
-    }
-  }
+  // What blocks first, then what deserves a look; the file order otherwise.
+  const ordered = [...report.records].sort((a, b) => urgency(a) - urgency(b));
+  const shown = ordered.slice(0, MAX_SECTIONS);
+  for (const r of shown) out.push('', ...recordSection(r, options.base?.records.get(r.file), options.sections));
+  for (const r of removed) out.push('', ...removedSection(r));
+  const left = ordered.slice(MAX_SECTIONS);
+  if (left.length > 0)
+    out.push('', `${plural(left.length, 'more record')} not shown: ${left.map((r) => codeSpan(r.file)).join(', ')}.`);
   out.push(
     '',
     '_Derived rate laws are models. Decisions on scale-up, thermal hazards or exposure rest with calorimetry, local codes and licensed practice._',
@@ -32,36 +50,8 @@ export function markdownReport(report: CatalogueReport): string {
   return out.join('\n') + '\n';
 }
 
-// What GitHub would turn into a notification or a link: @-mentions, web addresses, issue numbers.
-const LIVE = /(@[A-Za-z0-9][\w./-]*|(?:https?|ftp|mailto|file|data|javascript):\S*|www\.\S+|#\d+)/i;
-
-/**
- * Record text made inert for a table cell of a pull-request comment: markdown punctuation and
- * HTML escaped (no image, link or emphasis is formed), mentions and addresses put in code spans
- * (no one is notified, nothing is fetched), control characters shown, all on one line.
- */
-function cell(text: string): string {
-  const line = escapeControlCharacters(text.replace(/\r?\n/g, ' '));
-  return line
-    .split(LIVE)
-    .map((part, i) => (i % 2 === 1 ? codeSpan(part) : escapeMarkdown(part)))
-    .join('');
-}
-
-/** A backslash before the marks that form links, images, emphasis, math and cells; HTML's characters as entities. */
-function escapeMarkdown(text: string): string {
-  return text
-    .replace(/[\\`*_[\]~|$]/g, (c) => `\\${c}`)
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;');
-}
-
-/** A code span that holds any text: a fence longer than its longest run of backticks, pipes escaped for the table. */
-function codeSpan(text: string): string {
-  const line = escapeControlCharacters(text.replace(/\r?\n/g, ' '));
-  const longest = Math.max(0, ...[...line.matchAll(/`+/g)].map((m) => m[0].length));
-  const fence = '`'.repeat(longest + 1);
-  const pad = line.startsWith('`') || line.endsWith('`') ? ' ' : '';
-  return `${fence}${pad}${line.replace(/\|/g, '\\|')}${pad}${fence}`;
+/** 0 for a record with an error, 1 with a warning, 2 with a note, 3 with no findings. */
+function urgency(r: RecordReport): number {
+  const i = SEVERITIES.findIndex((s) => r.diagnostics.some((d) => d.severity === s));
+  return i < 0 ? SEVERITIES.length : i;
 }

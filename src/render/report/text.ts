@@ -1,36 +1,36 @@
-/** The text reporter: one row per diagnostic, sorted by file, line and column, then a summary line. */
-import type { CatalogueReport } from '../../model/index.ts';
-import type { DiagnosticJson } from '../../model/index.ts';
+/**
+ * The text report, for a chemist at a terminal: each record with findings under its title and
+ * file, its findings beneath in order of position, then a summary in plain words. A record's
+ * block is a list of sections, one per concern, so a new concern adds a section.
+ */
+import type { CatalogueReport, RecordReport } from '../../model/index.ts';
 import { escapeControlCharacters as printable } from './control-characters.ts';
-import { verdictCounts } from '../words/index.ts';
+import { byPosition, findingLines } from './finding-text.ts';
+import { summarySentences } from './summary-words.ts';
+
+/** One concern of a record's block: its lines, or none when it has nothing to say. */
+export type TextSection = (record: RecordReport) => string[];
+
+/** The findings of a record, in order of file, line and column. */
+export const findingsSection: TextSection = (record) =>
+  [...record.diagnostics].sort(byPosition).flatMap((d) => findingLines(d, record.file));
+
+/** The sections of a record's block, in order. */
+export const RECORD_SECTIONS: readonly TextSection[] = [findingsSection];
 
 /** Renders the report for a terminal. */
-export function textReport(report: CatalogueReport): string {
-  const rows = report.records.flatMap((r) => r.diagnostics.map((d) => ({ ...d, file: d.file ?? r.file })));
-  rows.sort(byPosition);
-  const lines = rows.flatMap((d) => [diagnosticRow(d), ...(d.note ? [`    how to fix: ${printable(d.note)}`] : [])]);
-  lines.push(summaryLine(report));
+export function textReport(report: CatalogueReport, sections: readonly TextSection[] = RECORD_SECTIONS): string {
+  const blocks = report.records.flatMap((r) => {
+    const body = sections.map((section) => section(r)).filter((lines) => lines.length > 0);
+    return body.length > 0 ? [[...recordHeading(r), ...body.flatMap((lines) => ['', ...lines])]] : [];
+  });
+  const lines = blocks.flatMap((block) => [...block, '']);
+  lines.push(...summarySentences(report));
   return lines.join('\n') + '\n';
 }
 
-/** One row: `file:line:column  severity  message  rule`, control characters shown as escapes. */
-export function diagnosticRow(d: DiagnosticJson): string {
-  return [`${printable(d.file ?? '')}:${d.line ?? 1}:${d.column ?? 1}`, d.severity, printable(d.message), d.rule].join(
-    '  ',
-  );
-}
-
-/** "12 records checked: 1 error, 2 warnings, 3 notes; observed orders: 4 consistent, 1 not excluded". */
-export function summaryLine(report: CatalogueReport): string {
-  const { records, errors, warnings, notes, observations } = report.summary;
-  const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
-  const orders = observations && verdictCounts(observations);
-  return `${plural(records, 'record')} checked: ${plural(errors, 'error')}, ${plural(warnings, 'warning')}, ${plural(notes, 'note')}${orders ? `; observed orders: ${orders}` : ''}`;
-}
-
-/** Orders diagnostics by file, then line, then column. */
-export function byPosition(a: DiagnosticJson, b: DiagnosticJson): number {
-  return (
-    (a.file ?? '').localeCompare(b.file ?? '') || (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0)
-  );
+/** The record's title (its id where it has none) and, beneath, its file. */
+export function recordHeading(record: Pick<RecordReport, 'id' | 'title' | 'file'>): string[] {
+  const title = printable(record.title ?? record.id);
+  return [`■ ${title}`, `  ${printable(record.file)}`];
 }
