@@ -33,8 +33,3 @@ export async function atlasSpecies(): Promise<SpeciesPage[]> {
 export async function atlasSystems(): Promise<SystemView[]> {
   return (await entries('systems')).map((e) => e.data).sort((a, b) => a.system.localeCompare(b.system));
 }
-
-/** Species symbol → page slug, for links. */
-export async function atlasSlugs(): Promise<Map<string, string>> {
-  return new Map((await atlasSpecies()).map((s) => [s.symbol, s.slug]));
-}

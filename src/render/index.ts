@@ -52,6 +52,7 @@ export {
   superscript,
   symbolLatex,
   trueMinus,
+  trueMinusSigns,
   VERDICTS,
   verdictCounts,
   verdictMark,
