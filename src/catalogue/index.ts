@@ -5,7 +5,9 @@
  */
 export { loadCatalogue, type Catalogue, type CatalogueRecord, type CatalogueSystem } from './catalogue.ts';
 export { checkRecordFile, checkRecordFiles, type CheckedRecord } from './check-records.ts';
+export { loadSystemRecords, systemFolderOf } from './system-records.ts';
 export { toolVersion } from './tool-version.ts';
+export type { LoadedSystemRecord, SystemRecord } from '../records/index.ts';
 export {
   findRecordFiles,
   isPublishable,

@@ -34,12 +34,14 @@ export {
   type RuleGroup,
   type SeverityGroup,
 } from './summaries.ts';
+export { systemTitle, withSystemRecord } from './system-record-view.ts';
 export {
   shortLabels,
   systemView,
   type Discriminator,
   type MatrixRow,
   type RivalColumn,
+  type SystemRecordView,
   type SystemView,
 } from './system-view.ts';
 export type {

@@ -3,11 +3,17 @@
  * record, the species across records with their roles, and the systems with their rivals side
  * by side. Every value comes from the catalogue layer; nothing here derives chemistry.
  */
-import { loadCatalogue as loadRecords, type Catalogue as LoadedCatalogue } from '../catalogue/index.ts';
+import {
+  loadCatalogue as loadRecords,
+  loadSystemRecords,
+  type Catalogue as LoadedCatalogue,
+  type LoadedSystemRecord,
+} from '../catalogue/index.ts';
 import type { ObservationJson } from '../model/index.ts';
 import { observationJson } from '../render/index.ts';
 import { recordView, type RecordView } from './record-view.ts';
 import { recordSpeciesSlugs, speciesPages, speciesPageSlugs, type SpeciesPage } from './species-pages.ts';
+import { withSystemRecord } from './system-record-view.ts';
 import { systemView, type SystemView } from './system-view.ts';
 
 export type { SpeciesOccurrence, SpeciesPage } from './species-pages.ts';
@@ -26,14 +32,16 @@ const cache = new Map<string, Promise<Catalogue>>();
 export function loadCatalogue(folder = process.env['MECHATLAS_CONTENT'] ?? 'content/mechanisms'): Promise<Catalogue> {
   let pending = cache.get(folder);
   if (!pending) {
-    pending = loadRecords(folder).then(siteCatalogue);
+    pending = Promise.all([loadRecords(folder), loadSystemRecords(folder)]).then(([loaded, systems]) =>
+      siteCatalogue(loaded, systems),
+    );
     cache.set(folder, pending);
   }
   return pending;
 }
 
-/** The page models of a loaded catalogue. */
-export function siteCatalogue(loaded: LoadedCatalogue): Catalogue {
+/** The page models of a loaded catalogue (with the system records beside it, where there are any). */
+export function siteCatalogue(loaded: LoadedCatalogue, systemRecords: readonly LoadedSystemRecord[] = []): Catalogue {
   const records = loaded.records.map(recordView);
   const pageSlugs = speciesPageSlugs(records);
   for (const r of records) r.speciesSlugs = recordSpeciesSlugs(r, pageSlugs);
@@ -43,7 +51,7 @@ export function siteCatalogue(loaded: LoadedCatalogue): Catalogue {
     const judged = new Map<string, ObservationJson[]>(
       [...s.judged].map(([id, checks]) => [id, checks.map(observationJson)]),
     );
-    return systemView(s.system, rivals, judged);
+    return withSystemRecord(systemView(s.system, rivals, judged), systemRecords);
   });
   return { records, species: speciesPages(records, pageSlugs), systems, slugs };
 }

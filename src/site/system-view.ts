@@ -6,7 +6,7 @@
  * measurement that would best tell them apart. A withdrawn rival, and a disfavoured one whose
  * record says why, is set apart: it is listed, but no measurement is suggested to rule it out.
  */
-import type { ObservationJson, VerdictCounts } from '../model/index.ts';
+import type { DiagnosticJson, ObservationJson, VerdictCounts } from '../model/index.ts';
 import { tallyVerdicts } from '../render/index.ts';
 import type { RecordView } from './record-view.ts';
 
@@ -64,8 +64,21 @@ export interface Discriminator {
   difference: number;
 }
 
+/** What the system record adds to a system's page. */
+export interface SystemRecordView {
+  /** the record's file, relative to where the catalogue was built */
+  file: string;
+  title?: string;
+  /** the overall change as written (equation notation) */
+  overall?: string;
+  description?: string;
+  diagnostics: DiagnosticJson[];
+}
+
 export interface SystemView {
   system: string;
+  /** the system's own record (title, overall change, description), where content/systems has one */
+  record?: SystemRecordView;
   rivals: RivalColumn[];
   /** symbol → species page slug, for the species the rivals write (their system's labels or shared formulas) */
   speciesSlugs: Record<string, string>;
@@ -143,7 +156,8 @@ export function systemView(
     column.survives = column.standing === 'survives';
   }
   const speciesSlugs: Record<string, string> = {};
-  for (const r of rivals) for (const [symbol, slug] of Object.entries(r.speciesSlugs ?? {})) speciesSlugs[symbol] ??= slug;
+  for (const r of rivals)
+    for (const [symbol, slug] of Object.entries(r.speciesSlugs ?? {})) speciesSlugs[symbol] ??= slug;
   return {
     system,
     rivals: columns,
