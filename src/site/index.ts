@@ -8,6 +8,7 @@ export { mentionsHazard } from './hazard.ts';
 export { doiUrl, httpUrl, sourceUrl } from './links.ts';
 export { escapeHtml, renderMath } from './math.ts';
 export { renderNotes } from './notes.ts';
+export { plainNoteHtml } from './plain-note.ts';
 export { observationRows, type ObservationRow } from './observation-rows.ts';
 export { recordView, type ObservationView, type RecordView, type SpeciesView, type StepView } from './record-view.ts';
 export {
@@ -18,6 +19,7 @@ export {
   type SpeciesPage,
 } from './site-catalogue.ts';
 export { readableSlug, speciesSlugs } from './species-slug.ts';
+export { speciesKey, speciesPageSlugs } from './species-pages.ts';
 export {
   anchorId,
   groupDiagnostics,

@@ -42,7 +42,7 @@ export function energyProfileSvg(profile: PlottedProfile, options: EnergyProfile
   const steps = profile.states.filter((s) => s.kind === 'transition').length;
   const schematic = profile.schematic || profile.states.some((s) => s.energy === undefined);
   const width = options.width ?? profileWidth(steps);
-  const height = options.height ?? (schematic ? 200 : 400);
+  const height = options.height ?? (schematic ? 150 : 400);
   const id = (options.idPrefix ?? 'energy-profile').replace(/[^A-Za-z0-9_-]/g, '_');
   const layout = layoutProfile(profile, width, height);
   const title = options.title ?? describe(profile, schematic);
