@@ -9,5 +9,6 @@ export default defineConfig({
   // Inline nothing from CDNs; KaTeX CSS and fonts are bundled by Vite from the katex package.
   vite: { build: { assetsInlineLimit: 0 } },
   devToolbar: { enabled: false },
-  telemetry: false,
+  // Astro's anonymous usage reporting is not a config option: every script that runs Astro sets
+  // ASTRO_TELEMETRY_DISABLED=1 before Astro loads (the build command, package.json scripts).
 });

@@ -19,7 +19,9 @@ export { decodeDerivationValue, encodeDerivationValue } from './derivation-codec
 export { deriveEncoded, receiveOutcome, type EncodedOutcome } from './derivation-job.ts';
 export { derivationKey } from './derivation-key.ts';
 export { engineSourceHash, engineVersion } from './engine-version.ts';
+export { loadSystemRecords, systemFolderOf } from './system-records.ts';
 export { toolVersion } from './tool-version.ts';
+export type { LoadedSystemRecord, SystemRecord } from '../records/index.ts';
 export {
   findRecordFiles,
   formatRecordFile,

@@ -20,7 +20,6 @@ interface Shared {
   records: readonly RecordView[];
   species: readonly SpeciesPage[];
   systems: readonly SystemView[];
-  slugs: ReadonlyMap<string, string>;
 }
 
 let shared: Promise<Shared> | undefined;
@@ -39,7 +38,6 @@ function share(catalogue: Catalogue): Shared {
     records,
     species,
     systems,
-    slugs: new Map(species.map((s) => [s.symbol, s.slug])),
   };
 }
 
@@ -66,9 +64,4 @@ export async function atlasSpecies(): Promise<SpeciesPage[]> {
 /** Every reaction system, sorted by name. */
 export async function atlasSystems(): Promise<SystemView[]> {
   return (await catalogue()).systems as SystemView[];
-}
-
-/** Species symbol → page slug, for links. */
-export async function atlasSlugs(): Promise<Map<string, string>> {
-  return (await catalogue()).slugs as Map<string, string>;
 }

@@ -102,6 +102,10 @@ export interface MechanismRecord {
    */
   system: Slug;
   status: Status;
+  /**
+   * One line saying why the proposal has its status, shown beside the status on every page, e.g. "contradicted by the added-ligand runs". Expected for disfavoured and withdrawn records.
+   */
+  status_reason?: string;
   notation?: Notation;
   /**
    * Free keywords for search, e.g. aqueous, halide, enzyme.

@@ -38,3 +38,5 @@ export { createValidator, recordSchema, recordValidator } from './schema-validat
 export type { RecordValidator } from './schema-validator.ts';
 export { createLocator, keyText, sourceShift } from './source-positions.ts';
 export type { RecordLocator, SourcePosition } from './source-positions.ts';
+export { loadSystemFile, loadSystemSource } from './load-system-record.ts';
+export type { LoadedSystemRecord, SystemRecord } from './load-system-record.ts';

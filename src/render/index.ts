@@ -68,6 +68,7 @@ export {
   superscript,
   symbolLatex,
   trueMinus,
+  trueMinusSigns,
   VERDICTS,
   verdictCounts,
   verdictMark,

@@ -22,6 +22,8 @@ export interface MechanismInput {
   system?: string | undefined;
   status?: string | undefined;
   tags: readonly string[];
+  /** symbol → species page slug for this record (labels belong to its system); else looked up by symbol */
+  speciesSlugs?: Readonly<Record<string, string>>;
   species: readonly {
     symbol: string;
     role?: string | undefined;
@@ -35,6 +37,8 @@ export interface MechanismInput {
 export interface SpeciesInput {
   symbol: string;
   slug: string;
+  /** the reaction system a label belongs to; absent for a formula shared by the catalogue */
+  system?: string | undefined;
   names: readonly string[];
   formula?: string | undefined;
   aliases: readonly string[];
@@ -59,7 +63,10 @@ export function buildSearchIndex(
 
 function mechanismDoc(m: MechanismInput, slugs: ReadonlyMap<string, string>): MechanismDoc {
   const species = m.species.map((s): SearchSpecies => {
-    const out: SearchSpecies = { symbol: s.symbol, slug: slugs.get(s.symbol) ?? '', aliases: [...s.aliases] };
+    const slug =
+      (m.speciesSlugs && Object.hasOwn(m.speciesSlugs, s.symbol) ? m.speciesSlugs[s.symbol] : undefined) ??
+      slugs.get(s.symbol);
+    const out: SearchSpecies = { symbol: s.symbol, slug: slug ?? '', aliases: [...s.aliases] };
     if (s.role) out.role = s.role;
     if (s.name) out.name = s.name;
     if (s.formula) out.formula = s.formula;
@@ -99,7 +106,7 @@ function speciesDoc(s: SpeciesInput, statuses: ReadonlyMap<string, string | unde
     path: `s/${s.slug}/`,
     symbol: s.symbol,
     title: s.names[0] ?? s.symbol,
-    system: '',
+    system: s.system ?? '',
     status: '',
     tags: [],
     ...nameTerms([{ names: s.names, aliases: s.aliases }]),

@@ -14,6 +14,7 @@ import {
   type SpeciesHit,
   type SpeciesResult,
 } from './search-catalogue.ts';
+import { formulaParts } from './formula-parts.ts';
 import { roleWords, type SearchBundle } from './search-doc.ts';
 
 const root = document.getElementById('catalogue-search');
@@ -94,24 +95,47 @@ function syncAddress(outcome: SearchOutcome): void {
   document.title = outcome.query ? `“${outcome.query}” · Search · mechatlas` : 'Search · mechatlas';
 }
 
+/**
+ * Species matched by formula or symbol come first when the query reads as one; mechanisms matched
+ * only through their title, tags or system are listed apart, after everything matched by a species.
+ */
 function render(outcome: SearchOutcome, into: HTMLElement, base: string): void {
   into.replaceChildren();
-  if (outcome.mechanisms.length > 0)
-    into.append(
-      section(
-        'Mechanisms',
-        'results-mechanisms',
-        outcome.mechanisms.map((r) => mechanismItem(r, base)),
-      ),
-    );
-  if (outcome.species.length > 0)
-    into.append(
-      section(
-        'Species',
-        'results-species',
-        outcome.species.map((r) => speciesItem(r, base)),
-      ),
-    );
+  const bySpecies = outcome.mechanisms.filter((r) => r.through === 'species');
+  const byWords = outcome.mechanisms.filter((r) => r.through === 'words');
+  const species =
+    outcome.species.length > 0
+      ? section(
+          'Species',
+          'results-species',
+          outcome.species.map((r) => speciesItem(r, base)),
+        )
+      : undefined;
+  const mechanisms =
+    bySpecies.length > 0
+      ? section(
+          outcome.formulaLike ? 'Mechanisms with a matching species' : 'Mechanisms',
+          'results-mechanisms',
+          bySpecies.map((r) => mechanismItem(r, base)),
+        )
+      : undefined;
+  const loose =
+    byWords.length > 0
+      ? section(
+          'Also matched in titles, tags or systems',
+          'results-loose',
+          byWords.map((r) => mechanismItem(r, base)),
+        )
+      : undefined;
+  const order = outcome.formulaLike ? [species, mechanisms, loose] : [mechanisms, species, loose];
+  into.append(...order.filter((s): s is HTMLElement => s !== undefined));
+}
+
+/** A symbol with its counts as subscripts and its charge as a superscript; the symbol as typed in data-symbol. */
+function formulaEl(symbol: string): HTMLElement {
+  const code = el('span', { class: 'symbol formula', 'data-symbol': symbol, title: symbol });
+  for (const part of formulaParts(symbol)) code.append(part.kind === 'text' ? part.text : el(part.kind, {}, part.text));
+  return code;
 }
 
 function section(title: string, id: string, items: HTMLLIElement[]): HTMLElement {
@@ -153,7 +177,7 @@ function hitItem(doc: MechanismResult['doc'], hit: SpeciesHit, base: string): HT
   const s = doc.species[hit.index]!;
   const li = el('li', { class: 'hit', 'data-symbol': s.symbol, 'data-role': s.role ?? '', 'data-how': hit.how });
   const link = s.slug ? el('a', { href: `${base}s/${s.slug}/` }) : el('span');
-  link.append(el('code', { class: 'symbol' }, s.symbol));
+  link.append(formulaEl(s.symbol));
   li.append(link);
   if (s.name) li.append(` ${s.name}`);
   li.append(
@@ -171,15 +195,18 @@ function speciesItem(r: SpeciesResult, base: string): HTMLLIElement {
   const li = el('li', { class: 'result', 'data-kind': 'species', 'data-symbol': doc.symbol });
   const head = el('p', { class: 'result-head' });
   const link = el('a', { class: 'result-link', href: `${base}${doc.path}` });
-  link.append(el('code', { class: 'symbol' }, doc.symbol));
+  link.append(formulaEl(doc.symbol));
   if (doc.identity.names[0]) link.append(` ${doc.identity.names[0]}`);
   head.append(link);
+  // A label belongs to its system: say which, so two systems' A never read as one species.
+  if (doc.system) head.append(' ', el('span', { class: 'result-system' }, `label in ${doc.system}`));
   li.append(head);
   const about = [
     doc.identity.formula && doc.identity.formula !== doc.symbol ? `formula ${doc.identity.formula}` : undefined,
     doc.identity.aliases.length > 0 ? `also ${doc.identity.aliases.join(', ')}` : undefined,
   ].filter(Boolean);
   if (about.length > 0) li.append(el('p', { class: 'result-meta' }, about.join('; ')));
+  if (r.how) li.setAttribute('data-how', r.how);
   const list = el('ul', { class: 'occurrences' });
   for (const o of r.occurrences) {
     const item = el('li', { 'data-mechanism': o.mechanism, 'data-role': o.role ?? '' });

@@ -41,6 +41,11 @@ export interface MechanismResult {
   hits: SpeciesHit[];
   /** other fields that matched: title, tags, system, status */
   fields: string[];
+  /**
+   * species: a species of the mechanism matched (symbol, formula, name, alias, role); words: only
+   * its title, tags, system or status did — listed apart, so a tag never passes for a species
+   */
+  through: 'species' | 'words';
 }
 
 export interface SpeciesResult {
@@ -58,6 +63,8 @@ export interface SearchOutcome {
   filters: SearchFilters;
   /** the query was matched with case everywhere (it is written like a formula) */
   literal: boolean;
+  /** the query reads as a formula or symbol: some species' symbol or formula contains it exactly */
+  formulaLike: boolean;
   /** no query, only filters: everything that passes the filters */
   browsing: boolean;
   mechanisms: MechanismResult[];
@@ -105,6 +112,7 @@ export function createCatalogueSearch(bundle: SearchBundle): (query: string, fil
       query,
       filters,
       literal: isLiteral,
+      formulaLike: false,
       browsing: false,
       mechanisms: [],
       species: [],
@@ -134,6 +142,7 @@ export function createCatalogueSearch(bundle: SearchBundle): (query: string, fil
       a.score - b.score || a.doc.title.localeCompare(b.doc.title);
     outcome.mechanisms.sort(order);
     outcome.species.sort(order);
+    outcome.formulaLike = outcome.species.some((s) => s.how === 'symbol' || s.how === 'formula');
     if (outcome.mechanisms.length + outcome.species.length === 0 && query !== '')
       outcome.didYouMean = sameButCase(docs, query);
     return outcome;
@@ -215,7 +224,9 @@ function mechanismResult(doc: MechanismDoc, m: Matched, filters: SearchFilters):
     if (hits.length === 0) return undefined;
   }
   const score = filters.role ? Math.min(...hits.map((h) => h.score)) : m.score;
-  return { kind: 'mechanism', doc, score, hits, fields: m.fields.filter((f) => f !== 'all') };
+  const fields = m.fields.filter((f) => f !== 'all');
+  const through = hits.length > 0 || fields.length === 0 ? 'species' : 'words';
+  return { kind: 'mechanism', doc, score, hits, fields, through };
 }
 
 function speciesResult(doc: SpeciesDoc, m: Matched, filters: SearchFilters): SpeciesResult | undefined {

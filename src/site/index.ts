@@ -8,6 +8,7 @@ export { mentionsHazard } from './hazard.ts';
 export { doiUrl, httpUrl, sourceUrl } from './links.ts';
 export { escapeHtml, renderMath } from './math.ts';
 export { renderNotes } from './notes.ts';
+export { plainNoteHtml } from './plain-note.ts';
 export { observationRows, type ObservationRow } from './observation-rows.ts';
 export { recordView, type ObservationView, type RecordView, type SpeciesView, type StepView } from './record-view.ts';
 export {
@@ -19,6 +20,7 @@ export {
   type SpeciesPage,
 } from './site-catalogue.ts';
 export { readableSlug, speciesSlugs } from './species-slug.ts';
+export { speciesKey, speciesPageSlugs } from './species-pages.ts';
 export {
   anchorId,
   groupDiagnostics,
@@ -35,12 +37,14 @@ export {
   type RuleGroup,
   type SeverityGroup,
 } from './summaries.ts';
+export { systemTitle, withSystemRecord } from './system-record-view.ts';
 export {
   shortLabels,
   systemView,
   type Discriminator,
   type MatrixRow,
   type RivalColumn,
+  type SystemRecordView,
   type SystemView,
 } from './system-view.ts';
 export type {

@@ -64,6 +64,12 @@ export interface RecordView {
   title: string;
   system?: string;
   status?: string;
+  /** one line on why the record has its status (disfavoured, withdrawn) */
+  statusReason?: string;
+  /** how the symbols are written: labels belong to the record's system, formulas to the catalogue */
+  notation: 'formulas' | 'labels';
+  /** symbol → species page slug (under /s/), filled in when the catalogue's pages are known */
+  speciesSlugs: Record<string, string>;
   tags: string[];
   contributors: string[];
   added?: string;
@@ -99,6 +105,8 @@ export function recordView(checked: CatalogueRecord): RecordView {
     file: checked.file,
     source,
     title: record?.title ?? checked.id,
+    notation: record?.notation ?? 'formulas',
+    speciesSlugs: {},
     tags: record?.tags ?? [],
     contributors: record?.contributors ?? [],
     references: record?.references ?? [],
@@ -116,6 +124,7 @@ export function recordView(checked: CatalogueRecord): RecordView {
       view,
       { system: record.system, status: record.status },
       record.added && { added: record.added },
+      record.status_reason && { statusReason: record.status_reason },
       record.notes && { notes: record.notes },
     );
   const mechanism = derivation?.mechanism;

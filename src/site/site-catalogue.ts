@@ -3,37 +3,27 @@
  * record, the species across records with their roles, and the systems with their rivals side
  * by side. Every value comes from the catalogue layer; nothing here derives chemistry.
  */
-import { catalogueCache, loadCatalogue as loadRecords, type Catalogue as LoadedCatalogue } from '../catalogue/index.ts';
+import {
+  catalogueCache,
+  loadCatalogue as loadRecords,
+  loadSystemRecords,
+  type Catalogue as LoadedCatalogue,
+  type LoadedSystemRecord,
+} from '../catalogue/index.ts';
 import type { ObservationJson } from '../model/index.ts';
 import { observationJson } from '../render/index.ts';
 import { recordView, type RecordView } from './record-view.ts';
-import { speciesSlugs } from './species-slug.ts';
+import { recordSpeciesSlugs, speciesPages, speciesPageSlugs, type SpeciesPage } from './species-pages.ts';
+import { withSystemRecord } from './system-record-view.ts';
 import { systemView, type SystemView } from './system-view.ts';
 
-export interface SpeciesOccurrence {
-  mechanism: string;
-  title: string;
-  role?: string;
-  buffered: boolean;
-}
-
-export interface SpeciesPage {
-  symbol: string;
-  slug: string;
-  names: string[];
-  formula?: string;
-  charge?: number;
-  inchi: string[];
-  smiles: string[];
-  aliases: string[];
-  occurrences: SpeciesOccurrence[];
-}
+export type { SpeciesOccurrence, SpeciesPage } from './species-pages.ts';
 
 export interface Catalogue {
   records: RecordView[];
   species: SpeciesPage[];
   systems: SystemView[];
-  /** symbol → slug, for links */
+  /** formula symbol → slug, for links to the species shared across the catalogue (labels: see each record) */
   slugs: Record<string, string>;
 }
 
@@ -48,7 +38,10 @@ export function loadCatalogue(folder = process.env['MECHATLAS_CONTENT'] ?? 'cont
   let pending = cache.get(folder);
   if (!pending) {
     const derivations = catalogueCache();
-    pending = loadRecords(folder, derivations ? { cache: derivations } : {}).then(siteCatalogue);
+    pending = Promise.all([
+      loadRecords(folder, derivations ? { cache: derivations } : {}),
+      loadSystemRecords(folder),
+    ]).then(([loaded, systems]) => siteCatalogue(loaded, systems));
     cache.set(folder, pending);
   }
   return pending;
@@ -59,51 +52,18 @@ export function forgetCatalogue(folder = process.env['MECHATLAS_CONTENT'] ?? 'co
   cache.delete(folder);
 }
 
-/** The page models of a loaded catalogue. */
-export function siteCatalogue(loaded: LoadedCatalogue): Catalogue {
+/** The page models of a loaded catalogue (with the system records beside it, where there are any). */
+export function siteCatalogue(loaded: LoadedCatalogue, systemRecords: readonly LoadedSystemRecord[] = []): Catalogue {
   const records = loaded.records.map(recordView);
-  const slugs = Object.fromEntries(speciesSlugs(records.flatMap((r) => r.species.map((s) => s.symbol))));
+  const pageSlugs = speciesPageSlugs(records);
+  for (const r of records) r.speciesSlugs = recordSpeciesSlugs(r, pageSlugs);
+  const slugs = Object.fromEntries([...pageSlugs].filter(([key]) => !key.includes('\u0000')));
   const systems = loaded.systems.map((s) => {
     const rivals = s.rivals.map((id) => records.find((r) => r.id === id)!);
     const judged = new Map<string, ObservationJson[]>(
       [...s.judged].map(([id, checks]) => [id, checks.map(observationJson)]),
     );
-    return systemView(s.system, rivals, judged);
+    return withSystemRecord(systemView(s.system, rivals, judged), systemRecords);
   });
-  return { records, species: speciesPages(records, slugs), systems, slugs };
-}
-
-function speciesPages(records: RecordView[], slugs: Record<string, string>): SpeciesPage[] {
-  const pages = new Map<string, SpeciesPage>();
-  for (const record of records) {
-    for (const s of record.species) {
-      const page = pages.get(s.symbol) ?? {
-        symbol: s.symbol,
-        slug: slugs[s.symbol]!,
-        names: [],
-        inchi: [],
-        smiles: [],
-        aliases: [],
-        occurrences: [],
-      };
-      addUnique(page.names, s.name);
-      addUnique(page.inchi, s.inchi);
-      addUnique(page.smiles, s.smiles);
-      for (const a of s.aliases) addUnique(page.aliases, a);
-      if (s.formula && !page.formula) page.formula = s.formula;
-      if (s.charge !== undefined && page.charge === undefined) page.charge = s.charge;
-      page.occurrences.push({
-        mechanism: record.id,
-        title: record.title,
-        ...(s.role && { role: s.role }),
-        buffered: s.buffered,
-      });
-      pages.set(s.symbol, page);
-    }
-  }
-  return [...pages.values()].sort((a, b) => a.symbol.localeCompare(b.symbol));
-}
-
-function addUnique(list: string[], value: string | undefined): void {
-  if (value && !list.includes(value)) list.push(value);
+  return { records, species: speciesPages(records, pageSlugs), systems, slugs };
 }

@@ -2,10 +2,11 @@
  * A reaction system's page data: its rival proposals side by side, every observation of any
  * rival judged against every rival (as the engine judged them), which rivals survive (every check
  * a pass or not excluded; a check with no prediction leaves a rival undecided), and for
- * each surviving pair the species whose predicted order differs most — the measurement that
- * would best tell them apart.
+ * each surviving pair of live rivals the species whose predicted order differs most — the
+ * measurement that would best tell them apart. A withdrawn rival, and a disfavoured one whose
+ * record says why, is set apart: it is listed, but no measurement is suggested to rule it out.
  */
-import type { ObservationJson, VerdictCounts } from '../model/index.ts';
+import type { DiagnosticJson, ObservationJson, VerdictCounts } from '../model/index.ts';
 import { tallyVerdicts } from '../render/index.ts';
 import type { RecordView } from './record-view.ts';
 
@@ -15,6 +16,13 @@ export interface RivalColumn {
   short: string;
   title: string;
   status?: string;
+  /** the record's one-line reason for its status */
+  statusReason?: string;
+  /**
+   * live: still argued for (proposed, favoured, or disfavoured without a recorded reason);
+   * set apart: withdrawn, or disfavoured with a reason — listed, but not among the contenders
+   */
+  contention: 'live' | 'set_apart';
   overallText?: string;
   overallLatex?: string;
   /** the primary rate law */
@@ -56,9 +64,24 @@ export interface Discriminator {
   difference: number;
 }
 
+/** What the system record adds to a system's page. */
+export interface SystemRecordView {
+  /** the record's file, relative to where the catalogue was built */
+  file: string;
+  title?: string;
+  /** the overall change as written (equation notation) */
+  overall?: string;
+  description?: string;
+  diagnostics: DiagnosticJson[];
+}
+
 export interface SystemView {
   system: string;
+  /** the system's own record (title, overall change, description), where content/systems has one */
+  record?: SystemRecordView;
   rivals: RivalColumn[];
+  /** symbol → species page slug, for the species the rivals write (their system's labels or shared formulas) */
+  speciesSlugs: Record<string, string>;
   /** true when the rivals do not all describe the same overall equation */
   overallDiffers: boolean;
   matrix: MatrixRow[];
@@ -83,8 +106,10 @@ export function systemView(
       standing: 'undecided',
       tally: tallyVerdicts([]),
       errors: r.errors,
+      contention: setApart(r) ? 'set_apart' : 'live',
     };
     if (r.status) c.status = r.status;
+    if (r.statusReason) c.statusReason = r.statusReason;
     if (r.report.overall) c.overallText = r.report.overall.text;
     if (r.overallLatex) c.overallLatex = r.overallLatex;
     if (law?.latex) c.rateLatex = law.latex;
@@ -130,13 +155,22 @@ export function systemView(
       rival.errors > 0 || column.tally.fail > 0 ? 'ruled_out' : column.tally.unknown > 0 ? 'undecided' : 'survives';
     column.survives = column.standing === 'survives';
   }
+  const speciesSlugs: Record<string, string> = {};
+  for (const r of rivals)
+    for (const [symbol, slug] of Object.entries(r.speciesSlugs ?? {})) speciesSlugs[symbol] ??= slug;
   return {
     system,
     rivals: columns,
+    speciesSlugs,
     overallDiffers: variants.length > 1,
     matrix,
     discriminators: discriminators(rivals, columns),
   };
+}
+
+/** Withdrawn, or disfavoured with a recorded reason: listed apart from the live rivals. */
+function setApart(r: RecordView): boolean {
+  return r.status === 'withdrawn' || (r.status === 'disfavoured' && r.statusReason !== undefined);
 }
 
 /**
@@ -166,7 +200,10 @@ export function shortLabels(ids: readonly string[]): string[] {
 }
 
 function discriminators(rivals: RecordView[], columns: RivalColumn[]): Discriminator[] {
-  const alive = rivals.filter((r) => columns.find((c) => c.id === r.id)?.survives);
+  const alive = rivals.filter((r) => {
+    const column = columns.find((c) => c.id === r.id);
+    return column?.survives && column.contention === 'live';
+  });
   const out: Discriminator[] = [];
   for (let i = 0; i < alive.length; i++) {
     for (let j = i + 1; j < alive.length; j++) {

@@ -291,7 +291,7 @@ describe.skipIf(!hasChromium && !inCI)(suite, () => {
   }, 60_000);
 
   it('a species page lists its roles in every mechanism', async () => {
-    const page = await open('/s/cat/');
+    const page = await open('/s/kx7-hydroarylation/cat/');
     const rows = page.locator('tr[data-mechanism]');
     expect(await rows.count()).toBe(3);
     expect(await rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-role')))).toEqual([

@@ -6,6 +6,7 @@
 import type { EnergyBasis } from '../../engine/index.ts';
 import type { EnergyProfile } from '../../engine/index.ts';
 import type { ProfileLayout } from './energy-profile-layout.ts';
+import { termsSvg } from './energy-profile-formula.ts';
 import { coordinate as c, escapeXml, signedValue, speciesTerms, wrapTerms } from './svg-text.ts';
 
 /** The markers of the energetic span, where one was computed. */
@@ -17,18 +18,25 @@ export interface SpanMarks {
 const HALO = 'paint-order="stroke" stroke="#fff" stroke-width="3" stroke-linejoin="round"';
 const CHAR_WIDTH = 6;
 const LINE = 12;
+/** Lines of species under a minimum before the rest is cut to "…" (the full list stays as a tooltip). */
+export const MAX_LINES = 4;
 
 /** Species below each minimum, the transition-state names and, with energies, every state's value. */
 export function stateLabels(layout: ProfileLayout, marks: SpanMarks, withValues: boolean): string[] {
+  return [...minimumLabels(layout, marks, withValues), ...transitionLabels(layout, marks, withValues)];
+}
+
+/** What is present at each minimum, below it (formulas with subscripts and charges), and its value. */
+export function minimumLabels(layout: ProfileLayout, marks: SpanMarks, withValues: boolean): string[] {
   const out: string[] = [];
   for (const m of layout.minima) {
     // Centred labels stay within their slot and clear of the energy axis.
     const chars = Math.min(layout.slot * 0.96, 170, 2 * (m.x - layout.frame.left - 6)) / CHAR_WIDTH;
-    const { lines, cut } = wrapTerms(speciesTerms(m.state.species), chars, 3);
+    const { lines, cut } = wrapTerms(speciesTerms(m.state.species), chars, MAX_LINES);
     const full = speciesTerms(m.state.species).join(' + ');
     const tip = cut ? `<title>${escapeXml(full)}</title>` : '';
     const spans = lines
-      .map((line, k) => `<tspan x="${c(m.x)}" dy="${k === 0 ? 0 : LINE}">${escapeXml(line)}</tspan>`)
+      .map((line, k) => `<tspan x="${c(m.x)}" dy="${k === 0 ? 0 : LINE}">${termsSvg(line)}</tspan>`)
       .join('');
     out.push(`<text x="${c(m.x)}" y="${c(m.y + 15)}" text-anchor="middle" ${HALO}>${tip}${spans}</text>`);
     if (withValues) {
@@ -38,6 +46,12 @@ export function stateLabels(layout: ProfileLayout, marks: SpanMarks, withValues:
       );
     }
   }
+  return out;
+}
+
+/** The name of each transition state (and its value, with energies) above its peak. */
+export function transitionLabels(layout: ProfileLayout, marks: SpanMarks, withValues: boolean): string[] {
+  const out: string[] = [];
   for (const t of layout.transitions) {
     const tag = marks.tdts_state === t.state.index ? ' · TDTS' : '';
     const name = `‡ ${stepName(t.state.step)}${tag}`;

@@ -37,16 +37,14 @@ export interface ProfileLayout {
 // Room kept clear above the highest peak (two label lines) and below the lowest minimum (three
 // lines of species): labels stay inside the frame whatever the energies.
 const HEAD_ROOM = 36;
-const FOOT_ROOM = 48;
+const FOOT_ROOM = 60;
 const SIDE = 48;
-const SCHEMATIC_PEAK = 1;
-const SCHEMATIC_RDS_PEAK = 1.6;
 
 /** Positions every state of the profile in a width × height drawing. */
 export function layoutProfile(profile: EnergyProfile, width: number, height: number): ProfileLayout {
   const frame = { left: 68, right: width - 84, top: 28, bottom: height - 52 };
   const schematic = profile.schematic || profile.states.some((s) => s.energy === undefined);
-  const value = (s: ProfileState) => (schematic ? schematicValue(s, profile.rds_step) : s.energy!);
+  const value = (s: ProfileState) => (schematic ? 0 : s.energy!);
   const values = profile.states.map(value);
   const lo = Math.min(0, ...values);
   const hi = Math.max(0, ...values);
@@ -67,9 +65,4 @@ export function layoutProfile(profile: EnergyProfile, width: number, height: num
   // Ticks over the energies drawn, so none falls in the head or foot room kept for labels.
   const ticks = schematic ? [] : niceTicks(lo, lo + range, 5);
   return { width, height, frame, minima, transitions, plateau, slot, y, ticks, schematic };
-}
-
-function schematicValue(state: ProfileState, rds: string | undefined): number {
-  if (state.kind === 'minimum') return 0;
-  return state.step !== undefined && state.step === rds ? SCHEMATIC_RDS_PEAK : SCHEMATIC_PEAK;
 }

@@ -1,6 +1,8 @@
 /**
  * An energy profile as a self-contained SVG string: one smooth hump per elementary step between
  * flat minima, every state labelled with what is present, barriers and the overall change marked.
+ * Without a full set of energies it is a neutral sequence of states with no heights. The drawing
+ * is as wide as its number of steps needs, so labels of a long cycle keep their room.
  * Black and grey only, told apart by line style, so it prints in black and white; pure and
  * deterministic, so pages and tests can compare it byte for byte.
  */
@@ -8,6 +10,7 @@ import type { EnergyBasis } from '../../engine/index.ts';
 import type { EnergyProfile } from '../../engine/index.ts';
 import { layoutProfile, type ProfileLayout } from './energy-profile-layout.ts';
 import { barrierArrows, overallChange, stateLabels, stepName, type SpanMarks } from './energy-profile-labels.ts';
+import { sequenceDrawing, sequenceNote } from './energy-profile-sequence.ts';
 import { coordinate as c, escapeXml, signedValue } from './svg-text.ts';
 
 /** Size, ids and title of the drawing. */
@@ -16,8 +19,17 @@ export interface EnergyProfileSvgOptions {
   idPrefix?: string;
   /** accessible title; by default a sentence describing the profile */
   title?: string;
+  /** by default sized to the number of steps */
   width?: number;
   height?: number;
+}
+
+/** Horizontal room per step, px: enough for about 24 characters of species under each minimum. */
+export const SLOT_WIDTH = 150;
+
+/** The width that gives every step its slot, within the plot's margins. */
+export function profileWidth(steps: number): number {
+  return Math.max(440, 68 + 84 + 96 + Math.max(1, steps) * SLOT_WIDTH);
 }
 
 /** What the plot reads: a profile, with the energetic span's results where they exist. */
@@ -27,25 +39,33 @@ const BASIS_NAME: Record<EnergyBasis, string> = { G: 'Gibbs energy', H: 'Enthalp
 
 /** Draws the profile of one turnover as an SVG document string. */
 export function energyProfileSvg(profile: PlottedProfile, options: EnergyProfileSvgOptions = {}): string {
-  const width = options.width ?? 720;
-  const height = options.height ?? 400;
+  const steps = profile.states.filter((s) => s.kind === 'transition').length;
+  const schematic = profile.schematic || profile.states.some((s) => s.energy === undefined);
+  const width = options.width ?? profileWidth(steps);
+  const height = options.height ?? (schematic ? 150 : 400);
   const id = (options.idPrefix ?? 'energy-profile').replace(/[^A-Za-z0-9_-]/g, '_');
   const layout = layoutProfile(profile, width, height);
-  const schematic = layout.schematic;
   const title = options.title ?? describe(profile, schematic);
   const arrow = `${id}-arrow`;
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" role="img" aria-label="${escapeXml(title)}" font-family="Helvetica, Arial, sans-serif" font-size="11" fill="#111">`,
     `<title>${escapeXml(title)}</title>`,
     `<defs><marker id="${arrow}" viewBox="0 0 8 8" refX="7" refY="4" markerWidth="7" markerHeight="7" orient="auto-start-reverse"><path d="M0,0.5 L8,4 L0,7.5 z" fill="#000"/></marker></defs>`,
+    ...(schematic ? sequenceDrawing(layout, profile, arrow) : energeticDrawing(layout, profile, arrow)),
+    '</svg>',
+  ].join('\n');
+}
+
+function energeticDrawing(layout: ProfileLayout, profile: PlottedProfile, arrow: string): string[] {
+  const schematic = false;
+  return [
     ...axes(layout, profile.basis, schematic, arrow),
     profilePath(layout, schematic),
     ...(schematic ? [] : barrierArrows(layout, profile.basis, arrow)),
     ...(schematic ? [] : overallChange(layout, profile, arrow)),
     ...stateLabels(layout, profile, !schematic),
     caption(layout, profile, schematic),
-    '</svg>',
-  ].join('\n');
+  ];
 }
 
 function axes(layout: ProfileLayout, basis: EnergyBasis, schematic: boolean, arrow: string): string[] {
@@ -112,6 +132,5 @@ function decimalsFor(ticks: readonly number[]): number {
 }
 
 function schematicNote(profile: EnergyProfile): string {
-  const some = profile.states.some((s) => s.index > 0 && s.energy !== undefined);
-  return some ? 'schematic (energies incomplete)' : 'schematic (no energies recorded)';
+  return sequenceNote(profile).toLowerCase();
 }

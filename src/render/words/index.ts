@@ -31,7 +31,23 @@ export {
   signedValue,
   superscript,
   trueMinus,
+  trueMinusSigns,
 } from './numbers.ts';
+export {
+  decimalPlaces,
+  measuredOrderText,
+  measurementDecimals,
+  orderLikeMeasured,
+  orderToDecimals,
+} from './measured-precision.ts';
+export {
+  concentrationUnitOf,
+  inRecordUnit,
+  recordConcentrationUnit,
+  unitText,
+  type RecordUnit,
+} from './record-units.ts';
+export { countWords, survivorsText } from './count-words.ts';
 export { predictionText } from './predictions.ts';
 export { speciesTerms } from './species-terms.ts';
 export { speciesLatex, symbolLatex } from '../../engine/index.ts';

@@ -29,6 +29,11 @@ export function trueMinus(text: string): string {
   return text.replace(/^-/, '\u2212');
 }
 
+/** Every hyphen-minus that stands before a number (at the start or after a space, bracket, = or ±) as a true minus. */
+export function trueMinusSigns(text: string): string {
+  return text.replace(/(^|[\s(=±~≈<>,;])-(?=\.?\d)/g, '$1\u2212');
+}
+
 /** A number in plain or scientific notation with `digits` significant figures: 5.63 × 10⁻⁶. */
 export function numberText(x: number, digits = 3): string {
   if (!Number.isFinite(x)) return String(x);
@@ -73,10 +78,10 @@ export function limitsText(low: number | string, high: number | string): string 
 
 /** A quantity as written in a record, made readable: `8.1e4 M^-1 s^-1` → `8.1 × 10⁴ M⁻¹ s⁻¹`. */
 export function quantityText(text: string): string {
-  return text
+  return trueMinusSigns(text.trim())
     .replace(/\+\/-/g, '±')
     .replace(
-      /^([+-]?(?:\d+\.?\d*|\.\d+))[eE]([+-]?\d+)/,
+      /^([+\u2212-]?(?:\d+\.?\d*|\.\d+))[eE]([+-]?\d+)/,
       (_, m: string, e: string) => `${m} × 10${superscript(String(Number(e)))}`,
     )
     .replace(/\^\(?([+-]?\d+)\)?/g, (_, e: string) => superscript(e));

@@ -6,7 +6,7 @@ import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { deriveMechanism } from '../../../src/engine/derive.ts';
 import { energyAnalysis } from '../../../src/engine/energy/energy-analysis.ts';
-import { energyProfileSvg } from '../../../src/render/plots/energy-profile-svg.ts';
+import { energyProfileSvg, profileWidth } from '../../../src/render/plots/energy-profile-svg.ts';
 import { loadRecordSource } from '../../../src/records/index.ts';
 
 function energyOf(yaml: string, id = 'svg-case') {
@@ -59,7 +59,7 @@ describe('energy profile SVG', () => {
     expect(energyProfileSvg(energy, { idPrefix: 'kx7' })).toBe(svg);
   });
 
-  it('draws a schematic profile with the declared rds hump tallest', () => {
+  it('draws a profile without energies as a neutral sequence of states: no heights, no taller rds', () => {
     const energy = energyOf(`${header}species:\n  E: { role: catalyst }\nsteps:
   - { equation: E + S <=> ES, label: bind }
   - { equation: ES -> EP, label: chem, rds: true }
@@ -68,14 +68,32 @@ describe('energy profile SVG', () => {
     const svg = energyProfileSvg(energy, { idPrefix: 'schematic' });
     save('energy-profile-schematic.svg', svg);
     expect(texts(svg)).toEqual(
-      expect.arrayContaining(['schematic (no energies recorded)', 'Gibbs energy', '‡ chem', 'E + S', 'E + P']),
+      expect.arrayContaining([
+        'Sequence of states: no energies recorded, so no heights are drawn',
+        'chem',
+        'E + S',
+        'E + P',
+      ]),
     );
-    expect(svg).toContain('stroke-dasharray="7 4"');
-    expect(svg).not.toMatch(/ΔG‡/);
-    const peak = (label: string) =>
-      Number(new RegExp(`<text x="[\\d.]+" y="([\\d.]+)"[^>]*>‡ ${label}<`).exec(svg)?.[1]);
-    expect(peak('chem')).toBeLessThan(peak('bind'));
-    expect(peak('chem')).toBeLessThan(peak('release'));
+    // No energy axis, no humps, no barriers: nothing the record does not give.
+    expect(svg).not.toMatch(/Gibbs energy \/|ΔG‡|<path d="M[^"]* C/);
+    const named = (label: string) =>
+      Number(new RegExp(`<text x="[\\d.]+" y="([\\d.]+)"[^>]*>${label}<`).exec(svg)?.[1]);
+    expect(named('chem')).toBe(named('bind'));
+    expect(named('chem')).toBe(named('release'));
+  });
+
+  it('is as wide as its steps need, and writes formulas with subscripts and charges in tspans', () => {
+    const energy = energyOf(`${header}steps:
+  - { equation: H3O+ + CHF3 -> CHF3H+ + H2O, energy: { barrier: 20 kJ/mol, change: -5 kJ/mol } }
+`);
+    const svg = energyProfileSvg(energy);
+    expect(svg).toMatch(/^<svg [^>]*width="440"/);
+    expect(svg).toContain(
+      'H<tspan dy="3" font-size="8">3</tspan><tspan dy="-3">O</tspan><tspan dy="-3" font-size="8">+</tspan>',
+    );
+    expect(svg).toContain('CHF<tspan dy="3" font-size="8">3</tspan>');
+    expect(profileWidth(8)).toBeGreaterThan(profileWidth(2));
   });
 
   it('escapes species names and titles, and keeps ids safe', () => {
@@ -97,8 +115,9 @@ describe('energy profile SVG', () => {
 `);
     const svg = energyProfileSvg(energy);
     expect(svg).toMatch(/<text [^>]*><title>Reagent0 \+ Reagent1 \+ [^<]*Reagent8<\/title><tspan/);
-    const label = /<title>Reagent0[^<]*<\/title>((?:<tspan[^>]*>[^<]*<\/tspan>)+)/.exec(svg)![1]!;
-    expect(label.match(/<tspan/g)).toHaveLength(3);
+    const label = /<title>Reagent0[^<]*<\/title>(.*?)<\/text>/.exec(svg)![1]!;
+    // One tspan with its own x per line (the others inside set the digits as subscripts).
+    expect(label.match(/<tspan x=/g)).toHaveLength(4);
     expect(label).toContain('…');
   });
 });
