@@ -36,6 +36,7 @@ describe('public API', () => {
       'equilibriumConstant',
       'firstObservationSeries',
       'fitArrhenius',
+      'fitDerivation',
       'fitEyring',
       'fitInitialRateOrders',
       'fitNonlinear',

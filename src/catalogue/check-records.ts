@@ -2,7 +2,13 @@
  * Loads and derives a set of record files: the shared first half of `check`, `derive` and the
  * site build. Every file is checked even when others fail.
  */
-import { deriveMechanism, type Derivation, type DeriveOptions, type KineticData } from '../engine/index.ts';
+import {
+  deriveMechanism,
+  fitDerivation,
+  type Derivation,
+  type DeriveOptions,
+  type KineticData,
+} from '../engine/index.ts';
 import { diagnostic, type Diagnostic, type MechanismRecord } from '../model/index.ts';
 import { loadRecordFile, placeDiagnostics, recordId, type LoadedRecord } from '../records/index.ts';
 import { readRecordData } from './read-record-data.ts';
@@ -27,9 +33,10 @@ export async function checkRecordFile(path: string, options: DeriveOptions = {})
     loaded = await loadRecordFile(path);
     const base = { id: loaded.id, file: loaded.file, loaded };
     if (!loaded.record) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
-    const derivation = deriveMechanism(loaded.record, options);
-    const species = derivation.mechanism && [...derivation.mechanism.species.keys()];
+    const derived = deriveMechanism(loaded.record, options);
+    const species = derived.mechanism && [...derived.mechanism.species.keys()];
     const read = await readRecordData(loaded, species);
+    const derivation = fitDerivation(derived, loaded.record, read.data);
     const diagnostics = placeDiagnostics(loaded, [
       ...loaded.diagnostics,
       ...derivation.diagnostics,

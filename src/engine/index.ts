@@ -6,6 +6,7 @@
  * simulation/ — and derive.ts runs them in order.
  */
 export { deriveMechanism, judgeObservations, simulationBasis, type Derivation, type DeriveOptions } from './derive.ts';
+export { fitDerivation } from './fit-record.ts';
 
 // Exact values the derivation returns.
 export { Rational } from './exact/rational.ts';
