@@ -40,6 +40,7 @@ describe('public API', () => {
       'fitEyring',
       'fitInitialRateOrders',
       'fitNonlinear',
+      'fitSystem',
       'formatLatex',
       'formatText',
       'forwardConstant',
@@ -74,6 +75,7 @@ describe('public API', () => {
       'recordFileProblems',
       'recordIdProblem',
       'toolVersion',
+      'withSystemFits',
     ]);
   });
 

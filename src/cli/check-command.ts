@@ -1,5 +1,5 @@
 /** `mechatlas check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]`. */
-import { checkRecordFiles, findRecordFiles } from '../catalogue/index.ts';
+import { checkRecordFiles, findRecordFiles, withSystemFits } from '../catalogue/index.ts';
 import { catalogueReport } from '../render/index.ts';
 import { markdownReport } from '../render/index.ts';
 import { sarifReport } from '../render/index.ts';
@@ -39,9 +39,9 @@ export async function checkCommand(options: CheckOptions, out: Output): Promise<
   const threshold = options.approximationThreshold;
   if (threshold !== undefined && !(threshold > 0))
     throw new UsageError('--approximation-threshold must be a positive number, e.g. 0.1 for 10 %');
-  const checked = await checkRecordFiles(
-    selected,
-    threshold === undefined ? {} : { approximationThreshold: threshold },
+  // Rivals of one system are fitted to each other's data (the records given: with --base, the changed ones).
+  const checked = withSystemFits(
+    await checkRecordFiles(selected, threshold === undefined ? {} : { approximationThreshold: threshold }),
   );
   const report = catalogueReport(checked, toolVersion());
   out.stdout(render(report as never));

@@ -195,6 +195,10 @@ function fitOneLaw(
   const constants = normalised.constants
     .filter((c) => !unseen.includes(c.name))
     .map((c) => ({ name: c.name, unit: c.unitText, latex: c.latex }));
+  const signature = [
+    ...normalised.numerator.map((t) => `n:${t.concentrations.key}`),
+    ...normalised.factors.flatMap((f) => f.terms.map((t) => `f${f.power}:${t.concentrations.key}`)),
+  ];
   const missing = missingSymbols(fn, points);
   if (missing.length > 0)
     return {
@@ -206,7 +210,9 @@ function fitOneLaw(
       },
     };
   const fitted = fitLawToRates(fn, set, points, known);
-  return 'issue' in fitted ? { ...base, constants, issue: fitted.issue } : { ...base, constants, fit: fitted };
+  return 'issue' in fitted
+    ? { ...base, constants, signature, issue: fitted.issue }
+    : { ...base, constants, signature, fit: fitted };
 }
 
 /** fit/not-identifiable warnings: one per law, naming the constants these data do not determine. */
@@ -248,8 +254,8 @@ function recordedBarrier(
   return barrier === undefined ? undefined : { value: barrier, basis, T, source: `the barrier of step ${step.label}` };
 }
 
-/** What a time-course fit needs: starting concentrations, the overall stoichiometry and the primary law. */
-function timeCourseInput(
+/** What a time-course fit needs: starting concentrations, the overall stoichiometry and the primary law (of any rival, on any record's observation). */
+export function timeCourseInput(
   derivation: Derivation,
   record: MechanismRecord,
   set: TimeCourseData,

@@ -21,6 +21,8 @@ export interface LawFitResult {
   /** the apparent constants fitted, with their units */
   constants: { name: string; unit: string; latex: string }[];
   fit?: LawFit;
+  /** the law's terms (n: numerator, f<power>: a factor's, each by its concentrations), for nesting */
+  signature?: string[];
   /** why there is no fit */
   issue?: FitIssue;
 }
