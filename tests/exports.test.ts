@@ -69,6 +69,7 @@ describe('public API', () => {
       'MAX_ID_LENGTH',
       'checkRecordFile',
       'checkRecordFiles',
+      'checkWithRivals',
       'findRecordFiles',
       'isPublishable',
       'loadCatalogue',

@@ -4,8 +4,9 @@
  * on the records it was given and by the catalogue on the whole folder.
  */
 import { fitSystem, type SystemDataSet, type SystemRival } from '../engine/index.ts';
-import { placeDiagnostics } from '../records/index.ts';
-import type { CheckedRecord } from './check-records.ts';
+import { dirname, resolve } from 'node:path';
+import { findRecordFiles, loadRecordFile, placeDiagnostics } from '../records/index.ts';
+import { checkRecordFile, type CheckedRecord } from './check-records.ts';
 
 /** A checked record with the fits of its system's data sets. */
 export type FittedRecord<T extends CheckedRecord = CheckedRecord> = T & {
@@ -38,4 +39,23 @@ export function withSystemFits<T extends CheckedRecord>(records: readonly T[]): 
     }
   }
   return records.map((r) => fitted.get(r) ?? r);
+}
+
+/**
+ * One record file checked with the rivals of its system found beside it (the records of the same
+ * folder that name the same system), all fitted together; the record itself comes first.
+ */
+export async function checkWithRivals(file: string): Promise<FittedRecord[]> {
+  const checked = await checkRecordFile(file);
+  const system = checked.record?.system;
+  if (!system) return withSystemFits([checked]);
+  const { files } = await findRecordFiles([dirname(file)]);
+  const rivals: CheckedRecord[] = [];
+  for (const other of files) {
+    if (resolve(other) === resolve(file)) continue;
+    // Reading the YAML alone tells the system; only rivals are derived.
+    const loaded = await loadRecordFile(other);
+    if (loaded.record?.system === system) rivals.push(await checkRecordFile(other));
+  }
+  return withSystemFits([checked, ...rivals]);
 }

@@ -13,4 +13,4 @@ export {
   recordFileProblems,
   recordIdProblem,
 } from '../records/index.ts';
-export { withSystemFits, type FittedRecord } from './fit-systems.ts';
+export { checkWithRivals, withSystemFits, type FittedRecord } from './fit-systems.ts';

@@ -7,6 +7,7 @@ import { buildCommand } from './build-command.ts';
 import { checkCommand } from './check-command.ts';
 import { deriveCommand } from './derive-command.ts';
 import { exportCommand } from './export-command.ts';
+import { fitCommand } from './fit-command.ts';
 import { newCommand } from './new-command.ts';
 import { EXIT } from './exit-status.ts';
 import { describeFileSystemError } from './file-system-error.ts';
@@ -23,6 +24,7 @@ commands:
                       the records changed since GITREF; the threshold is the relative
                       error above which an approximation is reported invalid
   derive FILE         print one record's derivation step by step
+  fit FILE            fit one record's data (and its rivals beside it) step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
                       write the record's mass-action model as SBML Level 3 Version 2
@@ -111,6 +113,11 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
       const { positionals } = parseArgs({ args: rest, allowPositionals: true, options: {} });
       if (positionals.length !== 1) throw new UsageError('derive takes exactly one record file');
       return deriveCommand(positionals[0]!, out);
+    }
+    case 'fit': {
+      const { positionals } = parseArgs({ args: rest, allowPositionals: true, options: {} });
+      if (positionals.length !== 1) throw new UsageError('fit takes exactly one record file');
+      return fitCommand(positionals[0]!, out);
     }
     case 'new': {
       const { values, positionals } = parseArgs({

@@ -7,6 +7,7 @@ export { catalogueReport, reportOf } from './report/catalogue-report.ts';
 export { escapeControlCharacters } from './report/control-characters.ts';
 export { derivationText, type DerivedRecord } from './report/derivation-text.ts';
 export { markdownReport } from './report/markdown.ts';
+export { favouredSentence, fitsText, valueText, weightText } from './report/fits-text.ts';
 export {
   diagnosticJson,
   observationJson,

@@ -2,6 +2,7 @@
 import type { CatalogueReport } from '../../model/index.ts';
 import { escapeControlCharacters } from './control-characters.ts';
 import { byPosition, summaryLine } from './text.ts';
+import { fitsSectionMarkdown } from './fits-section.ts';
 
 const MARK: Record<string, string> = { error: '✗ error', warning: '⚠ warning', info: 'ℹ note' };
 
@@ -25,6 +26,7 @@ export function markdownReport(report: CatalogueReport): string {
       );
     }
   }
+  out.push(...fitsSectionMarkdown(report, cell));
   out.push(
     '',
     '_Derived rate laws are models. Decisions on scale-up, thermal hazards or exposure rest with calorimetry, local codes and licensed practice._',

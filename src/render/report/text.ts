@@ -3,12 +3,14 @@ import type { CatalogueReport } from '../../model/index.ts';
 import type { DiagnosticJson } from '../../model/index.ts';
 import { escapeControlCharacters as printable } from './control-characters.ts';
 import { verdictCounts } from '../words/index.ts';
+import { fitsSectionText } from './fits-section.ts';
 
 /** Renders the report for a terminal. */
 export function textReport(report: CatalogueReport): string {
   const rows = report.records.flatMap((r) => r.diagnostics.map((d) => ({ ...d, file: d.file ?? r.file })));
   rows.sort(byPosition);
   const lines = rows.flatMap((d) => [diagnosticRow(d), ...(d.note ? [`    how to fix: ${printable(d.note)}`] : [])]);
+  lines.push(...fitsSectionText(report).map((l) => printable(l)));
   lines.push(summaryLine(report));
   return lines.join('\n') + '\n';
 }
