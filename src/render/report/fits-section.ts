@@ -29,7 +29,8 @@ export function fitsSummary(report: CatalogueReport): { set: DataSetFitsJson; se
 
 /** Lines for the text report (empty when nothing was fitted). */
 export function fitsSectionText(report: CatalogueReport): string[] {
-  const found = fitsSummary(report);
+  // A data set with one rival only says that it was fitted: the step-by-step `fit` command shows it.
+  const found = fitsSummary(report).filter((f) => f.set.rivals.filter((r) => r.weight !== undefined).length > 1);
   if (found.length === 0) return [];
   return ['fits:', ...found.flatMap((f) => [`  ${f.sentence}`, ...(f.next ? [`    ${f.next}`] : [])])];
 }
@@ -50,6 +51,7 @@ export function fitsSectionMarkdown(report: CatalogueReport, cell: (text: string
       out.push(
         `| ${cell(set.observation)} | ${cell(r.record)} | ${cell(r.method)} | ${numberText(r.aicc ?? NaN, 4)} | ${numberText(r.delta_aicc ?? NaN, 2)} | ${r.weight!.toPrecision(2)}${r.rejected ? ' (rejected)' : ''} |`,
       );
-  out.push('', ...found.flatMap((f) => [`- ${cell(f.sentence)}${f.next ? `; ${cell(f.next)}` : ''}`]));
+  const rivals = found.filter((f) => f.set.rivals.filter((r) => r.weight !== undefined).length > 1);
+  out.push('', ...rivals.flatMap((f) => [`- ${cell(f.sentence)}${f.next ? `; ${cell(f.next)}` : ''}`]));
   return out;
 }
