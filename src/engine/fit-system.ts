@@ -12,6 +12,7 @@ import { fitLaws, timeCourseInput } from './fit-record.ts';
 import type { KineticData } from './fitting/kinetic-data.ts';
 import { lawFunction } from './fitting/law-function.ts';
 import { pointConcentrations } from './fitting/law-fit.ts';
+import { initialRatePlot, timeCoursePlot, type FitPlotSeries } from './fitting/plot-series.ts';
 import { nextMeasurement, type NextMeasurement, type SurvivingRival } from './fitting/next-measurement.ts';
 import { rankRivals, type Candidate, type Ranking } from './fitting/rank-rivals.ts';
 import type { LawFitResult } from './fitting/record-fits.ts';
@@ -39,6 +40,8 @@ export interface SystemDataSet {
   /** the runs (1-based rows of the table) that most separate the best rival from the next */
   drivers: number[];
   next?: NextMeasurement;
+  /** what the fit plots draw */
+  plot?: FitPlotSeries;
 }
 
 /** The fits of a system and the findings on each rival's record. */
@@ -126,8 +129,24 @@ function fitDataSet(owner: SystemRival, set: KineticData, rivals: readonly Syste
   const out: SystemDataSet = { observation: set.observation, owner: owner.id, data: set, fits, ranking, drivers: [] };
   if (set.kind === 'initial_rates') {
     out.drivers = drivers(set, fits, ranking);
-    const next = suggest(owner, set, index, fits, ranking, rivals);
+    const laws = fittedLaws(owner, set, index, fits, ranking, rivals);
+    const next = suggest(laws);
     if (next) out.next = next;
+    const orders = owner.derivation.fits?.dataSets.find((d) => d.observation === set.observation)?.orders;
+    const plot = initialRatePlot(
+      set,
+      laws.map((l) => ({ record: l.record, rate: l.bySpecies })),
+      orders,
+    );
+    if (plot) out.plot = plot;
+  } else if (set.kind === 'time_course') {
+    out.plot = timeCoursePlot(
+      set,
+      fits.flatMap((f) => {
+        const model = f.timeCourse?.simulation ?? f.timeCourse?.closedForm;
+        return model ? [{ record: f.record, curves: model.curves }] : [];
+      }),
+    );
   }
   return out;
 }
@@ -158,26 +177,33 @@ function drivers(
     .map(([, i]) => i + 1);
 }
 
-/** The next measurement for the surviving rivals of an initial-rate table. */
-function suggest(
+/** A ranked rival's fitted law as a function of concentrations, by symbol and by species of the table. */
+interface FittedLaw {
+  record: string;
+  rejected: boolean;
+  /** the residual standard deviation of its fit (ln r) */
+  noise: number;
+  bySymbol(c: ReadonlyMap<string, number>): number;
+  bySpecies(c: ReadonlyMap<string, number>): number;
+  /** every point of the table by symbol, the observation's fixed conditions included */
+  points: ReadonlyMap<string, number>[];
+}
+
+function fittedLaws(
   owner: SystemRival,
   set: KineticData & { kind: 'initial_rates' },
   index: number,
   fits: SystemDataSet['fits'],
   ranking: Ranking,
   rivals: readonly SystemRival[],
-): NextMeasurement | undefined {
-  const surviving: SurvivingRival[] = [];
-  const allPoints: ReadonlyMap<string, number>[] = [];
-  let noise = NaN;
+): FittedLaw[] {
+  const out: FittedLaw[] = [];
   for (const r of ranking.rivals) {
-    if (r.rejected) continue;
     const rival = rivals.find((x) => x.id === r.record)!;
     const fitted = represented(fits, r.record, r.method);
     const derived = rival.derivation.rateLaws?.find((l) => l.law.method === r.method);
     const { rateLawContext, orderSymbols } = rival.derivation;
     if (!fitted?.fit || !derived?.normalised || !rateLawContext || !orderSymbols) continue;
-    if (Number.isNaN(noise)) noise = fitted.fit.fit.residualStandardDeviation;
     const fn = lawFunction(derived.normalised);
     const values = new Map(
       derived.normalised.constants.flatMap((c) => (c.value !== undefined ? [[c.name, c.value]] : [])),
@@ -187,18 +213,34 @@ function suggest(
     const fixed = observationValues(observation, index, rateLawContext).values;
     const symbolOf = (species: string) => orderSymbols.find((s) => s.species === species)?.symbol;
     for (const s of set.species) fixed.delete(symbolOf(s) ?? '');
-    allPoints.push(...pointConcentrations(set, fixed, symbolOf));
-    surviving.push({
+    const bySymbol = (c: ReadonlyMap<string, number>) =>
+      fn.symbols.every((s) => c.has(s))
+        ? fn.rate(
+            fn.constants.map((n) => values.get(n) ?? 0),
+            c,
+          )
+        : NaN;
+    out.push({
       record: r.record,
-      rate: (c) =>
-        fn.symbols.every((s) => c.has(s))
-          ? fn.rate(
-              fn.constants.map((n) => values.get(n) ?? 0),
-              c,
-            )
-          : NaN,
+      rejected: r.rejected,
+      noise: fitted.fit.fit.residualStandardDeviation,
+      bySymbol,
+      bySpecies: (c) => {
+        const symbols = new Map(fixed);
+        for (const [species, v] of c) symbols.set(symbolOf(species) ?? species, v);
+        return bySymbol(symbols);
+      },
+      points: pointConcentrations(set, fixed, symbolOf),
     });
   }
+  return out;
+}
+
+/** The next measurement for the surviving rivals of an initial-rate table. */
+function suggest(laws: readonly FittedLaw[]): NextMeasurement | undefined {
+  const surviving = laws.filter((l) => !l.rejected);
+  const noise = surviving[0]?.noise ?? NaN;
+  const allPoints = surviving.flatMap((l) => l.points);
   const spans = new Map<string, [number, number]>();
   const logs = new Map<string, number[]>();
   for (const p of allPoints)
@@ -209,5 +251,10 @@ function suggest(
       logs.set(s, [...(logs.get(s) ?? []), Math.log(v)]);
     }
   const middle = new Map([...logs].map(([s, l]) => [s, Math.exp(l.reduce((a, b) => a + b, 0) / l.length)]));
-  return nextMeasurement(surviving, middle, spans, noise);
+  return nextMeasurement(
+    surviving.map((l): SurvivingRival => ({ record: l.record, rate: l.bySymbol })),
+    middle,
+    spans,
+    noise,
+  );
 }

@@ -13,6 +13,7 @@ export type { LawFit } from './fitting/law-fit.ts';
 export type { TimeCourseFit, TimeCourseModelFit } from './fitting/time-course-fit.ts';
 export type { Ranking, RivalRank } from './fitting/rank-rivals.ts';
 export type { NextMeasurement } from './fitting/next-measurement.ts';
+export type { FitPlotSeries } from './fitting/plot-series.ts';
 export type { ActivationComparison } from './fitting/activation-check.ts';
 
 // Exact values the derivation returns.

@@ -7,6 +7,7 @@ export { catalogueReport, reportOf } from './report/catalogue-report.ts';
 export { escapeControlCharacters } from './report/control-characters.ts';
 export { derivationText, type DerivedRecord } from './report/derivation-text.ts';
 export { markdownReport } from './report/markdown.ts';
+export { systemDataSetJson } from './report/fits-json.ts';
 export { favouredSentence, fitsText, valueText, weightText } from './report/fits-text.ts';
 export {
   diagnosticJson,
@@ -20,6 +21,7 @@ export { primaryChecks, tallyVerdicts } from './report/verdict-tally.ts';
 export { byPosition, diagnosticRow, summaryLine, textReport } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
+export { fittedCurvesSvg, orderPlotSvg, residualsSvg, type FitPlotOptions } from './plots/fit-plots-svg.ts';
 export { sbmlDocument } from './sbml/sbml.ts';
 export {
   ROLE_ORDER,

@@ -3,6 +3,7 @@
  * record, the species across records with their roles, and the systems with their rivals side
  * by side. Every value comes from the catalogue layer; nothing here derives chemistry.
  */
+import { systemFitViews } from './fit-view.ts';
 import { loadCatalogue as loadRecords, type Catalogue as LoadedCatalogue } from '../catalogue/index.ts';
 import type { ObservationJson } from '../model/index.ts';
 import { observationJson } from '../render/index.ts';
@@ -58,7 +59,8 @@ export function siteCatalogue(loaded: LoadedCatalogue): Catalogue {
     const judged = new Map<string, ObservationJson[]>(
       [...s.judged].map(([id, checks]) => [id, checks.map(observationJson)]),
     );
-    return systemView(s.system, rivals, judged);
+    const fits = systemFitViews(s.fits);
+    return fits.length > 0 ? { ...systemView(s.system, rivals, judged), fits } : systemView(s.system, rivals, judged);
   });
   return { records, species: speciesPages(records, slugs), systems, slugs };
 }

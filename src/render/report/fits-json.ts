@@ -34,7 +34,7 @@ export function fitsJson(
     (d.orders?.orders ?? []).map((q) => ({ observation: d.observation, species: q.name, ...valueJson(q) })),
   );
   if (orders.length > 0) out.orders = orders;
-  const sets = (systemFits ?? []).filter((s) => s.fits.some((f) => f.record === id)).map(dataSetJson);
+  const sets = (systemFits ?? []).filter((s) => s.fits.some((f) => f.record === id)).map(systemDataSetJson);
   // Without its system (one record derived alone) the record's own fits stand for the data sets.
   if (!systemFits) sets.push(...own.filter((d) => d.data.kind !== 'temperature_series').map((d) => ownDataSet(id, d)));
   if (sets.length > 0) out.data_sets = sets;
@@ -56,7 +56,8 @@ export function valueJson(q: FittedParameter, scale = 1, unit?: string): FittedV
   };
 }
 
-function dataSetJson(set: SystemDataSet): DataSetFitsJson {
+/** One data set of a system, every rival fitted and ranked, in the report's shape. */
+export function systemDataSetJson(set: SystemDataSet): DataSetFitsJson {
   const rank = new Map(set.ranking.rivals.map((r) => [r.record, r]));
   const rivals = set.fits.flatMap((f): RivalFitJson[] => {
     const r = rank.get(f.record);
@@ -112,7 +113,7 @@ function dataSetJson(set: SystemDataSet): DataSetFitsJson {
 
 function ownDataSet(id: string, d: DataSetFits): DataSetFitsJson {
   return {
-    ...dataSetJson({
+    ...systemDataSetJson({
       observation: d.observation,
       owner: id,
       data: d.data,
