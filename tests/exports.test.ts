@@ -37,9 +37,11 @@ describe('public API', () => {
       'equilibriumConstant',
       'firstObservationSeries',
       'fitArrhenius',
+      'fitDerivation',
       'fitEyring',
       'fitInitialRateOrders',
       'fitNonlinear',
+      'fitSystem',
       'formatLatex',
       'formatText',
       'forwardConstant',
@@ -69,6 +71,7 @@ describe('public API', () => {
       'catalogueCache',
       'checkRecordFile',
       'checkRecordFiles',
+      'checkWithRivals',
       'decodeDerivationValue',
       'defaultCacheFolder',
       'derivationKey',
@@ -86,6 +89,7 @@ describe('public API', () => {
       'recordFileProblems',
       'recordIdProblem',
       'toolVersion',
+      'withSystemFits',
     ]);
   });
 

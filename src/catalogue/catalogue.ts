@@ -11,13 +11,17 @@ import {
   simulationBasis,
   type ConcentrationSeries,
   type ObservationCheck,
+  type SystemDataSet,
 } from '../engine/index.ts';
 import type { Observation } from '../model/index.ts';
 import { findRecordFiles, isPublishable } from '../records/index.ts';
 import { checkRecordFiles, type CheckedRecord, type Pipeline } from './check-records.ts';
+import { withSystemFits } from './fit-systems.ts';
 
 /** One record of the catalogue: checked and derived, with its source text and its simulated series. */
 export interface CatalogueRecord extends CheckedRecord {
+  /** every data set of the record's system, each rival fitted to it and ranked */
+  systemFits?: SystemDataSet[];
   /** the file as the catalogue names it: relative to the working folder */
   file: string;
   /** the YAML as written */
@@ -33,6 +37,8 @@ export interface CatalogueSystem {
   rivals: string[];
   /** each rival without errors judged against the observations of every rival (pooled, each once) */
   judged: Map<string, ObservationCheck[]>;
+  /** every data set of the system with each rival fitted and ranked */
+  fits?: SystemDataSet[];
 }
 
 export interface Catalogue {
@@ -66,7 +72,9 @@ export async function loadCatalogue(folder: string, pipeline: Pipeline = {}): Pr
     if (series) record.series = series;
     records.push(record);
   }
-  return { records, systems: judgeSystems(records) };
+  // Rivals are fitted to each other's data once, for the whole folder.
+  const fitted = withSystemFits(records);
+  return { records: fitted, systems: judgeSystems(fitted) };
 }
 
 /** The record's plotted concentration series: from the cache, or simulated and stored. */
@@ -89,7 +97,10 @@ function judgeSystems(records: readonly CatalogueRecord[]): CatalogueSystem[] {
   for (const r of records) if (r.record) bySystem.set(r.record.system, [...(bySystem.get(r.record.system) ?? []), r]);
   return [...bySystem]
     .sort(([a], [b]) => a.localeCompare(b))
-    .map(([system, rivals]) => ({ system, rivals: rivals.map((r) => r.id), judged: judgeAcrossRivals(rivals) }));
+    .map(([system, rivals]) => {
+      const fits = rivals.find((r) => r.systemFits)?.systemFits;
+      return { system, rivals: rivals.map((r) => r.id), judged: judgeAcrossRivals(rivals), ...(fits && { fits }) };
+    });
 }
 
 /** Each rival without errors, judged by its own rate laws against the pooled observations of the system. */

@@ -5,7 +5,13 @@
  * caller brings a `deriver` and there are enough of them), stored, and then every record gets
  * its data read and its diagnostics placed, in the order the files were given.
  */
-import { deriveMechanism, type Derivation, type DeriveOptions, type KineticData } from '../engine/index.ts';
+import {
+  deriveMechanism,
+  fitDerivation,
+  type Derivation,
+  type DeriveOptions,
+  type KineticData,
+} from '../engine/index.ts';
 import { diagnostic, type Diagnostic, type MechanismRecord } from '../model/index.ts';
 import { loadRecordFile, placeDiagnostics, recordId, type LoadedRecord } from '../records/index.ts';
 import type { DerivationCache } from './derivation-cache.ts';
@@ -136,13 +142,14 @@ function deriveHere(item: Pending, options: DeriveOptions, cache: DerivationCach
 
 /** A record with its data read and every diagnostic placed; a failure on the way is an internal failure. */
 async function finish(item: Pending): Promise<CheckedRecord> {
-  const { path, loaded, derivation } = item;
+  const { path, loaded, derivation: derived } = item;
   if (item.failure !== undefined || !loaded) return internalFailure(path, loaded, item.failure);
   try {
     const base = { id: loaded.id, file: loaded.file, loaded };
-    if (!loaded.record || !derivation) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
-    const species = derivation.mechanism && [...derivation.mechanism.species.keys()];
+    if (!loaded.record || !derived) return { ...base, diagnostics: placeDiagnostics(loaded, loaded.diagnostics) };
+    const species = derived.mechanism && [...derived.mechanism.species.keys()];
     const read = await readRecordData(loaded, species);
+    const derivation = fitDerivation(derived, loaded.record, read.data);
     const diagnostics = placeDiagnostics(loaded, [
       ...loaded.diagnostics,
       ...derivation.diagnostics,

@@ -32,3 +32,4 @@ export {
   recordIdProblem,
   type FormattedRecordFile,
 } from '../records/index.ts';
+export { checkWithRivals, withSystemFits, type FittedRecord } from './fit-systems.ts';

@@ -1,5 +1,5 @@
 /** `mechatlas check [DIR|FILE…] [--format text|json|markdown|sarif] [--base GITREF]`. */
-import { catalogueCache, checkRecordFiles, findRecordFiles } from '../catalogue/index.ts';
+import { catalogueCache, checkRecordFiles, findRecordFiles, withSystemFits } from '../catalogue/index.ts';
 import { threadDeriver } from './derivation-pool.ts';
 import { progressLine } from './progress.ts';
 import { catalogueReport } from '../render/index.ts';
@@ -51,14 +51,13 @@ export async function checkCommand(options: CheckOptions, out: Output): Promise<
   });
   const cache = catalogueCache({ enabled: options.cache !== false });
   const deriver = threadDeriver(options.workers);
-  const checked = await checkRecordFiles(
-    selected,
-    threshold === undefined ? {} : { approximationThreshold: threshold },
-    {
+  // Rivals of one system are fitted to each other's data (the records given: with --base, the changed ones).
+  const checked = withSystemFits(
+    await checkRecordFiles(selected, threshold === undefined ? {} : { approximationThreshold: threshold }, {
       ...(cache && { cache }),
       ...(deriver && { deriver }),
       progress: progress.update,
-    },
+    }),
   );
   progress.end();
   const report = catalogueReport(checked, toolVersion());

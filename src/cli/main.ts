@@ -9,6 +9,7 @@ import { deriveCommand } from './derive-command.ts';
 import { exportCommand } from './export-command.ts';
 import { fmtCommand } from './fmt-command.ts';
 import { liveCommand } from './live-command.ts';
+import { fitCommand } from './fit-command.ts';
 import { newCommand } from './new-command.ts';
 import { EXIT } from './exit-status.ts';
 import { describeFileSystemError } from './file-system-error.ts';
@@ -27,6 +28,7 @@ commands:
                       relative error above which an approximation is reported invalid
   derive FILE [--no-cache]
                       print one record's derivation step by step
+  fit FILE            fit one record's data (and its rivals beside it) step by step
   new ID [--dir DIR]  write a new record to fill in (default folder content/mechanisms)
   export --sbml ID|FILE [--out FILE]
                       write the record's mass-action model as SBML Level 3 Version 2
@@ -134,6 +136,11 @@ async function dispatch(argv: readonly string[], out: Output): Promise<number> {
       });
       if (positionals.length !== 1) throw new UsageError('derive takes exactly one record file');
       return deriveCommand(positionals[0]!, out, { cache: !values['no-cache'] });
+    }
+    case 'fit': {
+      const { positionals } = parseArgs({ args: rest, allowPositionals: true, options: {} });
+      if (positionals.length !== 1) throw new UsageError('fit takes exactly one record file');
+      return fitCommand(positionals[0]!, out);
     }
     case 'new': {
       const { values, positionals } = parseArgs({

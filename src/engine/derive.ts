@@ -29,6 +29,7 @@ import type { OverallEquation } from './route/overall-equation.ts';
 import { deriveRoute, type Route } from './route/route.ts';
 import { checkApproximations, type SimulationCheck } from './simulation/approximation-validity.ts';
 import type { SimulationBasis } from './simulation/simulation-setup.ts';
+import type { RecordFits } from './fitting/record-fits.ts';
 
 export interface Derivation {
   mechanism?: Mechanism;
@@ -61,6 +62,8 @@ export interface Derivation {
   energy?: EnergyResult;
   /** full simulations of the observations that have constants */
   simulation?: SimulationCheck[];
+  /** the record's data sets fitted (fit-record.ts): orders, laws, activation parameters, time courses */
+  fits?: RecordFits;
   diagnostics: Diagnostic[];
 }
 

@@ -7,6 +7,15 @@
  */
 export { deriveMechanism, judgeObservations, simulationBasis, type Derivation, type DeriveOptions } from './derive.ts';
 export { DERIVATION_CLASSES } from './derivation-classes.ts';
+export { fitDerivation } from './fit-record.ts';
+export { fitSystem, type SystemDataSet, type SystemFits, type SystemRival } from './fit-system.ts';
+export type { DataSetFits, LawFitResult, RecordFits } from './fitting/record-fits.ts';
+export type { LawFit } from './fitting/law-fit.ts';
+export type { TimeCourseFit, TimeCourseModelFit } from './fitting/time-course-fit.ts';
+export type { Ranking, RivalRank } from './fitting/rank-rivals.ts';
+export type { NextMeasurement } from './fitting/next-measurement.ts';
+export type { FitPlotSeries } from './fitting/plot-series.ts';
+export type { ActivationComparison } from './fitting/activation-check.ts';
 
 // Exact values the derivation returns.
 export { Rational } from './exact/rational.ts';

@@ -30,6 +30,13 @@ export type {
 export { DATA_COLUMN_NAMES, uncertaintyOf, type DataColumn, type DataTable, type SourceSpot } from './data-table.ts';
 export type { EnergyBasis, EnergyJson, EnergyProfile, EnergyResult, ProfileState } from './energy-report.ts';
 export type {
+  ActivationFitsJson,
+  DataSetFitsJson,
+  FittedValueJson,
+  RecordFitsJson,
+  RivalFitJson,
+} from './fits-report.ts';
+export type {
   ApparentConstantJson,
   CatalogueReport,
   DiagnosticJson,

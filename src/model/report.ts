@@ -3,6 +3,7 @@
  * serves. snake_case keys; changed only additively. Plain data: no engine types.
  */
 import type { EnergyJson } from './energy-report.ts';
+import type { RecordFitsJson } from './fits-report.ts';
 
 export interface DiagnosticJson {
   rule: string;
@@ -50,6 +51,8 @@ export interface RecordReport {
   energy?: EnergyJson;
   /** labels of steps whose rate constants come from their energies (Eyring) */
   constants_from_energies?: string[];
+  /** the record's data fitted: orders, each rival fitted to each data set and ranked, activation parameters */
+  fits?: RecordFitsJson;
   diagnostics: DiagnosticJson[];
 }
 

@@ -15,6 +15,8 @@ export {
   type ComparedFact,
   type ComparedVerdict,
 } from './report/record-comparison.ts';
+export { systemDataSetJson } from './report/fits-json.ts';
+export { favouredSentence, fitsText, valueText, weightText } from './report/fits-text.ts';
 export {
   diagnosticJson,
   observationJson,
@@ -35,6 +37,7 @@ export {
 export { findingsSection, RECORD_SECTIONS, recordHeading, textReport, type TextSection } from './report/text.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
+export { fittedCurvesSvg, orderPlotSvg, residualsSvg, type FitPlotOptions } from './plots/fit-plots-svg.ts';
 export { sbmlDocument } from './sbml/sbml.ts';
 export {
   ROLE_ORDER,

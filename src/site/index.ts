@@ -4,6 +4,7 @@
  * Pages import this and render/words, nothing else of ours.
  */
 export { catalogueJson, jsonResponse, publicReport } from './api-report.ts';
+export { systemFitViews, type FitRow, type SystemFitView } from './fit-view.ts';
 export { mentionsHazard } from './hazard.ts';
 export { doiUrl, httpUrl, sourceUrl } from './links.ts';
 export { escapeHtml, renderMath } from './math.ts';

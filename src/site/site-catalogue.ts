@@ -10,6 +10,7 @@ import {
   type Catalogue as LoadedCatalogue,
   type LoadedSystemRecord,
 } from '../catalogue/index.ts';
+import { systemFitViews } from './fit-view.ts';
 import type { ObservationJson } from '../model/index.ts';
 import { observationJson } from '../render/index.ts';
 import { recordView, type RecordView } from './record-view.ts';
@@ -63,7 +64,9 @@ export function siteCatalogue(loaded: LoadedCatalogue, systemRecords: readonly L
     const judged = new Map<string, ObservationJson[]>(
       [...s.judged].map(([id, checks]) => [id, checks.map(observationJson)]),
     );
-    return withSystemRecord(systemView(s.system, rivals, judged), systemRecords);
+    const view = withSystemRecord(systemView(s.system, rivals, judged), systemRecords);
+    const fits = systemFitViews(s.fits);
+    return fits.length > 0 ? { ...view, fits } : view;
   });
   return { records, species: speciesPages(records, pageSlugs), systems, slugs };
 }

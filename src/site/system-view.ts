@@ -9,6 +9,7 @@
 import type { DiagnosticJson, ObservationJson, VerdictCounts } from '../model/index.ts';
 import { tallyVerdicts } from '../render/index.ts';
 import type { RecordView } from './record-view.ts';
+import type { SystemFitView } from './fit-view.ts';
 
 export interface RivalColumn {
   id: string;
@@ -86,6 +87,8 @@ export interface SystemView {
   overallDiffers: boolean;
   matrix: MatrixRow[];
   discriminators: Discriminator[];
+  /** each data set of the system with every rival fitted (fit-view.ts) */
+  fits?: SystemFitView[];
 }
 
 /** Builds the comparison; `judged` holds each rival's checks against the observations of all rivals. */

@@ -19,6 +19,8 @@ export interface NonlinearOptions {
   maxIterations?: number;
   /** converged when the relative offset falls below this (default 1e-6) */
   tolerance?: number;
+  /** relative step of the central differences where the problem has no Jacobian (default ∛ε; larger for a model computed by an integrator) */
+  differenceStep?: number;
 }
 
 const ROUND = 25;
@@ -34,7 +36,7 @@ export function fitNonlinear(problem: NonlinearProblem, options: NonlinearOption
   const scaledModel = (theta: readonly number[]) => problem.model(natural(theta)).map((f, i) => root[i]! * f);
   const scaledY = problem.y.map((v, i) => root[i]! * v);
   const jacobian = (theta: readonly number[]): number[][] => {
-    if (!problem.jacobian) return numericJacobian(scaledModel, theta);
+    if (!problem.jacobian) return numericJacobian(scaledModel, theta, options.differenceStep);
     const values = natural(theta);
     return problem
       .jacobian(values)

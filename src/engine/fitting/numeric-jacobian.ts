@@ -9,8 +9,8 @@
 export function numericJacobian(
   model: (theta: readonly number[]) => readonly number[],
   theta: readonly number[],
+  step = Math.cbrt(Number.EPSILON),
 ): number[][] {
-  const step = Math.cbrt(Number.EPSILON);
   const columns = theta.map((value, j) => {
     const h = step * (value !== 0 ? Math.abs(value) : 1);
     const up = theta.slice();

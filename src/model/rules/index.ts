@@ -16,11 +16,15 @@ import { dataPath } from './data-path.ts';
 import { dataPoints } from './data-points.ts';
 import { dataRange } from './data-range.ts';
 import { dataUnits } from './data-units.ts';
+import { fitActivation } from './fit-activation.ts';
+import { fitNotIdentifiable } from './fit-not-identifiable.ts';
+import { fitRivalRejected } from './fit-rival-rejected.ts';
 import { energyProfile } from './energy-profile.ts';
 import { energyRdsSpan } from './energy-rds-span.ts';
 import { equationSyntax } from './equation-syntax.ts';
 import { formulaSyntax } from './formula-syntax.ts';
 import { internalFailure } from './internal-failure.ts';
+import { observationFittedOrder } from './observation-fitted-order.ts';
 import { observationNegativeConcentration } from './observation-negative-concentration.ts';
 import { observationOrder } from './observation-order.ts';
 import { observationSpecies } from './observation-species.ts';
@@ -87,6 +91,10 @@ export const RULES = [
   balanceSites,
   rateSymbolicBudget,
   rateNotAChain,
+  observationFittedOrder,
+  fitNotIdentifiable,
+  fitRivalRejected,
+  fitActivation,
 ] as const;
 
 /** A rule's stable id. */

@@ -5,7 +5,8 @@
  */
 import type { CatalogueReport, RecordReport } from '../../model/index.ts';
 import { plural, SEVERITIES } from '../words/index.ts';
-import { codeSpan } from './markdown-text.ts';
+import { cell, codeSpan } from './markdown-text.ts';
+import { fitsSectionMarkdown } from './fits-section.ts';
 import { recordSection, removedSection, type MarkdownSection } from './markdown-record.ts';
 import { findingCounts, summaryLine } from './summary-words.ts';
 
@@ -43,6 +44,7 @@ export function markdownReport(report: CatalogueReport, options: MarkdownOptions
   const left = ordered.slice(MAX_SECTIONS);
   if (left.length > 0)
     out.push('', `${plural(left.length, 'more record')} not shown: ${left.map((r) => codeSpan(r.file)).join(', ')}.`);
+  out.push(...fitsSectionMarkdown(report, cell));
   out.push(
     '',
     '_Derived rate laws are models. Decisions on scale-up, thermal hazards or exposure rest with calorimetry, local codes and licensed practice._',

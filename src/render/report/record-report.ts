@@ -12,7 +12,9 @@ import type {
   Polynomial,
   Rational,
   SimulationCheck,
+  SystemDataSet,
 } from '../../engine/index.ts';
+import { fitsJson } from './fits-json.ts';
 import type {
   ApparentConstantJson,
   Diagnostic,
@@ -31,6 +33,8 @@ export interface RecordInput {
   file: string;
   record?: { title: string; system: string; status: string };
   derivation?: Derivation;
+  /** the data sets of the record's system, each rival fitted and ranked (absent when not fitted as a system) */
+  systemFits?: readonly SystemDataSet[];
   /** every diagnostic of the record, placed (file, line, column) */
   diagnostics: readonly Diagnostic[];
 }
@@ -71,6 +75,8 @@ export function recordReport(input: RecordInput): RecordReport {
   if (derivation?.simulation) out.simulation = derivation.simulation.map(simulationJson);
   if (derivation?.energy && !derivation.energy.schematic) out.energy = derivation.energy;
   if (derivation?.constantsFromEnergies?.length) out.constants_from_energies = derivation.constantsFromEnergies;
+  const fits = fitsJson(input.id, derivation, input.systemFits);
+  if (fits) out.fits = fits;
   // Keep the documented key order: diagnostics last.
   const { diagnostics, ...rest } = out;
   return { ...rest, diagnostics };

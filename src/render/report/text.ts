@@ -7,6 +7,7 @@ import type { CatalogueReport, RecordReport } from '../../model/index.ts';
 import { escapeControlCharacters as printable } from './control-characters.ts';
 import { byPosition, findingLines } from './finding-text.ts';
 import { summarySentences } from './summary-words.ts';
+import { fitsSectionText } from './fits-section.ts';
 
 /** One concern of a record's block: its lines, or none when it has nothing to say. */
 export type TextSection = (record: RecordReport) => string[];
@@ -25,6 +26,8 @@ export function textReport(report: CatalogueReport, sections: readonly TextSecti
     return body.length > 0 ? [[...recordHeading(r), ...body.flatMap((lines) => ['', ...lines])]] : [];
   });
   const lines = blocks.flatMap((block) => [...block, '']);
+  const fits = fitsSectionText(report).map((l) => printable(l));
+  if (fits.length > 0) lines.push(...fits, '');
   lines.push(...summarySentences(report));
   return lines.join('\n') + '\n';
 }
