@@ -1,4 +1,5 @@
 /// <reference lib="dom" />
+/// <reference lib="dom.iterable" />
 /**
  * The checks page's filters, in the browser: severity, rule and reaction system, applied by hiding
  * the rows that do not match (and any rule or severity section left empty), without reloading.
