@@ -134,7 +134,8 @@ export function simulatedInitialRate(
 function ownScaleTolerance(states: readonly Float64Array[], maxExtent: number): Float64Array {
   const atol = new Float64Array(states[0]!.length);
   for (let i = 0; i < atol.length; i++) {
-    const scale = Math.max(...states.map((y) => Math.abs(y[i]!)));
+    let scale = 0;
+    for (const y of states) scale = Math.max(scale, Math.abs(y[i]!));
     atol[i] = Math.max(RELATIVE_TO_OWN_SCALE * scale, 1e-30 * maxExtent, Number.MIN_VALUE);
   }
   return atol;
