@@ -102,7 +102,7 @@ async function deriveIntoCache(
   const deriver = threadDeriver(options.workers);
   const progress = progressLine(out, total, { verb: 'derived' });
   process.env['MECHATLAS_CWD'] = cwd;
-  await loadCatalogue(content, { cache, ...(deriver && { deriver }), progress: progress.update });
+  await loadCatalogue(content, { cache, ...(deriver && { deriver }), series: true, progress: progress.update });
   progress.end();
 }
 
