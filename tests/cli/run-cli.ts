@@ -15,14 +15,9 @@ export interface CliRun {
   stderr: string;
 }
 
-/** Spawns the compiled `mechatlas` binary with arguments (and extra environment); returns exit code and output. */
-export function runCli(args: string[], cwd = ROOT, env: Record<string, string> = {}, timeout = 60_000): CliRun {
-  const r = spawnSync(process.execPath, [BIN, ...args], {
-    cwd,
-    encoding: 'utf8',
-    timeout,
-    env: { ...process.env, ...env },
-  });
+/** Spawns the compiled `mechatlas` binary with arguments; returns exit code and output. */
+export function runCli(args: string[], cwd = ROOT): CliRun {
+  const r = spawnSync(process.execPath, [BIN, ...args], { cwd, encoding: 'utf8', timeout: 60_000 });
   return { code: r.status ?? -1, stdout: r.stdout, stderr: r.stderr };
 }
 
