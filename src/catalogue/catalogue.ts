@@ -17,6 +17,7 @@ import type { Observation } from '../model/index.ts';
 import { findRecordFiles, isPublishable } from '../records/index.ts';
 import { checkRecordFiles, type CheckedRecord, type Pipeline } from './check-records.ts';
 import { withSystemFits } from './fit-systems.ts';
+import { plottedSeries, type StoredSeries } from './plotted-series.ts';
 
 /** One record of the catalogue: checked and derived, with its source text and its simulated series. */
 export interface CatalogueRecord extends CheckedRecord {
@@ -77,19 +78,14 @@ export async function loadCatalogue(folder: string, pipeline: Pipeline = {}): Pr
   return { records: fitted, systems: judgeSystems(fitted) };
 }
 
-/** The record's plotted concentration series: from the cache, or simulated and stored. */
+/** The record's plotted concentration series: from the cache (a worker may have stored it), or simulated and stored. */
 function seriesOf(checked: CheckedRecord, { cache }: Pipeline): ConcentrationSeries | undefined {
   const { cacheKey: key } = checked;
-  const stored =
-    key !== undefined ? (cache?.read(key, 'series') as { series?: ConcentrationSeries } | undefined) : undefined;
+  const stored = key !== undefined ? (cache?.read(key, 'series') as StoredSeries | undefined) : undefined;
   if (stored && typeof stored === 'object') return stored.series;
-  const basis = checked.derivation && simulationBasis(checked.derivation);
-  const series =
-    checked.record && basis
-      ? firstObservationSeries(checked.record.observations ?? [], basis, checked.derivation!.constants ?? new Map())
-      : undefined;
-  if (key !== undefined) cache?.write(key, 'series', series === undefined ? {} : { series });
-  return series;
+  const made = plottedSeries(checked.record, checked.derivation);
+  if (key !== undefined) cache?.write(key, 'series', made);
+  return made.series;
 }
 
 function judgeSystems(records: readonly CatalogueRecord[]): CatalogueSystem[] {

@@ -33,17 +33,19 @@ export interface CheckedRecord {
   cacheKey?: string;
 }
 
-/** A derivation to be made elsewhere (another thread): the valid record, by its file. */
+/** A derivation to be made elsewhere (another thread): the valid record, by its file; `series`: simulate the plotted series too. */
 export interface DerivationJob {
   file: string;
   record: MechanismRecord;
+  series?: boolean;
 }
 
 /**
  * What came of a job: the derivation (and its encoded bytes, for the cache), the failure, or
  * undefined where the record is to be derived in this thread after all.
  */
-export type DerivationOutcome = { derivation: Derivation; encoded?: Uint8Array } | { error: Error } | undefined;
+export type DerivationOutcome =
+  { derivation: Derivation; encoded?: Uint8Array; encodedSeries?: Uint8Array } | { error: Error } | undefined;
 
 /** Derives many records at once (a pool of threads), the outcomes in the jobs' order; `done` after each. */
 export type Deriver = (
@@ -58,6 +60,8 @@ export interface Pipeline {
   deriver?: Deriver;
   /** the fewest records to derive that make handing them to the deriver worth it (default 8) */
   deriverThreshold?: number;
+  /** the site's plotted series are wanted too: a deriver makes them beside the derivation, into the cache */
+  series?: boolean;
   /** called after each record is derived or found in the cache */
   progress?: (done: number, total: number) => void;
 }
@@ -109,7 +113,8 @@ export async function checkRecordFiles(
   const misses = pending.filter((p) => p.loaded?.record && !p.derivation && p.failure === undefined);
   const useDeriver = pipeline.deriver && misses.length >= (pipeline.deriverThreshold ?? 8);
   if (useDeriver) {
-    const jobs = misses.map((p) => ({ file: p.path, record: p.loaded!.record! }));
+    const series = pipeline.series === true && cache !== undefined;
+    const jobs = misses.map((p) => ({ file: p.path, record: p.loaded!.record!, ...(series && { series }) }));
     const outcomes = await pipeline.deriver!(jobs, options, tick);
     outcomes.forEach((outcome, i) => {
       const item = misses[i]!;
@@ -118,6 +123,7 @@ export async function checkRecordFiles(
       else {
         item.derivation = outcome.derivation;
         if (cache && item.key && outcome.encoded) cache.writeEncoded(item.key, 'derivation', outcome.encoded);
+        if (cache && item.key && outcome.encodedSeries) cache.writeEncoded(item.key, 'series', outcome.encodedSeries);
       }
     });
   } else for (const item of misses) deriveHere(item, options, cache, tick);

@@ -1,6 +1,7 @@
 /**
- * The version of the derivation engine, as a hash of its code: the files of src/engine and
- * src/model and the package's dependencies. A cached derivation is used only by the same engine.
+ * The version of the derivation engine, as a hash of its code: the files of src/engine,
+ * src/model and src/records (which turns a record's text into what the engine derives from) and
+ * the package's dependencies. A cached derivation is used only by the same engine.
  * The compiled command carries the hash computed when it was compiled (scripts/compile-cli.mjs);
  * run from source (tests, the site build), the hash is computed from the source files it runs.
  */
@@ -22,7 +23,7 @@ function sourceFiles(folder: string): string[] {
 
 /** The hash of the engine's source files under `root` (the package folder), or undefined when they are not there. */
 export function engineSourceHash(root: string): string | undefined {
-  const folders = ['src/engine', 'src/model'].map((f) => join(root, f));
+  const folders = ['src/engine', 'src/model', 'src/records'].map((f) => join(root, f));
   if (!folders.every((f) => existsSync(f))) return undefined;
   const hash = createHash('sha256');
   hash.update(JSON.stringify(manifest.dependencies));

@@ -100,9 +100,9 @@ async function deriveIntoCache(
   const cache = catalogueCache({ cwd, enabled: options.cache !== false });
   if (!cache) return;
   const deriver = threadDeriver(options.workers);
-  const progress = progressLine(out, total);
+  const progress = progressLine(out, total, { verb: 'derived' });
   process.env['MECHATLAS_CWD'] = cwd;
-  await loadCatalogue(content, { cache, ...(deriver && { deriver }), progress: progress.update });
+  await loadCatalogue(content, { cache, ...(deriver && { deriver }), series: true, progress: progress.update });
   progress.end();
 }
 

@@ -61,7 +61,8 @@ function runPool(
           return;
         }
         current = next++;
-        worker.postMessage({ index: current, record: jobs[current]!.record, options });
+        const job = jobs[current]!;
+        worker.postMessage({ index: current, record: job.record, options, series: job.series === true });
       };
       worker.on('message', (answer: { index: number; outcome: EncodedOutcome }) => {
         let outcome: DerivationOutcome;

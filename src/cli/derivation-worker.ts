@@ -6,7 +6,11 @@
 import { parentPort } from 'node:worker_threads';
 import { deriveEncoded } from '../catalogue/index.ts';
 
-parentPort?.on('message', ({ index, record, options }) => {
-  const outcome = deriveEncoded(record, options);
-  parentPort!.postMessage({ index, outcome }, 'encoded' in outcome ? [outcome.encoded.buffer as ArrayBuffer] : []);
+parentPort?.on('message', ({ index, record, options, series }) => {
+  const outcome = deriveEncoded(record, options, series);
+  const transfer = 'encoded' in outcome ? [outcome.encoded, outcome.series].filter((b) => b !== undefined) : [];
+  parentPort!.postMessage(
+    { index, outcome },
+    transfer.map((b) => b.buffer as ArrayBuffer),
+  );
 });

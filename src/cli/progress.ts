@@ -1,6 +1,6 @@
 /**
  * Progress of a long check or build on a terminal: one line, rewritten in place at most ten
- * times a second, "derived 120 of 1000 records (12 s)", cleared at the end. Shown only when the
+ * times a second, "checked 120 of 1000 records (12 s)", cleared at the end. Shown only when the
  * command writes to a terminal (stderr is a TTY), not in CI, not for `--format json`, and only
  * for more than a few dozen records; otherwise the progress is silent.
  */
@@ -33,7 +33,7 @@ export function progressLine(out: Output, total: number, options: { json?: boole
       shown = now;
       written = true;
       const seconds = ((now - started) / 1000).toFixed(0);
-      out.stderr(`\r\x1b[K${options.verb ?? 'derived'} ${done} of ${of} records (${seconds} s)`);
+      out.stderr(`\r\x1b[K${options.verb ?? 'checked'} ${done} of ${of} records (${seconds} s)`);
     },
     end() {
       if (written) out.stderr('\r\x1b[K');
