@@ -70,8 +70,10 @@ describe('public API', () => {
       'findRecordFiles',
       'isPublishable',
       'loadCatalogue',
+      'loadSystemRecords',
       'recordFileProblems',
       'recordIdProblem',
+      'systemFolderOf',
       'toolVersion',
     ]);
   });

@@ -24,9 +24,16 @@ export async function atlasRecords(): Promise<RecordView[]> {
   return (await entries('mechanisms')).map((e) => e.data).sort((a, b) => a.id.localeCompare(b.id));
 }
 
-/** Every species, sorted by symbol. */
+/** Every species: the formulas shared by the catalogue by symbol, then each system's labels. */
 export async function atlasSpecies(): Promise<SpeciesPage[]> {
-  return (await entries('species')).map((e) => e.data).sort((a, b) => a.symbol.localeCompare(b.symbol));
+  return (await entries('species'))
+    .map((e) => e.data)
+    .sort(
+      (a, b) =>
+        Number(a.system !== undefined) - Number(b.system !== undefined) ||
+        (a.system ?? '').localeCompare(b.system ?? '') ||
+        a.symbol.localeCompare(b.symbol),
+    );
 }
 
 /** Every reaction system, sorted by name. */

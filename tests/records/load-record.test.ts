@@ -28,6 +28,8 @@ describe('the public API', () => {
       'keyText',
       'loadRecordFile',
       'loadRecordSource',
+      'loadSystemFile',
+      'loadSystemSource',
       'parseRecordYaml',
       'pathWords',
       'placeDiagnostics',
