@@ -17,6 +17,7 @@ export {
 export { sarifReport } from './report/sarif.ts';
 export { primaryChecks, tallyVerdicts } from './report/verdict-tally.ts';
 export { byPosition, diagnosticRow, summaryLine, textReport } from './report/text.ts';
+export type { ConcentrationUnit } from './plots/concentration-scale.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
 export { sbmlDocument } from './sbml/sbml.ts';
@@ -41,6 +42,7 @@ export {
   predictionText,
   quantityText,
   rateConstantUnit,
+  recordConcentrationUnit,
   roleRank,
   roleWords,
   severityCount,
