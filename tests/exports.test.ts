@@ -84,10 +84,12 @@ describe('public API', () => {
       'formatRecordText',
       'isPublishable',
       'loadCatalogue',
+      'loadSystemRecords',
       'openDerivationCache',
       'receiveOutcome',
       'recordFileProblems',
       'recordIdProblem',
+      'systemFolderOf',
       'toolVersion',
       'withSystemFits',
     ]);

@@ -18,13 +18,13 @@ function start(form: HTMLFormElement): void {
   const params = new URLSearchParams(location.search);
   for (const select of selects) {
     const value = params.get(select.name);
-    if (value && [...select.options].some((o) => o.value === value)) select.value = value;
+    if (value && Array.from(select.options).some((o) => o.value === value)) select.value = value;
   }
   form.hidden = false;
   const apply = () => {
     const [severity, rule, system] = selects.map((s) => s.value);
     let shown = 0;
-    for (const row of document.querySelectorAll<HTMLElement>('tr[data-severity][data-rule]')) {
+    for (const row of Array.from(document.querySelectorAll<HTMLElement>('tr[data-severity][data-rule]'))) {
       const match =
         (!severity || row.dataset['severity'] === severity) &&
         (!rule || row.dataset['rule'] === rule) &&
@@ -32,7 +32,7 @@ function start(form: HTMLFormElement): void {
       row.hidden = !match;
       if (match) shown++;
     }
-    for (const section of document.querySelectorAll<HTMLElement>('section.rule, section.severity'))
+    for (const section of Array.from(document.querySelectorAll<HTMLElement>('section.rule, section.severity')))
       section.hidden = section.querySelector('tr[data-severity]:not([hidden])') === null && isFiltering();
     const total = document.querySelectorAll('tr[data-severity][data-rule]').length;
     status.textContent = isFiltering() ? `${shown} of ${total} checks shown.` : `All ${total} checks shown.`;

@@ -27,7 +27,15 @@ let shared: Promise<Shared> | undefined;
 function share(catalogue: Catalogue): Shared {
   const plain = JSON.parse(JSON.stringify(catalogue)) as Catalogue;
   const records = Object.freeze([...plain.records].sort((a, b) => a.id.localeCompare(b.id)));
-  const species = Object.freeze([...plain.species].sort((a, b) => a.symbol.localeCompare(b.symbol)));
+  // The formulas shared by the catalogue first, by symbol; then each system's labels.
+  const species = Object.freeze(
+    [...plain.species].sort(
+      (a, b) =>
+        Number(a.system !== undefined) - Number(b.system !== undefined) ||
+        (a.system ?? '').localeCompare(b.system ?? '') ||
+        a.symbol.localeCompare(b.symbol),
+    ),
+  );
   const systems = Object.freeze([...plain.systems].sort((a, b) => a.system.localeCompare(b.system)));
   return {
     entries: {
@@ -56,7 +64,7 @@ export async function atlasRecords(): Promise<RecordView[]> {
   return (await catalogue()).records as RecordView[];
 }
 
-/** Every species, sorted by symbol. */
+/** Every species: the formulas shared by the catalogue by symbol, then each system's labels. */
 export async function atlasSpecies(): Promise<SpeciesPage[]> {
   return (await catalogue()).species as SpeciesPage[];
 }

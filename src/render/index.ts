@@ -35,6 +35,7 @@ export {
   type FindingCounts,
 } from './report/summary-words.ts';
 export { findingsSection, RECORD_SECTIONS, recordHeading, textReport, type TextSection } from './report/text.ts';
+export type { ConcentrationUnit } from './plots/concentration-scale.ts';
 export { concentrationTimeSvg } from './plots/concentration-time-svg.ts';
 export { energyProfileSvg } from './plots/energy-profile-svg.ts';
 export { fittedCurvesSvg, orderPlotSvg, residualsSvg, type FitPlotOptions } from './plots/fit-plots-svg.ts';
@@ -60,6 +61,7 @@ export {
   predictionText,
   quantityText,
   rateConstantUnit,
+  recordConcentrationUnit,
   roleRank,
   roleWords,
   severityCount,

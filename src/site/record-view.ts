@@ -8,11 +8,14 @@ import type { Observation, RecordReport, Reference, VerdictCounts } from '../mod
 import {
   concentrationTimeSvg,
   energyProfileSvg,
+  recordConcentrationUnit,
   overallLatex,
   primaryChecks,
   recordReport,
   sbmlDocument,
+  superscript,
   tallyVerdicts,
+  type ConcentrationUnit,
 } from '../render/index.ts';
 
 export interface StepView {
@@ -175,6 +178,10 @@ export function recordView(checked: CatalogueRecord): RecordView {
   const series = checked.series;
   if (series?.status === 'ok')
     view.concentrationSvg = concentrationTimeSvg(series, {
+      ...plotUnitOf(
+        view.observationsGiven,
+        series.values.filter((_, i) => !series.held[i] && series.roles[i] !== 'third_body'),
+      ),
       logTime: true,
       idPrefix: `concentration-${checked.id}`,
       title: `Simulated concentrations against time for ${view.title} (observation ${series.observation}, log time axis)`,
@@ -193,6 +200,22 @@ export function recordView(checked: CatalogueRecord): RecordView {
   view.survives = view.errors === 0 && !failed;
   return view;
 }
+
+/**
+ * The concentration axis in the record's own unit where it writes one outside the molar family
+ * (a gas-phase record in molecule cm⁻³), scaled by a power of ten so the ticks read 0–1000.
+ */
+function plotUnitOf(given: readonly ObservationView[], values: readonly number[][]): { unit?: ConcentrationUnit } {
+  const unit = recordConcentrationUnit(given.flatMap((o) => o.concentrations.map(([, q]) => q)));
+  if (MOLAR_FAMILY.includes(unit.text)) return {};
+  const tallest = Math.max(0, ...values.flat()) / unit.molar;
+  const power = tallest > 0 ? Math.floor(Math.log10(tallest)) : 0;
+  const scaled = power >= 3 || power <= -3 ? power : 0;
+  const symbol = scaled === 0 ? unit.display : `10${superscript(String(scaled))} ${unit.display}`;
+  return { unit: { symbol, perMolar: 1 / unit.molar / 10 ** scaled } };
+}
+
+const MOLAR_FAMILY = ['M', 'mM', 'µM', 'uM', 'nM', 'pM', 'mol/L', 'mol dm^-3', 'mol/dm^3', 'mol L^-1'];
 
 function observationView(o: Observation): ObservationView {
   const pairs = (m: Record<string, string | number> | undefined) =>

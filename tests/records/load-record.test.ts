@@ -30,6 +30,8 @@ describe('the public API', () => {
       'keyText',
       'loadRecordFile',
       'loadRecordSource',
+      'loadSystemFile',
+      'loadSystemSource',
       'parseRecordYaml',
       'pathWords',
       'placeDiagnostics',

@@ -95,7 +95,8 @@ describe('display words and number formats', () => {
   });
 
   it('says what was predicted: at the conditions, at any, or a range', () => {
-    expect(predictionText(check({ predicted: 0.5252 }))).toBe('0.525 at these conditions');
+    // Rounded to the measurement it is compared with (1 ± 0.1: one decimal).
+    expect(predictionText(check({ predicted: 0.5252 }))).toBe('0.5 at these conditions');
     expect(predictionText(check({ predicted: 1, basis: 'limits' }))).toBe('1 (at any conditions)');
     expect(predictionText(check({ range: [0, 1], basis: 'limits', status: 'not_excluded' }))).toBe(
       '0 to 1 for some constants (not given)',

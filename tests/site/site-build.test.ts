@@ -69,7 +69,8 @@ describe('the demo catalogue builds', () => {
     expect(html).toContain('✓ consistent');
     expect(html).toContain('role="img"');
     expect(html).toContain('href="/systems/kx7-hydroarylation/"');
-    expect(html).toMatch(/href="\/s\/[a-z0-9-]+\/"/);
+    // Label species link to their system's own pages.
+    expect(html).toMatch(/href="\/s\/kx7-hydroarylation\/[a-z0-9-]+\/"/);
     expect(html).toContain('href="https://doi.org/10.5555/chmg.2026.0007"');
     expect(html).toContain('id="L1"');
     // No record in the demo mentions hazards, so no caution box above the content.

@@ -7,7 +7,8 @@
 
 /** A display unit: value shown = concentration in M × perMolar. */
 export interface ConcentrationUnit {
-  symbol: 'M' | 'mM' | 'µM' | 'nM' | 'pM';
+  /** M, mM, µM, nM, pM; or the record's own unit (`10¹⁴ molecule cm⁻³`) when it writes another */
+  symbol: string;
   perMolar: number;
 }
 

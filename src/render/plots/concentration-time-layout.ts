@@ -84,6 +84,7 @@ export function layoutTimePlot(
   chosen: ReturnType<typeof selectCurves>,
   frame: TimePlotLayout['frame'],
   logTime: boolean,
+  fixedUnit?: ConcentrationUnit,
 ): TimePlotLayout {
   const { times } = series;
   const end = times[times.length - 1] ?? 1;
@@ -104,7 +105,7 @@ export function layoutTimePlot(
     : scaleTicks(linearTicks(end / unitOfTime.seconds), unitOfTime.seconds);
 
   const tallest = Math.max(0, ...chosen.curves.map((c) => Math.max(...c.values) * 10 ** c.exponent));
-  const unit = concentrationUnit(tallest);
+  const unit = fixedUnit ?? concentrationUnit(tallest);
   const shown = niceTicks(0, tallest * unit.perMolar, 5);
   const step = shown.length > 1 ? shown[1]! - shown[0]! : tallest * unit.perMolar || 1;
   // A little headroom, so that no curve runs along the top of the frame.

@@ -7,6 +7,7 @@ import type { ConcentrationSeries } from '../../engine/index.ts';
 import { captionLines, curveName, endLabels, legend } from './concentration-time-labels.ts';
 import { layoutTimePlot, selectCurves, type PlottedCurve, type TimePlotLayout } from './concentration-time-layout.ts';
 import { markerSvg, strokeAttributes } from './curve-style.ts';
+import type { ConcentrationUnit } from './concentration-scale.ts';
 import { coordinate as c, escapeXml } from './svg-text.ts';
 
 /** Axis type, size, ids and title of the drawing. */
@@ -19,6 +20,8 @@ export interface ConcentrationTimeSvgOptions {
   idPrefix?: string;
   width?: number;
   height?: number;
+  /** the concentration axis in this unit (the record's own) instead of the M-family unit that fits */
+  unit?: ConcentrationUnit;
 }
 
 const MARKERS_PER_CURVE = 5;
@@ -34,13 +37,14 @@ export function concentrationTimeSvg(series: ConcentrationSeries, options: Conce
   const right = width - 104;
   const drawnLegend = legend(chosen.curves, left, width - 12, 18);
   const top = 18 + drawnLegend.rows * 16 + 4;
-  const layout0 = layoutTimePlot(series, chosen, { left, right, top, bottom: height - 44 }, logTime);
+  const layout0 = layoutTimePlot(series, chosen, { left, right, top, bottom: height - 44 }, logTime, options.unit);
   const caption = captionLines(series, layout0, Math.floor((width - left) / 5.4));
   const layout = layoutTimePlot(
     series,
     chosen,
     { left, right, top, bottom: height - 44 - 13 * caption.length },
     logTime,
+    options.unit,
   );
   const title = options.title ?? describe(series, layout, logTime);
   const open = `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" role="img" aria-label="${escapeXml(title)}" font-family="Helvetica, Arial, sans-serif" font-size="11" fill="#111">`;

@@ -31,7 +31,7 @@ export function trueMinus(text: string): string {
 
 /** Every hyphen-minus that stands before a number (at the start or after a space, bracket, = or ±) as a true minus. */
 export function trueMinusSigns(text: string): string {
-  return text.replace(/(^|[\s(=±~≈<>,;])-(?=\.?\d)/g, '$1\u2212');
+  return text.replace(/(^|[\s(=±~≈<>,;])(?<!\^\()-(?=\.?\d)/g, '$1\u2212');
 }
 
 /** A number in plain or scientific notation with `digits` significant figures: 5.63 × 10⁻⁶. */

@@ -6,13 +6,13 @@ import { orderText } from './numbers.ts';
 /**
  * What the rate law predicts for one observed order: at the conditions, a value whatever the
  * constants, the orders it allows for some constants (which are not given), or why there is none.
- * A predicted value is rounded to the decimals of the measured order it is compared with.
+ * A value at the conditions (a number the constants give) is rounded to the decimals of the measured
+ * order it is compared with; a limit of the rate law is exact and written as it is.
  */
 export function predictionText(check: ObservationJson): string {
-  const orderText = (x: number | string) => orderLikeMeasured(x, check.observed, check.tolerance);
   if (check.range) return `${orderText(check.range[0])} to ${orderText(check.range[1])} for some constants (not given)`;
   if (check.predicted === undefined) return check.reason ? `no prediction: ${check.reason}` : '—';
   return check.basis === 'limits'
     ? `${orderText(check.predicted)} (at any conditions)`
-    : `${orderText(check.predicted)} at these conditions`;
+    : `${orderLikeMeasured(check.predicted, check.observed, check.tolerance)} at these conditions`;
 }
