@@ -117,7 +117,7 @@ export function orderPlotSvg(plot: FitPlotSeries, options: FitPlotOptions = {}):
   const order = `order ${numberText(line.slope, 3)} ± ${numberText(line.halfWidth, 2)} (95 %)`;
   const legend: LegendEntry[] = [
     { label: 'measured', style: MEASURED, markerOnly: true },
-    { label: `fitted slope: ${order}`, style: { marker: 'square' } },
+    { label: `fitted slope: ${order}`, style: { marker: 'square' }, lineOnly: true },
     { label: 'slope within its 95 % interval', band: true },
   ];
   const title = `Log–log plot of the initial rate against [${plot.x}]: fitted ${order}${heldText(plot)}`;
