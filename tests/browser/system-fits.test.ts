@@ -63,7 +63,7 @@ describe.skipIf(!run)('fits on the system pages in Chromium', () => {
       const box = await svg.boundingBox();
       expect(box?.width ?? 0, kind).toBeGreaterThan(200);
       expect(await svg.getAttribute('aria-label'), kind).toMatch(/\[A\]/);
-      const texts = await svg.locator('text').allInnerTexts();
+      const texts = await svg.locator('text').allTextContents();
       expect(texts, kind).toContain('[A] / M');
       if (kind !== 'residuals')
         expect(
@@ -71,7 +71,7 @@ describe.skipIf(!run)('fits on the system pages in Chromium', () => {
           kind,
         ).toBe(true);
     }
-    const legend = await set.locator('figure[data-plot="fitted"] svg text.legend').allInnerTexts();
+    const legend = await set.locator('figure[data-plot="fitted"] svg text.legend').allTextContents();
     expect(legend).toEqual(
       expect.arrayContaining(['measured', 'kx7-hydroarylation-alkene-first', 'kx7-hydroarylation-arene-first']),
     );
