@@ -49,7 +49,11 @@ describe('law fits cover their true constants', () => {
 describe('ranking rivals fitted to the same data', () => {
   const rivals = (favoured: 'S' | 'B') =>
     (['S', 'B'] as const).map((first) => {
-      const record = saturationRecord(`${first.toLowerCase()}-first`, first, first === favoured ? 'favoured' : 'proposed');
+      const record = saturationRecord(
+        `${first.toLowerCase()}-first`,
+        first,
+        first === favoured ? 'favoured' : 'proposed',
+      );
       const data = first === 'S' ? asData(saturationTable(k_TRUE, K_TRUE, 3)) : [];
       const derivation = fitDerivation(deriveMechanism(record), record, data);
       return { id: `${first.toLowerCase()}-first`, status: record.status, record, derivation, data };
