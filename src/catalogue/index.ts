@@ -14,3 +14,4 @@ export {
   recordIdProblem,
 } from '../records/index.ts';
 export { checkWithRivals, withSystemFits, type FittedRecord } from './fit-systems.ts';
+export type { SystemDataSet } from '../engine/index.ts';
