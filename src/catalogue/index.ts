@@ -33,3 +33,4 @@ export {
   type FormattedRecordFile,
 } from '../records/index.ts';
 export { checkWithRivals, withSystemFits, type FittedRecord } from './fit-systems.ts';
+export type { SystemDataSet } from '../engine/index.ts';

@@ -5,7 +5,7 @@
  * log–log order plot) drawn at build time. Everything comes from the JSON report's shape of the
  * fits and the engine's plot series; nothing is fitted here.
  */
-import type { SystemDataSet } from '../engine/index.ts';
+import type { SystemDataSet } from '../catalogue/index.ts';
 import {
   favouredSentence,
   fittedCurvesSvg,

@@ -58,7 +58,8 @@ export interface TimeCourseInput {
   held: ReadonlySet<string>;
 }
 
-const SUBSTEPS = 40;
+const SUBSTEPS = 20;
+const WINDOW = 1e3;
 // The integrator's tolerances: relative 1e-6 and absolute 1e-8 of the largest starting
 // concentration, far below any measured noise; tighter ones only slow every fit (1.2 s against
 // 20 s for the demo progress curve) without moving the constants.
@@ -66,7 +67,7 @@ const RTOL = 1e-6;
 const ATOL = 1e-8;
 
 /** Fits the closed-form law and the mass-action simulation to a time course. */
-export function fitTimeCourse(input: TimeCourseInput, maxIterations = 200): TimeCourseFit {
+export function fitTimeCourse(input: TimeCourseInput, maxIterations = 60): TimeCourseFit {
   const { data } = input;
   const issues: FitIssue[] = [];
   const { y, weights, slots } = flatten(data);
@@ -86,7 +87,11 @@ export function fitTimeCourse(input: TimeCourseInput, maxIterations = 200): Time
         criteria: leastSquaresCriteria(fit.rss, fit.n, parameters.length),
         curves: curvesOf(values),
       };
-      apparent = new Map(law.fn.constants.map((c, j) => [c, values[j]!]));
+      // Only what the closed form determined starts the simulation; the rest keep the record's values.
+      const determined = law.fn.constants.flatMap((c, j) =>
+        fit.converged && fit.parameters[j]!.identifiable ? [[c, values[j]!] as const] : [],
+      );
+      if (determined.length > 0) apparent = new Map(determined);
     } else issues.push({ kind: 'model-failed', message: 'the law has no starting constants (give the steps k and K)' });
   }
   const simulated = fitSimulation(input, apparent, y, weights, slots, maxIterations);
@@ -251,15 +256,20 @@ function fitSimulation(
       rtol: RTOL,
       atol: ATOL * scale,
       nonNegative: true,
-      maxSteps: 20_000,
+      maxSteps: 5_000,
     });
     if (run.status !== 'ok') return measured.map(() => data.times.map(() => NaN));
     const at = new Map(run.t.map((t, k) => [t, run.y[k]!]));
     return measured.map((i) => data.times.map((t) => at.get(t)?.[i] ?? NaN));
   };
+  // Each constant stays within a factor of WINDOW of its start: a constant running off to 1e19
+  // (one the data barely feel) would make every later integration stiff and slow.
   const valuesOf = (free: readonly string[], x: readonly number[]) => {
     const all = new Map(start);
-    free.forEach((n, j) => all.set(n, x[j]!));
+    free.forEach((n, j) => {
+      const s0 = start.get(n)!;
+      all.set(n, Math.min(s0 * WINDOW, Math.max(s0 / WINDOW, x[j]!)));
+    });
     return all;
   };
   const modelOf = (free: readonly string[]) => (x: readonly number[]) => pick(curvesOf(valuesOf(free, x)), slots);
@@ -279,6 +289,17 @@ function fitSimulation(
     free,
     fit.parameters.map((p) => p.value),
   );
+  // A constant held at the edge of its window is not bounded by the data: say so.
+  const edge = (name: string, value: number) => {
+    const s0 = start.get(name)!;
+    return value >= s0 * WINDOW * 0.999 || value <= (s0 / WINDOW) * 1.001;
+  };
+  fit.parameters.forEach((p, j) => {
+    if (!edge(p.name, p.value)) return;
+    const note = `it ran to the edge of its search window (×${WINDOW} of its start): the data do not bound it`;
+    const clamped = fitted.get(free[j]!)!;
+    fit.parameters[j] = { ...p, value: clamped, identifiable: false, identifiabilityNote: note };
+  });
   return {
     fit,
     criteria: leastSquaresCriteria(fit.rss, fit.n, parameters.length),

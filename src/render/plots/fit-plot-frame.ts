@@ -21,6 +21,8 @@ export interface LegendEntry {
   label: string;
   style?: CurveStyle;
   markerOnly?: boolean;
+  /** a line without its marker */
+  lineOnly?: boolean;
   band?: boolean;
 }
 
@@ -46,7 +48,7 @@ export function paddedRange(values: readonly number[], log: boolean): [number, n
 /** Draws the axes and legend and returns the mapping. */
 export function drawFrame(width: number, height: number, xAxis: Axis, yAxis: Axis, legend: LegendEntry[]): Frame {
   const svg: string[] = [];
-  const perRow = Math.max(1, Math.floor((width - 80) / 230));
+  const perRow = Math.max(1, Math.floor((width - 80) / 270));
   const rows = Math.ceil(legend.length / perRow);
   const box = { left: 78, right: width - 16, top: 14 + rows * 16 + 6, bottom: height - 46 };
   const scale = (axis: Axis, a: number, b: number) => {
@@ -74,13 +76,13 @@ export function drawFrame(width: number, height: number, xAxis: Axis, yAxis: Axi
     `<text transform="translate(16 ${c((box.top + box.bottom) / 2)}) rotate(-90)" text-anchor="middle" class="axis-title">${escapeXml(yAxis.title)}</text>`,
   );
   legend.forEach((entry, i) => {
-    const lx = 80 + (i % perRow) * 230;
+    const lx = 80 + (i % perRow) * 270;
     const ly = 14 + Math.floor(i / perRow) * 16;
     if (entry.band) svg.push(`<rect x="${lx}" y="${ly - 5}" width="28" height="10" fill="#d9d9d9" stroke="none"/>`);
     else if (entry.style && !entry.markerOnly)
       svg.push(`<line x1="${lx}" y1="${ly}" x2="${lx + 28}" y2="${ly}" ${strokeAttributes(entry.style)}/>`);
-    if (entry.style) svg.push(markerSvg(entry.style.marker, lx + 14, ly));
-    svg.push(`<text x="${lx + 34}" y="${ly + 4}" class="legend">${escapeXml(truncate(entry.label, 34))}</text>`);
+    if (entry.style && !entry.lineOnly) svg.push(markerSvg(entry.style.marker, lx + 14, ly));
+    svg.push(`<text x="${lx + 34}" y="${ly + 4}" class="legend">${escapeXml(truncate(entry.label, 40))}</text>`);
   });
   return { svg, x, y, box };
 }

@@ -50,7 +50,8 @@ export function fittedCurvesSvg(plot: FitPlotSeries, options: FitPlotOptions = {
   const series = plot.y.length > 1 ? (j: number) => ` ${plot.y[j]}` : () => '';
   const legend: LegendEntry[] = [
     ...plot.y.map((_, j) => ({ label: `measured${series(j)}`, style: { marker: markerOf(j) }, markerOnly: true })),
-    ...rivals.map((r, i) => ({ label: r, style: { ...curveStyle(i + 1), marker: curveStyle(i + 1).marker } })),
+    // A time course's curves are drawn through the measured times, so their markers would hide the points.
+    ...rivals.map((r, i) => ({ label: r, style: curveStyle(i + 1), lineOnly: !rates })),
   ];
   const title = `Measured ${rates ? 'initial rates' : 'concentrations'} of ${plot.y.join(', ')} against ${xTitle(plot)} with each rival's fitted ${rates ? 'rate law' : 'curve'}${heldText(plot)}`;
   const frame = drawFrame(width, height, xAxis, yAxis, legend);
@@ -117,7 +118,7 @@ export function orderPlotSvg(plot: FitPlotSeries, options: FitPlotOptions = {}):
   const order = `order ${numberText(line.slope, 3)} ± ${numberText(line.halfWidth, 2)} (95 %)`;
   const legend: LegendEntry[] = [
     { label: 'measured', style: MEASURED, markerOnly: true },
-    { label: `fitted slope: ${order}`, style: { marker: 'square' } },
+    { label: `fitted slope: ${order}`, style: { marker: 'square' }, lineOnly: true },
     { label: 'slope within its 95 % interval', band: true },
   ];
   const title = `Log–log plot of the initial rate against [${plot.x}]: fitted ${order}${heldText(plot)}`;
@@ -158,5 +159,5 @@ function range(values: readonly number[], log: boolean): { lo: number; hi: numbe
 }
 
 function markerOf(series: number) {
-  return (['circle-filled', 'square-filled', 'triangle-filled', 'diamond-filled'] as const)[series % 4]!;
+  return (['circle-filled', 'diamond', 'triangle-filled', 'square'] as const)[series % 4]!;
 }
