@@ -60,7 +60,7 @@ export interface SimulationJson {
   observation: string;
   status: string;
   message?: string;
-  /** rate of the overall reaction at 1 % conversion, M s^-1 */
+  /** rate of the overall reaction extrapolated to zero conversion (from readings at 1 to 4 %), M s^-1 */
   initial_rate?: number;
   time_s?: number;
   orders: Record<string, number>;
