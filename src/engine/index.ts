@@ -49,6 +49,7 @@ export {
 
 // Observations judged against the laws.
 export type { ObservationCheck } from './observations/judge-order.ts';
+export { decimalPlaces, measurementDecimals } from './observations/measurement-precision.ts';
 
 // Energies.
 export type { EnergyBasis, EnergyProfile, EnergyResult, ProfileState } from './energy/index.ts';

@@ -10,6 +10,7 @@ import type { MechanismRecord, Status } from '../../model/index.ts';
 import { diagnostic, type Diagnostic } from '../../model/index.ts';
 import { DIMENSIONLESS, sameDimension } from '../units/dimension.ts';
 import { parseQuantity } from '../units/quantity.ts';
+import { measurementDecimals } from './measurement-precision.ts';
 import type { OrderRange, RateLawMethod } from '../rate-law/rate-law.ts';
 import type { Rational } from '../exact/rational.ts';
 
@@ -97,7 +98,9 @@ export function readObservedOrder(text: string | number): { value: number; toler
 export function contradiction(check: ObservationCheck, status: Status, index: number): Diagnostic {
   const predicted =
     check.predicted !== undefined
-      ? `${check.predicted}${check.basis === 'limits' ? ' whatever the constants' : ''}`
+      ? check.basis === 'limits'
+        ? `${check.predicted} whatever the constants`
+        : `${check.predicted.toFixed(measurementDecimals(check.observed, check.tolerance))} at these conditions`
       : `only orders from ${check.range![0]} to ${check.range![1]}, whatever the constants`;
   return diagnostic(
     'observation/order',

@@ -3,20 +3,10 @@
  * decimals than the measured order it is checked against (a prediction of 0.5556 beside a
  * measured 0.52 ± 0.08 reads 0.56), so one value is never printed two ways on two pages.
  */
+import { decimalPlaces, measurementDecimals } from '../../engine/index.ts';
 import { trueMinus } from './numbers.ts';
 
-/** Decimal places in the shortest text of a number (0.52 → 2, 1 → 0, 1.5e-3 → 4). */
-export function decimalPlaces(x: number): number {
-  if (!Number.isFinite(x)) return 0;
-  const [mantissa, exponent] = Math.abs(x).toExponential().split('e') as [string, string];
-  const digits = (mantissa.split('.')[1] ?? '').length;
-  return Math.max(0, digits - Number(exponent));
-}
-
-/** The decimals of a measurement `observed ± tolerance`: the finer of the two. */
-export function measurementDecimals(observed: number, tolerance: number): number {
-  return Math.min(6, Math.max(decimalPlaces(observed), decimalPlaces(tolerance)));
-}
+export { decimalPlaces, measurementDecimals };
 
 /**
  * An order rounded to `decimals` places with a true minus sign; an exact fraction ("1/2") is
