@@ -19,6 +19,7 @@ import type { LawFunction } from './law-function.ts';
 import type { NonlinearFit } from './nonlinear-fit.ts';
 import { fitNonlinear } from './nonlinear-least-squares.ts';
 import { determinedParameters } from './determined-parameters.ts';
+import { unreliableReasons } from './time-course-reliability.ts';
 
 /** One model's fit to a time course, with its curves at the measured times. */
 export interface TimeCourseModelFit {
@@ -26,6 +27,8 @@ export interface TimeCourseModelFit {
   criteria: InformationCriteria;
   /** per measured species, the model's concentration at each time / M */
   curves: number[][];
+  /** why the fit is not to be trusted (not converged, a constant unbounded, a misfit); absent when it stands */
+  unreliable?: string[];
 }
 
 /** The two fits of one time course. */
@@ -86,6 +89,7 @@ export function fitTimeCourse(input: TimeCourseInput, maxIterations = 60): TimeC
         fit,
         criteria: leastSquaresCriteria(fit.rss, fit.n, parameters.length),
         curves: curvesOf(values),
+        ...reliability(fit, weights !== undefined),
       };
       // Only what the closed form determined starts the simulation; the rest keep the record's values.
       const determined = law.fn.constants.flatMap((c, j) =>
@@ -98,6 +102,11 @@ export function fitTimeCourse(input: TimeCourseInput, maxIterations = 60): TimeC
   if ('issue' in simulated) issues.push(simulated.issue);
   else out.simulation = simulated;
   return out;
+}
+
+function reliability(fit: NonlinearFit, weighted: boolean): { unreliable?: string[] } {
+  const reasons = unreliableReasons(fit, weighted);
+  return reasons.length > 0 ? { unreliable: reasons } : {};
 }
 
 /** The measured values in one vector, with where each came from (species j, point i). */
@@ -304,6 +313,7 @@ function fitSimulation(
     fit,
     criteria: leastSquaresCriteria(fit.rss, fit.n, parameters.length),
     curves: curvesOf(fitted),
+    ...reliability(fit, weights !== undefined),
     fixed: names.filter((n) => !free.includes(n)).map((name) => ({ name, value: start.get(name)! })),
   };
 }

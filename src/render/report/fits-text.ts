@@ -21,7 +21,9 @@ export function favouredSentence(set: DataSetFitsJson): string | undefined {
   const rows = set.drivers?.length
     ? `; rows ${listText(set.drivers.map(String))} of ${set.observation} drive it most`
     : '';
-  return `the data favour ${best.record}: ${weight}${rows}`;
+  const shaky = ranked.filter((r) => r.unreliable).map((r) => r.record);
+  const caveat = shaky.length > 0 ? ` — but the fit of ${listText(shaky)} is unreliable, so the ranking is too` : '';
+  return `the data favour ${best.record}: ${weight}${rows}${caveat}`;
 }
 
 /** A weight as a chemist reads it: 0.97, 0.003, < 0.001. */
@@ -90,6 +92,7 @@ function rivalLines(r: RivalFitJson): string[] {
     ...r.parameters.map((q) => `    ${valueText(q)}`),
     `    RSS ${numberText(r.rss ?? NaN)}, AICc ${numberText(r.aicc ?? NaN, 4)}, BIC ${numberText(r.bic ?? NaN, 4)}${ranked}${r.rejected ? ' — rejected by these data' : ''}${r.converged ? '' : ' — did not converge'}`,
     ...(r.issue ? [`    ${r.issue}`] : []),
+    ...(r.unreliable ? [`    unreliable, do not read these constants as measured: ${r.unreliable}`] : []),
   ];
 }
 
