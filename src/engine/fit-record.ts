@@ -15,7 +15,7 @@ import { fitArrhenius, fitEyring } from './fitting/activation-parameters.ts';
 import { fitInitialRateOrders } from './fitting/initial-rate-orders.ts';
 import type { InitialRateData, KineticData, TimeCourseData } from './fitting/kinetic-data.ts';
 import { fitLawToRates, missingSymbols, pointConcentrations } from './fitting/law-fit.ts';
-import { lawFunction, restrictLaw, unseenConstants } from './fitting/law-function.ts';
+import { lawFunction, restrictLaw, steadyTermConstants, unseenConstants } from './fitting/law-function.ts';
 import type { DataSetFits, LawFitResult, RecordFits } from './fitting/record-fits.ts';
 import { fitTimeCourse, type TimeCourseFit, type TimeCourseInput } from './fitting/time-course-fit.ts';
 import { checkObservations } from './observations/check-observations.ts';
@@ -326,7 +326,8 @@ export function timeCourseInput(
       if (symbol && !fixed.has(symbol)) atStart.set(symbol, start.get(s) ?? 0);
     }
     const unseen = unseenConstants(primary, [atStart]);
-    const free = fn.constants.filter((c) => !unseen.includes(c));
+    const steady = steadyTermConstants(primary, new Set(fixed.keys()));
+    const free = fn.constants.filter((c) => !unseen.includes(c) && !steady.includes(c));
     if (fn.symbols.every((s) => fixed.has(s) || moving.has(s)))
       input.law = { fn: restrictLaw(fn, free, known), definitions, known, fixed, symbolOf };
   }

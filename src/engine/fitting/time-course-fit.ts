@@ -33,7 +33,7 @@ export interface TimeCourseModelFit {
 
 /** The two fits of one time course. */
 export interface TimeCourseFit {
-  closedForm?: TimeCourseModelFit;
+  closedForm?: TimeCourseModelFit & { fixed: { name: string; value: number }[] };
   simulation?: TimeCourseModelFit & { fixed: { name: string; value: number }[] };
   issues: FitIssue[];
 }
@@ -81,19 +81,26 @@ export function fitTimeCourse(input: TimeCourseInput, maxIterations = 60): TimeC
     const curvesOf = (values: readonly number[]) => integrateLaw(input, law, values);
     const initial = law.fn.constants.map((c) => law.known.get(c) ?? NaN);
     if (initial.every((v) => v > 0 && Number.isFinite(v))) {
-      const parameters = law.fn.constants.map((name, j) => ({ name, initial: initial[j]!, positive: true }));
-      const model = (values: readonly number[]) => pick(curvesOf(values), slots);
+      // A constant the curves cannot tell from the others (K_I with [I] held all run long: it
+      // only rescales k_obs and K_S) is held at its start, or the fit wanders along the ridge.
+      const names = law.fn.constants;
+      const free = determinedParameters(names, initial, (v) => pick(curvesOf(v), slots));
+      const valuesOf = (x: readonly number[]) =>
+        names.map((n, j) => (free.includes(n) ? x[free.indexOf(n)]! : initial[j]!));
+      const parameters = free.map((name) => ({ name, initial: initial[names.indexOf(name)]!, positive: true }));
+      const model = (x: readonly number[]) => pick(curvesOf(valuesOf(x)), slots);
       const fit = fitNonlinear({ parameters, model, y, ...(weights && { weights }) }, { maxIterations });
-      const values = fit.parameters.map((p) => p.value);
+      const values = valuesOf(fit.parameters.map((p) => p.value));
       out.closedForm = {
         fit,
         criteria: leastSquaresCriteria(fit.rss, fit.n, parameters.length),
         curves: curvesOf(values),
+        fixed: names.flatMap((name, j) => (free.includes(name) ? [] : [{ name, value: initial[j]! }])),
         ...reliability(fit, weights !== undefined),
       };
       // Only what the closed form determined starts the simulation; the rest keep the record's values.
-      const determined = law.fn.constants.flatMap((c, j) =>
-        fit.converged && fit.parameters[j]!.identifiable ? [[c, values[j]!] as const] : [],
+      const determined = fit.parameters.flatMap((p) =>
+        fit.converged && p.identifiable ? [[p.name, p.value] as const] : [],
       );
       if (determined.length > 0) apparent = new Map(determined);
     } else issues.push({ kind: 'model-failed', message: 'the law has no starting constants (give the steps k and K)' });
