@@ -105,7 +105,10 @@ export function fitTimeCourse(input: TimeCourseInput, maxIterations = 60): TimeC
       if (determined.length > 0) apparent = new Map(determined);
     } else issues.push({ kind: 'model-failed', message: 'the law has no starting constants (give the steps k and K)' });
   }
-  const simulated = fitSimulation(input, apparent, y, weights, slots, maxIterations);
+  // The closed form's scatter (when it converged) tells the simulation which constants the data can pin down.
+  const closed = out.closedForm?.fit;
+  const variance = closed?.converged && closed.dof >= 1 ? closed.rss / closed.dof : undefined;
+  const simulated = fitSimulation(input, apparent, y, weights, slots, maxIterations, variance);
   if ('issue' in simulated) issues.push(simulated.issue);
   else out.simulation = simulated;
   return out;
@@ -247,6 +250,7 @@ function fitSimulation(
   weights: readonly number[] | undefined,
   slots: readonly [number, number][],
   maxIterations: number,
+  variance: number | undefined,
 ): (TimeCourseModelFit & { fixed: { name: string; value: number }[] }) | { issue: FitIssue } {
   const { mechanism, data } = input;
   const record = recordElementary(input);
@@ -289,10 +293,12 @@ function fitSimulation(
     return all;
   };
   const modelOf = (free: readonly string[]) => (x: readonly number[]) => pick(curvesOf(valuesOf(free, x)), slots);
+  const root = weights?.map(Math.sqrt);
   const free = determinedParameters(
     names,
     names.map((n) => start.get(n)!),
-    (x) => modelOf(names)(x),
+    (x) => modelOf(names)(x).map((v, i) => v * (root?.[i] ?? 1)),
+    variance,
   );
   if (free.length === 0)
     return { issue: { kind: 'not-identifiable', message: 'the time course is not sensitive to any rate constant' } };
