@@ -154,4 +154,15 @@ await time('Levenberg–Marquardt: NIST Thurber from start 1 (numeric Jacobian)'
   console.log(`  simulation:  ${show(tc.simulation)}; held ${tc.simulation?.fixed.map((x) => x.name).join(', ')}`);
   const trueNames = ['k_1', 'k_-1', 'k_2', 'k_-2', 'k_3', 'k_4', 'k_-4', 'k_5', 'k_-5'];
   console.log(`  true: ${trueNames.map((n, j) => `${n} ${truth[j]}`).join(', ')}`);
+  // What one run can determine: k_cat/K_M = k1 k2 k3 / (k-1 k-2 + k-1 k3 + k2 k3) and K_S = 1/K_M,
+  // k_cat = k2 k3 k4 / (k2 k3 + k2 k4 + k-2 k4 + k3 k4) (the steady state of the chain, by hand).
+  const [k1, km1, k2, km2, k3, k4] = truth as [number, number, number, number, number, number];
+  const kOverKm = (k1 * k2 * k3) / (km1 * km2 + km1 * k3 + k2 * k3);
+  const kcat = (k2 * k3 * k4) / (k2 * k3 + k2 * k4 + km2 * k4 + k3 * k4);
+  console.log(`  true apparent: k_obs ${kOverKm.toPrecision(3)}, K_S ${(kOverKm / kcat).toPrecision(3)}`);
+  for (const [what, m] of [
+    ['closed form', tc.closedForm],
+    ['simulation', tc.simulation],
+  ] as const)
+    if (m?.unreliable) console.log(`  ${what} marked unreliable: ${m.unreliable.join('; ')}`);
 }
