@@ -6,7 +6,7 @@
  * or its curves miss the data far beyond their stated uncertainties (χ² in its 0.1 % tail).
  */
 import { describe, expect, it } from 'vitest';
-import { deriveMechanism, fitDerivation, type TimeCourseData } from '../../../src/engine/index.ts';
+import { deriveMechanism, fitDerivation, fitSystem, type TimeCourseData } from '../../../src/engine/index.ts';
 import { fitTimeCourse } from '../../../src/engine/fitting/time-course-fit.ts';
 import { timeCourseInput } from '../../../src/engine/fit-record.ts';
 import { fitsJson } from '../../../src/render/report/fits-json.ts';
@@ -78,5 +78,22 @@ describe('time-course fits that are not to be trusted', () => {
     expect(tc.simulation!.unreliable).toBeUndefined();
     expect(tc.simulation!.fit.parameters[0]!.value).toBeCloseTo(0.012, 4);
     expect(fitted.diagnostics.filter((d) => d.rule === 'fit/not-identifiable')).toEqual([]);
+  });
+
+  it('a favoured rival whose fit ran to its window edge is not rejected outright: a warning that says why', () => {
+    // data from k = 0.05 s^-1; the favoured record starts at 1e-5, so its ×1000 window stops at 0.01
+    const data = course((t) => 1e-3 * Math.exp(-0.05 * t));
+    const rival = (id: string, k: number, status: 'favoured' | 'proposed') => {
+      const r = loadRecordSource(
+        `content/mechanisms/${id}.yaml`,
+        source.replace('k: 0.01 s^-1', `k: ${k} s^-1`).replace('status: proposed', `status: ${status}`),
+      ).record!;
+      const d = deriveMechanism(r, { simulate: false });
+      return { id, status, record: r, derivation: fitDerivation(d, r, [data]), data: [data] };
+    };
+    const fits = fitSystem([rival('slow-start', 1e-5, 'favoured'), rival('near-start', 0.04, 'proposed')]);
+    const found = fits.diagnostics.get('slow-start')!.filter((d) => d.rule === 'fit/rival-rejected');
+    expect(found.map((d) => d.severity)).toEqual(['warning']);
+    expect(found[0]!.message).toMatch(/time-course fit of slow-start is unreliable/);
   });
 });
