@@ -13,7 +13,9 @@ export function favouredSentence(set: DataSetFitsJson): string | undefined {
   const best = set.favoured;
   const ranked = set.rivals.filter((r) => r.weight !== undefined);
   if (!best || ranked.length === 0) return undefined;
-  if (ranked.length === 1) return `only ${best.record} could be fitted to ${set.observation}`;
+  const shaky = ranked.filter((r) => r.unreliable).map((r) => r.record);
+  if (ranked.length === 1)
+    return `only ${best.record} could be fitted to ${set.observation}${shaky.length > 0 ? ', and its fit is unreliable' : ''}`;
   const close = ranked.filter((r) => r.record !== best.record && (r.delta_aicc ?? Infinity) < 2);
   const weight = `Akaike weight ${weightText(best.weight)}`;
   if (close.length > 0)
@@ -21,7 +23,6 @@ export function favouredSentence(set: DataSetFitsJson): string | undefined {
   const rows = set.drivers?.length
     ? `; rows ${listText(set.drivers.map(String))} of ${set.observation} drive it most`
     : '';
-  const shaky = ranked.filter((r) => r.unreliable).map((r) => r.record);
   const caveat = shaky.length > 0 ? ` — but the fit of ${listText(shaky)} is unreliable, so the ranking is too` : '';
   return `the data favour ${best.record}: ${weight}${rows}${caveat}`;
 }
