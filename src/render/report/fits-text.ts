@@ -92,6 +92,15 @@ function rivalLines(r: RivalFitJson): string[] {
     head,
     ...r.parameters.map((q) => `    ${valueText(q)}`),
     `    RSS ${numberText(r.rss ?? NaN)}, AICc ${numberText(r.aicc ?? NaN, 4)}, BIC ${numberText(r.bic ?? NaN, 4)}${ranked}${r.rejected ? ' — rejected by these data' : ''}${r.converged ? '' : ' — did not converge'}`,
+    ...(r.fixed && Object.keys(r.fixed).length > 0
+      ? [
+          `    held, as these data cannot determine them (the fitted values above depend on them): ${Object.entries(
+            r.fixed,
+          )
+            .map(([name, value]) => `${name} = ${numberText(value, 3)}`)
+            .join(', ')}`,
+        ]
+      : []),
     ...(r.issue ? [`    ${r.issue}`] : []),
     ...(r.unreliable ? [`    unreliable, do not read these constants as measured: ${r.unreliable}`] : []),
   ];
