@@ -15,9 +15,9 @@ import { fitArrhenius, fitEyring } from './fitting/activation-parameters.ts';
 import { fitInitialRateOrders } from './fitting/initial-rate-orders.ts';
 import type { InitialRateData, KineticData, TimeCourseData } from './fitting/kinetic-data.ts';
 import { fitLawToRates, missingSymbols, pointConcentrations } from './fitting/law-fit.ts';
-import { lawFunction, restrictLaw, unseenConstants } from './fitting/law-function.ts';
+import { lawFunction, restrictLaw, steadyTermConstants, unseenConstants } from './fitting/law-function.ts';
 import type { DataSetFits, LawFitResult, RecordFits } from './fitting/record-fits.ts';
-import { fitTimeCourse, type TimeCourseInput } from './fitting/time-course-fit.ts';
+import { fitTimeCourse, type TimeCourseFit, type TimeCourseInput } from './fitting/time-course-fit.ts';
 import { checkObservations } from './observations/check-observations.ts';
 import { contradiction, openVerdict, type ObservationCheck } from './observations/judge-order.ts';
 import { isFittedCheck, observationsWithFittedOrders, type FittedOrders } from './observations/fitted-orders.ts';
@@ -66,7 +66,10 @@ export function fitDerivation(
       }
     } else {
       const input = timeCourseInput(derivation, record, set, observationIndex);
-      if (input) fits.timeCourse = fitTimeCourse(input);
+      if (input) {
+        fits.timeCourse = fitTimeCourse(input);
+        diagnostics.push(...timeCourseReliability(fits.timeCourse, set.observation, observationIndex));
+      }
     }
     dataSets.push(fits);
   }
@@ -235,6 +238,29 @@ function identifiability(laws: readonly LawFitResult[], observation: string, ind
   });
 }
 
+/** fit/not-identifiable warnings for a time-course fit that is not to be trusted: one per model (closed form, simulation). */
+function timeCourseReliability(fit: TimeCourseFit, observation: string, index: number): Diagnostic[] {
+  const models = [
+    ['closed-form law', fit.closedForm],
+    ['mass-action simulation', fit.simulation],
+  ] as const;
+  return models.flatMap(([what, m]) =>
+    m?.unreliable
+      ? [
+          diagnostic(
+            'fit/not-identifiable',
+            'warning',
+            `observation ${observation}: the ${what} fit of the time course is unreliable: ${m.unreliable.join('; ')}`,
+            {
+              path: ['observations', index, 'data'],
+              note: 'do not read its constants as measured; measure where the missing constants matter, or give the steps better starting constants',
+            },
+          ),
+        ]
+      : [],
+  );
+}
+
 /** The barrier the record gives for a measured constant: a step's for k_label, the energetic span for k_obs. */
 function recordedBarrier(
   derivation: Derivation,
@@ -300,7 +326,8 @@ export function timeCourseInput(
       if (symbol && !fixed.has(symbol)) atStart.set(symbol, start.get(s) ?? 0);
     }
     const unseen = unseenConstants(primary, [atStart]);
-    const free = fn.constants.filter((c) => !unseen.includes(c));
+    const steady = steadyTermConstants(primary, new Set(fixed.keys()));
+    const free = fn.constants.filter((c) => !unseen.includes(c) && !steady.includes(c));
     if (fn.symbols.every((s) => fixed.has(s) || moving.has(s)))
       input.law = { fn: restrictLaw(fn, free, known), definitions, known, fixed, symbolOf };
   }

@@ -70,11 +70,14 @@ export function fitSystem(rivals: readonly SystemRival[]): SystemFits {
         if (!r.rejected || rival.status === 'withdrawn') continue;
         const best = d.ranking.rivals[0]!;
         const list = diagnostics.get(rival.id) ?? [];
+        // A time-course fit that cannot be trusted (its own or the best rival's) cannot reject anyone outright.
+        const shaky = [r.record, best.record].filter((id) => unreliableCourse(d, id));
+        const caveat = shaky.length > 0 ? ` — but the time-course fit of ${shaky.join(' and ')} is unreliable` : '';
         list.push(
           diagnostic(
             'fit/rival-rejected',
-            rival.status === 'favoured' ? 'error' : 'warning',
-            `the data of observation ${d.observation}${d.owner === rival.id ? '' : ` (record ${d.owner})`} reject this proposal: Akaike weight ${r.pairwiseWeight.toPrecision(2)} against ${best.record} (ΔAICc ${r.deltaAicc.toFixed(1)})`,
+            rival.status === 'favoured' && shaky.length === 0 ? 'error' : 'warning',
+            `the data of observation ${d.observation}${d.owner === rival.id ? '' : ` (record ${d.owner})`} reject this proposal: Akaike weight ${r.pairwiseWeight.toPrecision(2)} against ${best.record} (ΔAICc ${r.deltaAicc.toFixed(1)})${caveat}`,
             {
               path: ['status'],
               note:
@@ -87,6 +90,12 @@ export function fitSystem(rivals: readonly SystemRival[]): SystemFits {
         diagnostics.set(rival.id, list);
       }
   return { dataSets, diagnostics };
+}
+
+/** Whether a rival's fit to a time course (the one ranked: simulation, else closed form) is marked unreliable. */
+function unreliableCourse(set: SystemDataSet, record: string): boolean {
+  const tc = set.fits.find((f) => f.record === record)?.timeCourse;
+  return (tc?.simulation ?? tc?.closedForm)?.unreliable !== undefined;
 }
 
 function fitDataSet(owner: SystemRival, set: KineticData, rivals: readonly SystemRival[]): SystemDataSet {

@@ -40,6 +40,8 @@ export interface RivalFitJson {
   rejected?: boolean;
   correlation?: number[][];
   issue?: string;
+  /** why the fit is not to be trusted (a time course that did not converge, an unbounded constant, a misfit) */
+  unreliable?: string;
 }
 
 /** One data set of the system with every rival fitted to it. */

@@ -64,7 +64,9 @@ export function systemFitViews(sets: readonly SystemDataSet[] | undefined): Syst
         ...(r.bic !== undefined && { bic: numberText(r.bic, 4) }),
         ...(r.weight !== undefined && { weight: weightText(r.weight) }),
         rejected: r.rejected === true,
-        ...(r.issue && { issue: r.issue }),
+        ...((r.issue || r.unreliable) && {
+          issue: [r.unreliable && `Unreliable fit: ${r.unreliable}`, r.issue].filter(Boolean).join('; '),
+        }),
       })),
     };
     const sentence = favouredSentence(json);

@@ -1,7 +1,7 @@
 /**
- * The two probability distributions a least-squares report needs: Student's t for confidence
- * intervals and Fisher's F for comparing nested models. Quantiles come from jstat, a well-kept
- * statistics package, rather than from a table.
+ * The probability distributions a least-squares report needs: Student's t for confidence
+ * intervals, Fisher's F for comparing nested models and χ² for judging a fit against stated
+ * uncertainties. Quantiles come from jstat, a well-kept statistics package, rather than from a table.
  */
 import jStat from 'jstat';
 
@@ -28,4 +28,12 @@ export function fTailProbability(f: number, df1: number, df2: number): number {
   if (f <= 0) return 1;
   if (!Number.isFinite(f)) return 0;
   return Math.min(1, Math.max(0, 1 - jStat.centralF.cdf(f, df1, df2)));
+}
+
+/** The upper tail probability P(χ² ≥ x) with ν degrees of freedom (NaN for ν < 1). */
+export function chiSquareTailProbability(x: number, dof: number): number {
+  if (!(dof >= 1) || Number.isNaN(x)) return NaN;
+  if (x <= 0) return 1;
+  if (!Number.isFinite(x)) return 0;
+  return Math.min(1, Math.max(0, 1 - jStat.chisquare.cdf(x, dof)));
 }

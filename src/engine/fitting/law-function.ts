@@ -74,3 +74,20 @@ export function restrictLaw(law: LawFunction, free: readonly string[], held: Rea
     },
   };
 }
+
+/**
+ * The constants of the law's denominator whose every term reads only concentrations held through
+ * a run (an inhibitor's K_I at one [I]): such a term only rescales the law's other constants
+ * (divide through by 1 + K_I[I]), so one run cannot determine it and it is held, not fitted.
+ */
+export function steadyTermConstants(law: NormalisedLaw, held: ReadonlySet<string>): string[] {
+  const moving = new Set<string>();
+  const inFactors = new Set<string>();
+  for (const t of law.numerator) if (t.constant !== undefined) moving.add(t.constant);
+  for (const t of law.factors.flatMap((f) => f.terms)) {
+    if (t.constant === undefined) continue;
+    inFactors.add(t.constant);
+    if (!t.concentrations.symbols().every((s) => held.has(s))) moving.add(t.constant);
+  }
+  return law.constants.map((c) => c.name).filter((c) => inFactors.has(c) && !moving.has(c));
+}

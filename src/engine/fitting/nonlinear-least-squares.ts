@@ -21,6 +21,8 @@ export interface NonlinearOptions {
   tolerance?: number;
   /** relative step of the central differences where the problem has no Jacobian (default ∛ε; larger for a model computed by an integrator) */
   differenceStep?: number;
+  /** iterations between convergence checks (default 25); fewer for a model that is costly to evaluate */
+  round?: number;
 }
 
 const ROUND = 25;
@@ -75,7 +77,7 @@ export function fitNonlinear(problem: NonlinearProblem, options: NonlinearOption
   // round that found nothing better.
   let damping = 1e-3;
   while (iterations < maxIterations && damping < 1e12) {
-    const steps = Math.min(ROUND, maxIterations - iterations);
+    const steps = Math.min(options.round ?? ROUND, maxIterations - iterations);
     const next = runRound(phi, steps, damping, phiModel, phiJacobian, scaledY);
     iterations += steps;
     const nextRss = sumOfSquares(phiModel(next), scaledY);

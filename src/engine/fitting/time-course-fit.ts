@@ -19,6 +19,7 @@ import type { LawFunction } from './law-function.ts';
 import type { NonlinearFit } from './nonlinear-fit.ts';
 import { fitNonlinear } from './nonlinear-least-squares.ts';
 import { determinedParameters } from './determined-parameters.ts';
+import { unreliableReasons } from './time-course-reliability.ts';
 
 /** One model's fit to a time course, with its curves at the measured times. */
 export interface TimeCourseModelFit {
@@ -26,11 +27,13 @@ export interface TimeCourseModelFit {
   criteria: InformationCriteria;
   /** per measured species, the model's concentration at each time / M */
   curves: number[][];
+  /** why the fit is not to be trusted (not converged, a constant unbounded, a misfit); absent when it stands */
+  unreliable?: string[];
 }
 
 /** The two fits of one time course. */
 export interface TimeCourseFit {
-  closedForm?: TimeCourseModelFit;
+  closedForm?: TimeCourseModelFit & { fixed: { name: string; value: number }[] };
   simulation?: TimeCourseModelFit & { fixed: { name: string; value: number }[] };
   issues: FitIssue[];
 }
@@ -59,6 +62,9 @@ export interface TimeCourseInput {
 }
 
 const SUBSTEPS = 20;
+// Iterations between convergence checks: each costs an integration per parameter, so a fit already
+// at its minimum (the simulation started from the closed form's constants) stops after a few.
+const ROUND = 5;
 const WINDOW = 1e3;
 // The integrator's tolerances: relative 1e-6 and absolute 1e-8 of the largest starting
 // concentration, far below any measured noise; tighter ones only slow every fit (1.2 s against
@@ -78,26 +84,42 @@ export function fitTimeCourse(input: TimeCourseInput, maxIterations = 60): TimeC
     const curvesOf = (values: readonly number[]) => integrateLaw(input, law, values);
     const initial = law.fn.constants.map((c) => law.known.get(c) ?? NaN);
     if (initial.every((v) => v > 0 && Number.isFinite(v))) {
-      const parameters = law.fn.constants.map((name, j) => ({ name, initial: initial[j]!, positive: true }));
-      const model = (values: readonly number[]) => pick(curvesOf(values), slots);
-      const fit = fitNonlinear({ parameters, model, y, ...(weights && { weights }) }, { maxIterations });
-      const values = fit.parameters.map((p) => p.value);
+      // A constant the curves cannot tell from the others (K_I with [I] held all run long: it
+      // only rescales k_obs and K_S) is held at its start, or the fit wanders along the ridge.
+      const names = law.fn.constants;
+      const free = determinedParameters(names, initial, (v) => pick(curvesOf(v), slots));
+      const valuesOf = (x: readonly number[]) =>
+        names.map((n, j) => (free.includes(n) ? x[free.indexOf(n)]! : initial[j]!));
+      const parameters = free.map((name) => ({ name, initial: initial[names.indexOf(name)]!, positive: true }));
+      const model = (x: readonly number[]) => pick(curvesOf(valuesOf(x)), slots);
+      const fit = fitNonlinear({ parameters, model, y, ...(weights && { weights }) }, { maxIterations, round: ROUND });
+      const values = valuesOf(fit.parameters.map((p) => p.value));
       out.closedForm = {
         fit,
         criteria: leastSquaresCriteria(fit.rss, fit.n, parameters.length),
         curves: curvesOf(values),
+        fixed: names.flatMap((name, j) => (free.includes(name) ? [] : [{ name, value: initial[j]! }])),
+        ...reliability(fit, weights !== undefined),
       };
       // Only what the closed form determined starts the simulation; the rest keep the record's values.
-      const determined = law.fn.constants.flatMap((c, j) =>
-        fit.converged && fit.parameters[j]!.identifiable ? [[c, values[j]!] as const] : [],
+      const determined = fit.parameters.flatMap((p) =>
+        fit.converged && p.identifiable ? [[p.name, p.value] as const] : [],
       );
       if (determined.length > 0) apparent = new Map(determined);
     } else issues.push({ kind: 'model-failed', message: 'the law has no starting constants (give the steps k and K)' });
   }
-  const simulated = fitSimulation(input, apparent, y, weights, slots, maxIterations);
+  // The closed form's scatter (when it converged) tells the simulation which constants the data can pin down.
+  const closed = out.closedForm?.fit;
+  const variance = closed?.converged && closed.dof >= 1 ? closed.rss / closed.dof : undefined;
+  const simulated = fitSimulation(input, apparent, y, weights, slots, maxIterations, variance);
   if ('issue' in simulated) issues.push(simulated.issue);
   else out.simulation = simulated;
   return out;
+}
+
+function reliability(fit: NonlinearFit, weighted: boolean): { unreliable?: string[] } {
+  const reasons = unreliableReasons(fit, weighted);
+  return reasons.length > 0 ? { unreliable: reasons } : {};
 }
 
 /** The measured values in one vector, with where each came from (species j, point i). */
@@ -231,6 +253,7 @@ function fitSimulation(
   weights: readonly number[] | undefined,
   slots: readonly [number, number][],
   maxIterations: number,
+  variance: number | undefined,
 ): (TimeCourseModelFit & { fixed: { name: string; value: number }[] }) | { issue: FitIssue } {
   const { mechanism, data } = input;
   const record = recordElementary(input);
@@ -273,17 +296,19 @@ function fitSimulation(
     return all;
   };
   const modelOf = (free: readonly string[]) => (x: readonly number[]) => pick(curvesOf(valuesOf(free, x)), slots);
+  const root = weights?.map(Math.sqrt);
   const free = determinedParameters(
     names,
     names.map((n) => start.get(n)!),
-    (x) => modelOf(names)(x),
+    (x) => modelOf(names)(x).map((v, i) => v * (root?.[i] ?? 1)),
+    variance,
   );
   if (free.length === 0)
     return { issue: { kind: 'not-identifiable', message: 'the time course is not sensitive to any rate constant' } };
   const parameters = free.map((name) => ({ name, initial: start.get(name)!, positive: true }));
   const fit = fitNonlinear(
     { parameters, model: modelOf(free), y, ...(weights && { weights }) },
-    { maxIterations, differenceStep: 1e-4 },
+    { maxIterations, differenceStep: 1e-4, round: ROUND },
   );
   const fitted = valuesOf(
     free,
@@ -304,6 +329,7 @@ function fitSimulation(
     fit,
     criteria: leastSquaresCriteria(fit.rss, fit.n, parameters.length),
     curves: curvesOf(fitted),
+    ...reliability(fit, weights !== undefined),
     fixed: names.filter((n) => !free.includes(n)).map((name) => ({ name, value: start.get(name)! })),
   };
 }

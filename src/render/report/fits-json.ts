@@ -151,7 +151,10 @@ function lawJson(record: string, l: LawFitResult): RivalFitJson {
 }
 
 function modelJson(record: string, method: string, m: TimeCourseModelFit): RivalFitJson {
-  return fitJson(record, method, m.fit, m.criteria, new Map());
+  return {
+    ...fitJson(record, method, m.fit, m.criteria, new Map()),
+    ...(m.unreliable && { unreliable: m.unreliable.join('; ') }),
+  };
 }
 
 function fitJson(

@@ -13,7 +13,9 @@ export function favouredSentence(set: DataSetFitsJson): string | undefined {
   const best = set.favoured;
   const ranked = set.rivals.filter((r) => r.weight !== undefined);
   if (!best || ranked.length === 0) return undefined;
-  if (ranked.length === 1) return `only ${best.record} could be fitted to ${set.observation}`;
+  const shaky = ranked.filter((r) => r.unreliable).map((r) => r.record);
+  if (ranked.length === 1)
+    return `only ${best.record} could be fitted to ${set.observation}${shaky.length > 0 ? ', and its fit is unreliable' : ''}`;
   const close = ranked.filter((r) => r.record !== best.record && (r.delta_aicc ?? Infinity) < 2);
   const weight = `Akaike weight ${weightText(best.weight)}`;
   if (close.length > 0)
@@ -21,7 +23,8 @@ export function favouredSentence(set: DataSetFitsJson): string | undefined {
   const rows = set.drivers?.length
     ? `; rows ${listText(set.drivers.map(String))} of ${set.observation} drive it most`
     : '';
-  return `the data favour ${best.record}: ${weight}${rows}`;
+  const caveat = shaky.length > 0 ? ` — but the fit of ${listText(shaky)} is unreliable, so the ranking is too` : '';
+  return `the data favour ${best.record}: ${weight}${rows}${caveat}`;
 }
 
 /** A weight as a chemist reads it: 0.97, 0.003, < 0.001. */
@@ -89,7 +92,17 @@ function rivalLines(r: RivalFitJson): string[] {
     head,
     ...r.parameters.map((q) => `    ${valueText(q)}`),
     `    RSS ${numberText(r.rss ?? NaN)}, AICc ${numberText(r.aicc ?? NaN, 4)}, BIC ${numberText(r.bic ?? NaN, 4)}${ranked}${r.rejected ? ' — rejected by these data' : ''}${r.converged ? '' : ' — did not converge'}`,
+    ...(r.fixed && Object.keys(r.fixed).length > 0
+      ? [
+          `    held, as these data cannot determine them (the fitted values above depend on them): ${Object.entries(
+            r.fixed,
+          )
+            .map(([name, value]) => `${name} = ${numberText(value, 3)}`)
+            .join(', ')}`,
+        ]
+      : []),
     ...(r.issue ? [`    ${r.issue}`] : []),
+    ...(r.unreliable ? [`    unreliable, do not read these constants as measured: ${r.unreliable}`] : []),
   ];
 }
 
