@@ -7,8 +7,7 @@
  */
 import { existsSync, statSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
-import { dirname, join, relative, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { join, relative, resolve } from 'node:path';
 import { catalogueCache, findRecordFiles, loadCatalogue, recordFileProblems } from '../catalogue/index.ts';
 import type { CatalogueReport } from '../model/index.ts';
 import { diagnosticRow, summaryLine } from '../render/index.ts';
@@ -18,18 +17,8 @@ import { checkOutFolder } from './out-folder.ts';
 import { PathError, UsageError, type Output } from './output.ts';
 import { clearStaleSiblings, swapSiteInto } from './swap-site.ts';
 import { threadDeriver } from './derivation-pool.ts';
+import { packageRoot } from './package-root.ts';
 import { progressLine } from './progress.ts';
-
-/** The package's own folder (where astro.config.mjs is), from this file's place in src/cli/ or lib/. */
-function packageRoot(): string {
-  let dir = dirname(fileURLToPath(import.meta.url));
-  while (!existsSync(join(dir, 'astro.config.mjs'))) {
-    const parent = dirname(dir);
-    if (parent === dir) throw new Error('cannot find the package folder (astro.config.mjs)');
-    dir = parent;
-  }
-  return dir;
-}
 
 export interface BuildOptions {
   content: string;
