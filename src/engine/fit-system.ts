@@ -139,7 +139,8 @@ function fitDataSet(owner: SystemRival, set: KineticData, rivals: readonly Syste
   if (set.kind === 'initial_rates') {
     out.drivers = drivers(set, fits, ranking);
     const laws = fittedLaws(owner, set, index, fits, ranking, rivals);
-    const next = suggest(laws);
+    // A measurement is suggested only among live rivals: not a withdrawn record, nor one disfavoured for a recorded reason.
+    const next = suggest(laws.filter((l) => isLive(rivals.find((r) => r.id === l.record))));
     if (next) out.next = next;
     const orders = owner.derivation.fits?.dataSets.find((d) => d.observation === set.observation)?.orders;
     const plot = initialRatePlot(
@@ -243,6 +244,12 @@ function fittedLaws(
     });
   }
   return out;
+}
+
+/** Whether a rival is still argued for: not withdrawn, and not disfavoured for a recorded reason. */
+function isLive(rival: SystemRival | undefined): boolean {
+  if (!rival) return false;
+  return rival.status !== 'withdrawn' && !(rival.status === 'disfavoured' && rival.record.status_reason !== undefined);
 }
 
 /** The next measurement for the surviving rivals of an initial-rate table. */
