@@ -46,7 +46,9 @@ function build(
 
 describe('build refuses a folder it must not replace', () => {
   it('the content folder, and one above it', () => {
-    const content = mkdtempSync(join(tmpdir(), 'mechatlas-content-'));
+    // The content one level down in a folder of its own, so the folder above it holds nothing else
+    // that a build must not replace (the system's temporary folder may hold the working folder).
+    const content = join(mkdtempSync(join(tmpdir(), 'mechatlas-content-')), 'records');
     cpSync(CONTENT, content, { recursive: true });
     const before = tree(content);
     for (const out of [content, join(content, '..')]) {
