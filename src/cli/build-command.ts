@@ -5,16 +5,16 @@
  * swapped in at the end, so nothing in the out folder changes unless the build succeeds, and the
  * out folder is checked first (out-folder.ts): a build never replaces what it did not make.
  */
-import { existsSync, statSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
-import { join, relative, resolve } from 'node:path';
-import { catalogueCache, findRecordFiles, loadCatalogue, recordFileProblems } from '../catalogue/index.ts';
+import { join, relative } from 'node:path';
+import { catalogueCache, loadCatalogue, recordFileProblems } from '../catalogue/index.ts';
 import type { CatalogueReport } from '../model/index.ts';
 import { diagnosticRow, summaryLine } from '../render/index.ts';
 import { withBuildWorkspace } from './build-workspace.ts';
+import { contentFolder } from './content-folder.ts';
 import { EXIT } from './exit-status.ts';
 import { checkOutFolder } from './out-folder.ts';
-import { PathError, UsageError, type Output } from './output.ts';
+import type { Output } from './output.ts';
 import { clearStaleSiblings, swapSiteInto } from './swap-site.ts';
 import { threadDeriver } from './derivation-pool.ts';
 import { packageRoot } from './package-root.ts';
@@ -35,12 +35,7 @@ export interface BuildOptions {
 /** Builds the site; exit 1 only with --strict and errors in some record. */
 export async function buildCommand(options: BuildOptions, out: Output): Promise<number> {
   const cwd = process.cwd();
-  const content = resolve(options.content);
-  if (!existsSync(content) || !statSync(content).isDirectory())
-    throw new UsageError(`no such folder: ${options.content}`);
-  const { files } = await findRecordFiles([content]);
-  if (files.length === 0)
-    throw new PathError(`${options.content} holds no records (*.yaml or *.yml files); is it the right folder?`);
+  const { content, files } = await contentFolder(options.content);
   const root = packageRoot();
   const target = checkOutFolder(options.out, { content, packageRoot: root, cwd, force: options.force });
   // Files whose name cannot be a page (an unsafe or doubled id) are left out of the site; say so here.

@@ -8,13 +8,12 @@
  * diagnostics of what was just saved. Nothing is sent anywhere:
  * Astro's usage reporting and its check for a newer version are turned off before Astro loads.
  */
-import { existsSync, statSync } from 'node:fs';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join, resolve, sep } from 'node:path';
-import { findRecordFiles } from '../catalogue/index.ts';
+import { contentFolder } from './content-folder.ts';
 import { EXIT } from './exit-status.ts';
-import { PathError, UsageError, type Output } from './output.ts';
+import { UsageError, type Output } from './output.ts';
 import { packageRoot } from './package-root.ts';
 
 export interface LiveOptions {
@@ -64,12 +63,7 @@ export async function liveCommand(
   until: Promise<void> = stopRequested(),
 ): Promise<number> {
   const cwd = process.cwd();
-  const content = resolve(options.content);
-  if (!existsSync(content) || !statSync(content).isDirectory())
-    throw new UsageError(`no such folder: ${options.content}`);
-  const { files } = await findRecordFiles([content]);
-  if (files.length === 0)
-    throw new PathError(`${options.content} holds no records (*.yaml or *.yml files); is it the right folder?`);
+  const { content } = await contentFolder(options.content);
   if (!Number.isInteger(options.port) || options.port < 0 || options.port > 65535)
     throw new UsageError('--port must be a whole number from 0 to 65535');
   const root = packageRoot();

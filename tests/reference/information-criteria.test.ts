@@ -11,7 +11,7 @@ import {
   leastSquaresLogLikelihood,
 } from '../../src/engine/fitting/index.ts';
 
-describe('the numerical example of J. Weiss, ECOL 145 lecture 17 (University of North Carolina, 2006)', () => {
+describe('the numerical example in J. Weiss, ECOL 145 course notes on model selection (University of North Carolina, 2006)', () => {
   // "A numerical example": five models with their maximised log-likelihoods and K; the page prints
   // AIC, AICc, Δ and the Akaike weights to two or three decimals. It does not print n; n = 47 is the
   // only sample size that reproduces both AICc columns (K = 3 and K = 5) to the printed digits.

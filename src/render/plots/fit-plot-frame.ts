@@ -4,6 +4,7 @@
  * print; pure and deterministic.
  */
 import { niceTicks } from './axis-ticks.ts';
+import { powerOfTen } from './time-axis.ts';
 import { markerSvg, strokeAttributes, type CurveStyle } from './curve-style.ts';
 import { coordinate as c, escapeXml } from './svg-text.ts';
 import { numberText } from '../words/index.ts';
@@ -119,26 +120,9 @@ function ticks(axis: Axis): number[] {
 function tickLabel(v: number, log: boolean): string {
   if (log) {
     const e = Math.log10(v);
-    if (Math.abs(e - Math.round(e)) < 1e-9) return `10${superscript(String(Math.round(e)))}`;
+    if (Math.abs(e - Math.round(e)) < 1e-9) return powerOfTen(Math.round(e));
   }
   return escapeXml(numberText(v, 3));
-}
-
-function superscript(text: string): string {
-  const map: Record<string, string> = {
-    '-': '⁻',
-    '0': '⁰',
-    '1': '¹',
-    '2': '²',
-    '3': '³',
-    '4': '⁴',
-    '5': '⁵',
-    '6': '⁶',
-    '7': '⁷',
-    '8': '⁸',
-    '9': '⁹',
-  };
-  return [...text].map((ch) => map[ch] ?? ch).join('');
 }
 
 function truncate(text: string, n: number): string {

@@ -3,6 +3,7 @@
  * 10ⁿ where there is room), or round values on a linear axis in the unit that keeps the
  * numbers short (s, min, h, d).
  */
+import { superscript } from '../words/index.ts';
 import { niceTicks } from './axis-ticks.ts';
 
 /** A labelled tick at `value` (in the axis unit). */
@@ -17,23 +18,9 @@ export interface AxisTicks {
   minor: number[];
 }
 
-const SUPERSCRIPT: Record<string, string> = {
-  '-': '⁻',
-  '0': '⁰',
-  '1': '¹',
-  '2': '²',
-  '3': '³',
-  '4': '⁴',
-  '5': '⁵',
-  '6': '⁶',
-  '7': '⁷',
-  '8': '⁸',
-  '9': '⁹',
-};
-
 /** 10ⁿ with superscript digits and a true minus: `10⁻³`. */
 export function powerOfTen(n: number): string {
-  return `10${String(n).replace(/[-0-9]/g, (d) => SUPERSCRIPT[d]!)}`;
+  return `10${superscript(String(n))}`;
 }
 
 /** Decade ticks over [lo, hi] (both > 0): every decade, or every second one beyond 8 decades. */
